@@ -1,0 +1,11 @@
+/** Jest configuration: TypeScript through ts-jest; d3's ESM modules are transformed too. */
+module.exports = {
+  testEnvironment: "node",
+  roots: ["<rootDir>/tests"],
+  testMatch: ["**/*.test.ts"],
+  transform: {
+    "^.+\\.[tj]s$": ["ts-jest", { tsconfig: "tsconfig.json", diagnostics: { warnOnly: false } }],
+  },
+  transformIgnorePatterns: ["/node_modules/(?!(d3-[^/]+|internmap)/)"],
+  testTimeout: 60000,
+};

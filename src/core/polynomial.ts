@@ -1,0 +1,44 @@
+import type { Piece, Quantity } from "./model";
+
+/**
+ * Coefficients, in powers of s = x - x0, of a quantity on a piece:
+ * V = V0 - q0 s - q1 s²/2; M = M0 + V0 s - q0 s²/2 - q1 s³/6;
+ * slope = θ0 - (M0 s + V0 s²/2 - q0 s³/6 - q1 s⁴/24)/EI; deflection = w0 + θ0 s - (...)/EI.
+ */
+export function coefficients(piece: Piece, quantity: Quantity): number[] {
+  const { shear0: v, moment0: m, slope0: th, deflection0: w, q0, q1, flexibility: f } = piece;
+  switch (quantity) {
+    case "shear":
+      return [v, -q0, -q1 / 2];
+    case "moment":
+      return [m, v, -q0 / 2, -q1 / 6];
+    case "slope":
+      return [th, -f * m, (-f * v) / 2, (f * q0) / 6, (f * q1) / 24];
+    case "deflection":
+      return [w, th, (-f * m) / 2, (-f * v) / 6, (f * q0) / 24, (f * q1) / 120];
+  }
+}
+
+/** Horner evaluation of c[0] + c[1] s + c[2] s² + ... */
+export function evaluatePolynomial(c: number[], s: number): number {
+  let value = 0;
+  for (let i = c.length - 1; i >= 0; i--) value = value * s + c[i];
+  return value;
+}
+
+export function derivative(c: number[]): number[] {
+  const d: number[] = [];
+  for (let i = 1; i < c.length; i++) d.push(i * c[i]);
+  return d;
+}
+
+/** The value of a quantity on a piece at s = x - x0, without building coefficient arrays. */
+export function pieceValue(piece: Piece, quantity: Quantity, s: number): number {
+  const { shear0: v, moment0: m, q0, q1 } = piece;
+  if (quantity === "shear") return v - s * (q0 + (q1 * s) / 2);
+  if (quantity === "moment") return m + s * (v - s * (q0 / 2 + (q1 * s) / 6));
+  const f = piece.flexibility;
+  const s2 = s * s;
+  if (quantity === "slope") return piece.slope0 - f * s * (m + s * (v / 2 - s * (q0 / 6 + (q1 * s) / 24)));
+  return piece.deflection0 + piece.slope0 * s - f * s2 * (m / 2 + s * (v / 6 - s * (q0 / 24 + (q1 * s) / 120)));
+}

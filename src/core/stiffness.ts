@@ -1,0 +1,95 @@
+import { equivalentNodalLoads, loadsBySpan, type SpanLoad } from "./elementLoads";
+import { buildLayout, elementDofs, type Layout } from "./layout";
+import type { Member } from "./model";
+
+/**
+ * The reduced stiffness system K d = f over the free DOFs, stored as the upper band of the
+ * symmetric K: entry (i, j), j >= i, sits at band[i * (halfBandwidth + 1) + (j - i)].
+ */
+export interface StiffnessSystem {
+  size: number;
+  halfBandwidth: number;
+  band: Float64Array;
+  rhs: Float64Array;
+}
+
+/** The 4x4 Euler–Bernoulli element matrix, row-major, DOFs [w1, θ1, w2, θ2]. */
+export function elementMatrix(ei: number, span: number): number[] {
+  const k = ei / (span * span * span);
+  const a = 12 * k;
+  const b = 6 * span * k;
+  const c = 4 * span * span * k;
+  const d = 2 * span * span * k;
+  return [a, b, -a, b, b, c, -b, d, -a, -b, a, -b, b, d, -b, c];
+}
+
+export interface Assembly {
+  layout: Layout;
+  system: StiffnessSystem;
+  spanLoads: SpanLoad[][];
+  nodalLoads: number[][];
+}
+
+function halfBandwidthOf(layout: Layout, spanCount: number): number {
+  let width = 0;
+  for (let e = 0; e < spanCount; e++) {
+    const dofs = elementDofs(layout, e).filter((d) => d >= 0);
+    if (dofs.length > 1) width = Math.max(width, Math.max(...dofs) - Math.min(...dofs));
+  }
+  return width;
+}
+
+/** Builds the layout, the span loads and the banded system of a (validated) member. */
+export function assembleMember(member: Member): Assembly {
+  const layout = buildLayout(member);
+  const spanCount = member.spans.length;
+  const halfBandwidth = halfBandwidthOf(layout, spanCount);
+  const stride = halfBandwidth + 1;
+  const band = new Float64Array(layout.size * stride);
+  const rhs = new Float64Array(layout.size);
+  const spanLoads = loadsBySpan(layout.nodeX, member.loads);
+  const nodalLoads: number[][] = [];
+  for (let e = 0; e < spanCount; e++) {
+    const span = member.spans[e];
+    const k = elementMatrix(layout.stiffness[e], span);
+    const dofs = elementDofs(layout, e);
+    const f = equivalentNodalLoads(spanLoads[e], span);
+    nodalLoads.push(f);
+    for (let r = 0; r < 4; r++) {
+      const i = dofs[r];
+      if (i < 0) continue;
+      rhs[i] += f[r];
+      for (let c = 0; c < 4; c++) {
+        const j = dofs[c];
+        if (j < i) continue;
+        band[i * stride + (j - i)] += k[r * 4 + c];
+      }
+    }
+  }
+  member.supports.forEach((support, node) => {
+    if (support.kind === "spring") {
+      const i = layout.deflectionDof[node];
+      band[i * stride] += support.stiffness;
+    }
+  });
+  return { layout, system: { size: layout.size, halfBandwidth, band, rhs }, spanLoads, nodalLoads };
+}
+
+/** The reduced stiffness system of a (validated) member. */
+export function assemble(member: Member): StiffnessSystem {
+  return assembleMember(member).system;
+}
+
+/** The full symmetric matrix of a banded system, for cross-checks with dense solvers. */
+export function toDense(system: StiffnessSystem): number[][] {
+  const { size, halfBandwidth, band } = system;
+  const stride = halfBandwidth + 1;
+  const dense: number[][] = [];
+  for (let i = 0; i < size; i++) dense.push(new Array<number>(size).fill(0));
+  for (let i = 0; i < size; i++) {
+    for (let j = i; j < Math.min(size, i + stride); j++) {
+      dense[i][j] = dense[j][i] = band[i * stride + (j - i)];
+    }
+  }
+  return dense;
+}

@@ -1,0 +1,103 @@
+import { invalid } from "./errors";
+import type { Load, Member } from "./model";
+
+const LOAD_KINDS = new Set(["point", "moment", "udl", "linear"]);
+const SUPPORT_KINDS = new Set(["pin", "fixed", "free", "hinge", "spring"]);
+
+function isFiniteNumber(value: unknown): value is number {
+  return typeof value === "number" && Number.isFinite(value);
+}
+
+function show(value: unknown): string {
+  return typeof value === "number" ? String(value) : JSON.stringify(value);
+}
+
+/** Total length of the member. */
+export function memberLength(spans: number[]): number {
+  let total = 0;
+  for (const span of spans) total += span;
+  return total;
+}
+
+function validateSpans(spans: number[]): void {
+  if (!Array.isArray(spans) || spans.length === 0) throw invalid("spans: give at least one span length");
+  spans.forEach((span, i) => {
+    if (!isFiniteNumber(span) || span <= 0) {
+      throw invalid(`span ${i + 1}: length must be a positive number, got ${show(span)}`);
+    }
+  });
+}
+
+function validateSupports(member: Member, length: number): void {
+  const { spans, supports } = member;
+  if (!Array.isArray(supports) || supports.length !== spans.length + 1) {
+    const count = Array.isArray(supports) ? supports.length : 0;
+    throw invalid(`supports: need ${spans.length + 1} entries (one per node, spans + 1), got ${count}`);
+  }
+  let x = 0;
+  supports.forEach((support, i) => {
+    const where = `support ${i + 1} (x = ${x})`;
+    if (!support || !SUPPORT_KINDS.has(support.kind)) {
+      throw invalid(`${where}: unknown support ${show(support && support.kind)}; use pin, fixed, free, hinge or a spring stiffness`);
+    }
+    if (support.kind === "spring") {
+      if (!isFiniteNumber(support.stiffness) || support.stiffness <= 0) {
+        throw invalid(`${where}: spring stiffness must be a positive number, got ${show(support.stiffness)}`);
+      }
+      if (member.stiffness === null) {
+        throw invalid(`${where}: a spring support needs EI, since the result depends on EI relative to the spring`);
+      }
+    }
+    if (support.kind === "hinge" && (i === 0 || i === spans.length)) {
+      throw invalid(`${where}: a hinge joins two spans, so it belongs at an interior node, not at a member end`);
+    }
+    x = i < spans.length ? roundPosition(x + spans[i], length) : x;
+  });
+}
+
+function roundPosition(x: number, length: number): number {
+  return Math.abs(x - length) <= 1e-12 * length ? length : x;
+}
+
+function validateStiffness(member: Member): void {
+  const { stiffness, spans } = member;
+  if (stiffness === null) return;
+  if (!Array.isArray(stiffness) || (stiffness.length !== spans.length && stiffness.length !== 1)) {
+    throw invalid(`EI: give one value for the member or one per span (${spans.length}), got ${Array.isArray(stiffness) ? stiffness.length : 0}`);
+  }
+  stiffness.forEach((ei, i) => {
+    if (!isFiniteNumber(ei) || ei <= 0) throw invalid(`EI of span ${i + 1}: must be a positive number, got ${show(ei)}`);
+  });
+}
+
+function validateLoad(load: Load, length: number): void {
+  const where = `load row ${load.row}`;
+  if (!LOAD_KINDS.has(load.kind)) {
+    throw invalid(`${where}: unknown load type ${show(load.kind)}; use point, moment, udl or linear`);
+  }
+  if (!isFiniteNumber(load.magnitude)) throw invalid(`${where}: magnitude must be a finite number, got ${show(load.magnitude)}`);
+  if (!isFiniteNumber(load.xStart)) throw invalid(`${where}: x start must be a finite number, got ${show(load.xStart)}`);
+  if (load.xStart < 0) throw invalid(`${where}: x start ${load.xStart} is before the member start 0`);
+  if (load.xStart > length) throw invalid(`${where}: x start ${load.xStart} is beyond the member end ${length}`);
+  if (load.kind === "point" || load.kind === "moment") return;
+  if (!isFiniteNumber(load.xEnd)) throw invalid(`${where}: x end must be a finite number, got ${show(load.xEnd)}`);
+  if (load.xEnd > length) throw invalid(`${where}: x end ${load.xEnd} is beyond the member end ${length}`);
+  if (load.xEnd <= load.xStart) throw invalid(`${where}: x end ${load.xEnd} is not beyond x start ${load.xStart}`);
+  if (load.kind === "linear" && !isFiniteNumber(load.magnitudeEnd)) {
+    throw invalid(`${where}: magnitude at end must be a finite number, got ${show(load.magnitudeEnd)}`);
+  }
+}
+
+/**
+ * Checks a member's data: positive finite spans, one support per node, known support kinds,
+ * positive springs (which need EI), hinges only between spans, EI once or per span, and
+ * loads that lie on the member. Throws a #VALUE! SpanError naming the offending item.
+ */
+export function validateMember(member: Member): void {
+  validateSpans(member.spans);
+  const length = memberLength(member.spans);
+  validateStiffness(member);
+  validateSupports(member, length);
+  if (!Array.isArray(member.loads)) throw invalid("loads: expected a list of loads");
+  for (const load of member.loads) validateLoad(load, length);
+}
