@@ -1,0 +1,129 @@
+/**
+ * The load notation: a whole load table in one text cell, one load per ";".
+ *
+ *   point P at X [case]                    point force P at x = X
+ *   moment C at X [case]                   couple C at x = X
+ *   udl W [from A] [to B] [case]           uniform load W from A (default 0) to B (default member end)
+ *   linear W1 to W2 [from A] [to B] [case] load varying from W1 at A to W2 at B
+ *
+ * Keywords are case-insensitive; numbers are plain decimals ("2.5", "-3", "1e3"); the case
+ * label is optional and last (letters and digits starting with a letter, as combinations
+ * name it). Every load-table row has exactly one text form (formatLoad): `from` is written
+ * only when x start is not 0 and `to` only when x end is not the member end.
+ */
+import { invalid, type LoadKind } from "../core";
+import { numberFromText } from "./cells";
+import { isCaseLabel, type LoadRow } from "./loadRow";
+
+const KINDS: Record<string, LoadKind> = { point: "point", moment: "moment", udl: "udl", linear: "linear" };
+
+class Tokens {
+  private index = 0;
+  constructor(
+    private readonly words: string[],
+    private readonly fail: (message: string) => never,
+  ) {}
+
+  get done(): boolean {
+    return this.index >= this.words.length;
+  }
+
+  peek(offset = 0): string | undefined {
+    return this.words[this.index + offset];
+  }
+
+  /** True (and consumed) when the next word is `keyword` followed by a number. */
+  keywordWithNumber(keyword: string): boolean {
+    const word = this.peek();
+    const next = this.peek(1);
+    if (word === undefined || word.toLowerCase() !== keyword || next === undefined || numberFromText(next) === null) return false;
+    this.index++;
+    return true;
+  }
+
+  expectKeyword(keyword: string, what: string): void {
+    const word = this.peek();
+    if (word === undefined || word.toLowerCase() !== keyword) this.fail(`expected "${keyword}" ${what}, found ${word === undefined ? "the end" : `"${word}"`}`);
+    this.index++;
+  }
+
+  number(what: string): number {
+    const word = this.peek();
+    const value = word === undefined ? null : numberFromText(word);
+    if (value === null) this.fail(`expected ${what} (a number), found ${word === undefined ? "the end" : `"${word}"`}`);
+    this.index++;
+    return value;
+  }
+
+  caseLabel(): string {
+    const word = this.peek();
+    if (word === undefined) return "";
+    if (!isCaseLabel(word)) this.fail(`"${word}" is not a case label; use letters and digits starting with a letter, such as D, L or Lr`);
+    this.index++;
+    return word;
+  }
+}
+
+function parseOne(text: string, row: number): LoadRow {
+  const fail = (message: string): never => {
+    throw invalid(`load ${row} of the loads text ("${text}"): ${message}`);
+  };
+  const tokens = new Tokens(text.split(/\s+/).filter((w) => w !== ""), fail);
+  const word = tokens.peek() ?? "";
+  const kind = KINDS[word.toLowerCase()];
+  if (!kind) fail(`"${word}" is not a load type; start with point, moment, udl or linear`);
+  tokens.expectKeyword(word.toLowerCase(), "");
+  const magnitude = tokens.number("the magnitude");
+  let xStart = 0;
+  let xEnd: number | null = null;
+  let magnitudeEnd = 0;
+  if (kind === "point" || kind === "moment") {
+    tokens.expectKeyword("at", "and the position after the magnitude");
+    xStart = tokens.number("the position after \"at\"");
+  } else {
+    if (kind === "linear") {
+      tokens.expectKeyword("to", "and the end magnitude after the start magnitude");
+      magnitudeEnd = tokens.number("the end magnitude after \"to\"");
+    }
+    if (tokens.keywordWithNumber("from")) xStart = tokens.number("x start");
+    if (tokens.keywordWithNumber("to")) {
+      const end = tokens.number("x end");
+      xEnd = end === 0 ? null : end;
+    }
+  }
+  const loadCase = tokens.caseLabel();
+  if (!tokens.done) fail(`unexpected "${tokens.peek()}" after the case label`);
+  return { kind, magnitude, xStart, xEnd, magnitudeEnd, loadCase, row, fromText: true };
+}
+
+/** Parses the load notation into rows (numbered 1, 2, ... in order). Empty pieces are skipped. */
+export function parseLoadNotation(text: string): LoadRow[] {
+  const rows: LoadRow[] = [];
+  for (const piece of text.split(";")) {
+    const trimmed = piece.trim();
+    if (trimmed !== "") rows.push(parseOne(trimmed, rows.length + 1));
+  }
+  return rows;
+}
+
+function num(value: number): string {
+  return String(value === 0 ? 0 : value);
+}
+
+/** The one text form of a load row. */
+export function formatLoad(row: LoadRow): string {
+  const parts: string[] = [row.kind, num(row.magnitude)];
+  if (row.kind === "point" || row.kind === "moment") parts.push("at", num(row.xStart));
+  else {
+    if (row.kind === "linear") parts.push("to", num(row.magnitudeEnd));
+    if (row.xStart !== 0) parts.push("from", num(row.xStart));
+    if (row.xEnd !== null && row.xEnd !== 0) parts.push("to", num(row.xEnd));
+  }
+  if (row.loadCase !== "") parts.push(row.loadCase);
+  return parts.join(" ");
+}
+
+/** The text form of a whole load table, loads joined by "; ". */
+export function formatLoadNotation(rows: LoadRow[]): string {
+  return rows.map(formatLoad).join("; ");
+}

@@ -1,0 +1,79 @@
+/**
+ * The load table: one load per row, columns type, magnitude, x start, x end, magnitude at
+ * end, case. Fewer than six columns = the missing ones blank. Wholly blank rows (every cell
+ * "", null or 0) are skipped. Row numbers in messages are 1-based rows of the given range.
+ */
+import { invalid, type LoadKind } from "../core";
+import { errorCodeOf, isBlank, isEmpty, readNumber, readText, show } from "./cells";
+import { COLUMNS, isCaseLabel, placeOf, type ColumnName, type LoadRow } from "./loadRow";
+
+const KINDS: Record<string, LoadKind> = { point: "point", moment: "moment", udl: "udl", linear: "linear" };
+
+function isBlankRow(cells: unknown[]): boolean {
+  for (const cell of cells) if (!isBlank(cell)) return false;
+  return true;
+}
+
+function readKind(cell: unknown, row: number): LoadKind {
+  const where = placeOf(row, false, "type");
+  if (isBlank(cell)) throw invalid(`${where}: the load type is blank; use point, moment, udl or linear`);
+  const code = errorCodeOf(cell);
+  if (code !== null) throw invalid(`${where}: the cell holds the error ${code}`);
+  const kind = typeof cell === "string" ? KINDS[cell.trim().toLowerCase()] : undefined;
+  if (!kind) throw invalid(`${where}: ${show(cell)} is not a load type; use point, moment, udl or linear`);
+  return kind;
+}
+
+function requireBlank(cell: unknown, row: number, column: ColumnName, why: string): void {
+  if (isBlank(cell)) return;
+  const code = errorCodeOf(cell);
+  if (code !== null) throw invalid(`${placeOf(row, false, column)}: the cell holds the error ${code}`);
+  throw invalid(`${placeOf(row, false, column)}: ${show(cell)} given, but ${why}; leave it blank`);
+}
+
+function readCase(cell: unknown, row: number): string {
+  const where = placeOf(row, false, "case");
+  if (isBlank(cell)) return "";
+  const label = readText(cell, () => where);
+  if (!isCaseLabel(label)) {
+    throw invalid(`${where}: ${show(cell)} is not a case label; use letters and digits starting with a letter, such as D, L or Lr`);
+  }
+  return label;
+}
+
+/** Reads one non-blank table row (cells beyond the sixth must be blank). */
+export function readLoadRow(cells: unknown[], row: number): LoadRow {
+  const kind = readKind(cells[0], row);
+  const number = (column: number, blank: number) => readNumber(cells[column], () => placeOf(row, false, COLUMNS[column]), blank);
+  const magnitude = number(1, 0);
+  const xStart = number(2, 0);
+  let xEnd: number | null = null;
+  let magnitudeEnd = 0;
+  if (kind === "point" || kind === "moment") {
+    requireBlank(cells[3], row, "x end", `a ${kind === "point" ? "point load" : "couple"} acts at x start only`);
+    requireBlank(cells[4], row, "magnitude at end", "only a linear load has a magnitude at end");
+  } else {
+    const end = number(3, 0);
+    xEnd = end === 0 ? null : end;
+    if (kind === "linear") magnitudeEnd = number(4, 0);
+    else requireBlank(cells[4], row, "magnitude at end", "only a linear load has a magnitude at end (a udl is uniform)");
+  }
+  const loadCase = readCase(cells[5], row);
+  for (let c = 6; c < cells.length; c++) {
+    if (!isEmpty(cells[c]) && cells[c] !== 0) {
+      throw invalid(`load row ${row}, column ${c + 1}: the load table has six columns (${COLUMNS.join(", ")}); column ${c + 1} must be blank`);
+    }
+  }
+  return { kind, magnitude, xStart, xEnd, magnitudeEnd, loadCase, row, fromText: false };
+}
+
+/** Reads every non-blank row of a load table given as rows of cells. */
+export function readLoadTable(rows: unknown[][]): LoadRow[] {
+  const loads: LoadRow[] = [];
+  for (let r = 0; r < rows.length; r++) {
+    const cells = Array.isArray(rows[r]) ? rows[r] : [rows[r]];
+    if (isBlankRow(cells)) continue;
+    loads.push(readLoadRow(cells, r + 1));
+  }
+  return loads;
+}

@@ -1,0 +1,60 @@
+/**
+ * The shared leading arguments of every SPAN function (spans, loads, supports, EI, combo)
+ * read into the solver's Member, with the combination applied.
+ */
+import { applyCombination, invalid, parseCombination, type Member } from "../core";
+import { errorCodeOf, isEmpty, show } from "./cells";
+import { readSpans, readStiffness } from "./lists";
+import type { LoadRow } from "./loadRow";
+import { toLoad } from "./loadRow";
+import { parseLoadNotation } from "./loadNotation";
+import { readLoadTable } from "./loadTable";
+import { rowsOf, singleCell } from "./ranges";
+import { readSupports } from "./supports";
+
+/** The raw member arguments as the host passes them. */
+export interface MemberArgs {
+  spans: unknown;
+  loads: unknown;
+  supports: unknown;
+  EI: unknown;
+  combo: unknown;
+}
+
+/** Load rows from a table range, or from one text cell in the load notation. */
+export function readLoads(arg: unknown): LoadRow[] {
+  const single = singleCell(arg);
+  if (single !== undefined) {
+    if (isEmpty(single) || single === 0) return [];
+    if (typeof single === "string" && errorCodeOf(single) === null) return parseLoadNotation(single);
+  }
+  return readLoadTable(rowsOf(arg));
+}
+
+/** The combination text of the combo argument ("" for none). */
+export function readComboText(arg: unknown): string {
+  const single = singleCell(arg);
+  if (single === undefined) throw invalid("combo: give one cell with a combination such as 1.2D+1.6L");
+  if (isEmpty(single) || single === 0) return "";
+  const code = errorCodeOf(single);
+  if (code !== null) throw invalid(`combo: the cell holds the error ${code}`);
+  if (typeof single !== "string") throw invalid(`combo: ${show(single)} is not a combination; write one such as 1.2D+1.6L`);
+  return single;
+}
+
+/** Reads and checks the member arguments at the cell level; physics is left to the solver. */
+export function readMember(args: MemberArgs): Member {
+  const spans = readSpans(args.spans);
+  let length = 0;
+  for (const span of spans) length += span;
+  const stiffness = readStiffness(args.EI, spans.length);
+  const supports = readSupports(args.supports, spans.length);
+  const rows = readLoads(args.loads);
+  const comboText = readComboText(args.combo);
+  const combination = comboText === "" ? null : parseCombination(comboText);
+  const loads = applyCombination(
+    rows.map((row) => toLoad(row, length)),
+    combination,
+  );
+  return { spans, supports, stiffness, loads };
+}

@@ -1,0 +1,46 @@
+/**
+ * Result shapes. x may be a cell, a row, a column or a block: the result has the same shape,
+ * with "" where an x cell is empty. Returned arrays never hold null, undefined or NaN.
+ */
+import { invalid } from "../core";
+import { isEmpty, readNumber } from "./cells";
+import { rowsOf } from "./ranges";
+
+/** Names an x cell for messages: "x" for one cell, "x row 2, column 3" in a range. */
+function xPlace(rows: unknown[][], r: number, c: number): string {
+  return rows.length === 1 && rows[0].length === 1 ? "x" : `x row ${r + 1}, column ${c + 1}`;
+}
+
+/** Checks a result value is a finite number before it reaches the sheet. */
+export function finite(value: number, what: string): number {
+  if (!Number.isFinite(value)) throw invalid(`${what} is not a finite number; check the member's data`);
+  return value;
+}
+
+/** Evaluates `at` for every non-empty x cell, keeping the shape of x. */
+export function mapPositions(x: unknown, at: (position: number) => number): (number | string)[][] {
+  const rows = rowsOf(x);
+  if (rows.length === 0) throw invalid("x: give a cell or a range of positions");
+  const width = rows.reduce((w, row) => Math.max(w, Array.isArray(row) ? row.length : 1), 0);
+  const result: (number | string)[][] = new Array(rows.length);
+  for (let r = 0; r < rows.length; r++) {
+    const row = Array.isArray(rows[r]) ? rows[r] : [rows[r]];
+    const out: (number | string)[] = new Array(width);
+    for (let c = 0; c < width; c++) {
+      const cell = c < row.length ? row[c] : "";
+      if (isEmpty(cell)) {
+        out[c] = "";
+        continue;
+      }
+      const position = readNumber(cell, () => xPlace(rows, r, c));
+      out[c] = finite(at(position), `the value at x = ${position}`);
+    }
+    result[r] = out;
+  }
+  return result;
+}
+
+/** A number for the sheet, or "" when it is not available (NaN: slope without EI). */
+export function orBlank(value: number): number | string {
+  return Number.isNaN(value) ? "" : value;
+}
