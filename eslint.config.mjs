@@ -6,7 +6,7 @@ import tseslint from "typescript-eslint";
 const hostNames = ["Office", "Excel", "CustomFunctions", "document", "window", "navigator", "fetch", "XMLHttpRequest"];
 
 export default tseslint.config(
-  { ignores: ["dist/**", "node_modules/**", "coverage/**", "test-artifacts/**", "**/*.js", "**/*.mjs"] },
+  { ignores: ["dist/**", "node_modules/**", "coverage/**", "test-artifacts/**", "tmp/**", ".certs/**", "**/*.js", "**/*.mjs"] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

@@ -8,4 +8,5 @@ module.exports = {
   },
   transformIgnorePatterns: ["/node_modules/(?!(d3-[^/]+|internmap)/)"],
   testTimeout: 60000,
+  reporters: ["default", "<rootDir>/tests/support/summary-reporter.js"],
 };
