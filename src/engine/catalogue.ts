@@ -1,0 +1,64 @@
+/**
+ * The SPAN worksheet functions as the formula engine sees them: sheet name, the JS export
+ * of functions/functions.ts that computes it, how each argument is passed (a 2-D block as the
+ * spreadsheet host passes a range, or a single value), and how the size of the spilled result
+ * is predicted from the formula text (see resultSize.ts).
+ */
+
+/** A worksheet function as functions/functions.ts exports it. */
+export type SheetFunction = (...args: any[]) => unknown[][];
+
+export type SpanExport = "reactions" | "shear" | "moment" | "slope" | "deflection" | "maxMoment" | "extremes" | "diagram";
+
+/** The function table the engine calls: the real exports, or a stand-in in tests. */
+export type SpanFunctions = Record<SpanExport, SheetFunction>;
+
+/** "block": a 2-D array like a range argument; "value": one cell value (combo, points). */
+export type ArgumentKind = "block" | "value";
+
+/** How the spill size is predicted from the formula text. */
+export type SizeRule = "perNode" | "shapeOfX" | "twoByTwo" | "extremes" | "diagram";
+
+export interface SpanFunctionEntry {
+  sheetName: string;
+  exportName: SpanExport;
+  arguments: readonly { name: string; kind: ArgumentKind; optional: boolean }[];
+  sizeRule: SizeRule;
+}
+
+const member = [
+  { name: "spans", kind: "block", optional: false },
+  { name: "loads", kind: "block", optional: false },
+] as const;
+const tail = [
+  { name: "supports", kind: "block", optional: true },
+  { name: "EI", kind: "block", optional: true },
+  { name: "combo", kind: "value", optional: true },
+] as const;
+const atX = [...member, { name: "x", kind: "block", optional: false }, ...tail] as const;
+
+export const SPAN_FUNCTIONS: readonly SpanFunctionEntry[] = [
+  { sheetName: "SPAN.REACTIONS", exportName: "reactions", arguments: [...member, ...tail], sizeRule: "perNode" },
+  { sheetName: "SPAN.SHEAR", exportName: "shear", arguments: atX, sizeRule: "shapeOfX" },
+  { sheetName: "SPAN.MOMENT", exportName: "moment", arguments: atX, sizeRule: "shapeOfX" },
+  { sheetName: "SPAN.SLOPE", exportName: "slope", arguments: atX, sizeRule: "shapeOfX" },
+  { sheetName: "SPAN.DEFLECTION", exportName: "deflection", arguments: atX, sizeRule: "shapeOfX" },
+  { sheetName: "SPAN.MAXMOMENT", exportName: "maxMoment", arguments: [...member, ...tail], sizeRule: "twoByTwo" },
+  { sheetName: "SPAN.EXTREMES", exportName: "extremes", arguments: [...member, ...tail], sizeRule: "extremes" },
+  {
+    sheetName: "SPAN.DIAGRAM",
+    exportName: "diagram",
+    arguments: [...member, { name: "points", kind: "value", optional: true }, ...tail],
+    sizeRule: "diagram",
+  },
+];
+
+export function entryFor(sheetName: string): SpanFunctionEntry | undefined {
+  const upper = sheetName.toUpperCase();
+  return SPAN_FUNCTIONS.find((entry) => entry.sheetName === upper);
+}
+
+export function argumentRange(entry: SpanFunctionEntry): string {
+  const required = entry.arguments.filter((arg) => !arg.optional).length;
+  return `${required} to ${entry.arguments.length}`;
+}

@@ -1,0 +1,45 @@
+/**
+ * Per-workbook memory of spill sizes learned by evaluation. A SPAN call is identified by the
+ * cell that holds it and the text of the call, so the same call keeps its learned size when
+ * the formula is set again, and a different call in the same cell starts afresh.
+ */
+import type { BlockSize } from "./resultSize";
+import type { SpanFunctions } from "./catalogue";
+
+export interface CellAddress {
+  sheet: number;
+  row: number;
+  col: number;
+}
+
+export interface EngineContext {
+  functions: SpanFunctions;
+  learned: Map<string, BlockSize>;
+  /** Cells whose SPAN results came out in another size than reserved: set them again. */
+  mismatched: Map<string, CellAddress>;
+  /** Called once per SPAN evaluation (progress reporting). */
+  onCall?: () => void;
+}
+
+export function cellKey(address: CellAddress): string {
+  return `${address.sheet}!${address.row}!${address.col}`;
+}
+
+export function callKey(address: CellAddress, callText: string): string {
+  return `${cellKey(address)}|${callText}`;
+}
+
+const contexts = new WeakMap<object, EngineContext>();
+
+/** The context of the workbook that owns `owner` (the engine's dependency graph). */
+export function contextOf(owner: object): EngineContext | undefined {
+  return contexts.get(owner);
+}
+
+export function attachContext(owner: object, context: EngineContext): void {
+  contexts.set(owner, context);
+}
+
+export function sameSize(a: BlockSize, b: BlockSize): boolean {
+  return a.rows === b.rows && a.cols === b.cols;
+}

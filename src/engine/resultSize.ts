@@ -1,0 +1,63 @@
+/**
+ * Spill size of a SPAN call predicted from the formula text, before anything is evaluated.
+ * The formula engine reserves the spill area from this prediction; where the text cannot tell
+ * (a spans list in one text cell, a DIAGRAM whose rows depend on the member), the prediction
+ * is a first guess and the workbook learns the true size from the first evaluation
+ * (see learnedSizes.ts and workbook.ts).
+ */
+import type { SizeRule, SpanFunctionEntry } from "./catalogue";
+
+export interface BlockSize {
+  rows: number;
+  cols: number;
+}
+
+/** The little of the engine's syntax tree this module reads. */
+export interface ArgumentNode {
+  type: string;
+  value?: unknown;
+}
+
+/** Size of an argument's value as the engine predicts it (a range's shape, 1 x 1 for a cell). */
+export type ArgumentSize = (node: ArgumentNode) => BlockSize;
+
+export const DEFAULT_DIAGRAM_POINTS = 101;
+
+export function isGiven(node: ArgumentNode | undefined): node is ArgumentNode {
+  return node !== undefined && node.type !== "EMPTY";
+}
+
+/** Number of spans written in the spans argument, as far as the text tells. */
+export function spanCountFromText(node: ArgumentNode, sizeOf: ArgumentSize): number {
+  if (node.type === "STRING" && typeof node.value === "string") {
+    const entries = node.value.split(/[\s,;]+/).filter((entry) => entry !== "");
+    return Math.max(1, entries.length);
+  }
+  if (node.type === "NUMBER") return 1;
+  const size = sizeOf(node);
+  return Math.max(1, size.rows * size.cols);
+}
+
+export function predictSize(entry: SpanFunctionEntry, args: readonly ArgumentNode[], sizeOf: ArgumentSize): BlockSize {
+  const argument = (name: string): ArgumentNode | undefined => args[entry.arguments.findIndex((arg) => arg.name === name)];
+  const rule: SizeRule = entry.sizeRule;
+  switch (rule) {
+    case "perNode": {
+      const spans = argument("spans");
+      return { rows: (spans ? spanCountFromText(spans, sizeOf) : 1) + 1, cols: 3 };
+    }
+    case "shapeOfX": {
+      const x = argument("x");
+      return isGiven(x) ? sizeOf(x) : { rows: 1, cols: 1 };
+    }
+    case "twoByTwo":
+      return { rows: 2, cols: 2 };
+    case "extremes":
+      return { rows: isGiven(argument("EI")) ? 4 : 2, cols: 5 };
+    case "diagram": {
+      const points = argument("points");
+      const count = points && points.type === "NUMBER" && typeof points.value === "number" ? Math.trunc(points.value) : DEFAULT_DIAGRAM_POINTS;
+      return { rows: Math.max(2, count), cols: 5 };
+    }
+  }
+}

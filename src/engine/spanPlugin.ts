@@ -1,0 +1,129 @@
+/**
+ * The SPAN functions as a formula-engine plugin. Each call converts its arguments the way the
+ * spreadsheet host would, calls the worksheet function of the workbook's function table,
+ * maps a thrown `{ code, message }` to an error value with that message, and compares the
+ * result's size with the size reserved for it: a difference is learned and the cell is
+ * marked to be set again (workbook.ts does that), so the spill takes the true size.
+ */
+import { ArraySize, CellError, ErrorType, FunctionArgumentType, FunctionPlugin, HyperFormula } from "hyperformula";
+import type { ImplementedFunctions } from "hyperformula";
+import { argumentRange, entryFor, SPAN_FUNCTIONS, type SpanFunctionEntry } from "./catalogue";
+import { engineError, engineResult, firstError, hostArgument, resizeResult, resultSize } from "./cellValues";
+import { callKey, cellKey, contextOf, sameSize, type CellAddress, type EngineContext } from "./learnedSizes";
+import { predictSize, type ArgumentNode, type BlockSize } from "./resultSize";
+
+interface CallNode {
+  procedureName: string;
+  args: (ArgumentNode & object)[];
+}
+
+interface CallState {
+  formulaAddress: CellAddress;
+}
+
+function methodName(entry: SpanFunctionEntry): string {
+  return `call_${entry.exportName}`;
+}
+
+function sizeMethodName(entry: SpanFunctionEntry): string {
+  return `size_${entry.exportName}`;
+}
+
+function callText(node: CallNode): string {
+  return `${node.procedureName}${JSON.stringify(node.args)}`;
+}
+
+class SpanPlugin extends FunctionPlugin {
+  static override implementedFunctions: ImplementedFunctions = Object.fromEntries(
+    SPAN_FUNCTIONS.map((entry) => [
+      entry.sheetName,
+      {
+        method: methodName(entry),
+        sizeOfResultArrayMethod: sizeMethodName(entry),
+        parameters: entry.arguments.map(() => ({ argumentType: FunctionArgumentType.ANY, optionalArg: true })),
+        vectorizationForbidden: true,
+      },
+    ]),
+  );
+
+  private context(): EngineContext {
+    const context = contextOf(this.dependencyGraph);
+    if (!context) throw new Error("SPAN functions are evaluated only inside a SpanWorkbook");
+    return context;
+  }
+
+  private expectedSize(entry: SpanFunctionEntry, node: CallNode, state: CallState): BlockSize {
+    const learned = this.context().learned.get(callKey(state.formulaAddress, callText(node)));
+    if (learned) return learned;
+    return predictSize(entry, node.args, (arg) => {
+      const size = this.arraySizeForAst(arg as never, state as never);
+      return { rows: size.height, cols: size.width };
+    });
+  }
+
+  predict(node: CallNode, state: CallState): ArraySize {
+    const entry = entryFor(node.procedureName);
+    if (!entry) return ArraySize.error();
+    const size = this.expectedSize(entry, node, state);
+    return new ArraySize(size.cols, size.rows);
+  }
+
+  evaluate(node: CallNode, state: CallState): unknown {
+    const entry = entryFor(node.procedureName);
+    if (!entry) return new CellError(ErrorType.NAME, `unknown function ${node.procedureName}`);
+    const context = this.context();
+    context.onCall?.();
+    const given = node.args.length;
+    const required = entry.arguments.filter((arg) => !arg.optional).length;
+    if (given < required || given > entry.arguments.length) {
+      return new CellError(ErrorType.NA, `${entry.sheetName} takes ${argumentRange(entry)} arguments, not ${given}`);
+    }
+    const args: unknown[] = [];
+    for (let index = 0; index < entry.arguments.length; index++) {
+      const spec = entry.arguments[index];
+      const arg = node.args[index];
+      const skipped = arg === undefined || arg.type === "EMPTY";
+      const value = skipped ? undefined : this.evaluateAst(arg as never, state as never);
+      const error = firstError(value);
+      if (error) return error;
+      args.push(hostArgument(value, spec.kind, skipped));
+    }
+    let result: ReturnType<typeof engineResult>;
+    try {
+      result = engineResult(context.functions[entry.exportName](...args));
+    } catch (thrown) {
+      return engineError(thrown);
+    }
+    const actual = resultSize(result);
+    if (!actual) return result;
+    const expected = this.expectedSize(entry, node, state);
+    if (sameSize(actual, expected)) return result;
+    context.learned.set(callKey(state.formulaAddress, callText(node)), actual);
+    context.mismatched.set(cellKey(state.formulaAddress), state.formulaAddress);
+    // The engine cannot grow a reserved spill: hand back the reserved size until the cell is set again.
+    return resizeResult(result, expected);
+  }
+}
+
+for (const entry of SPAN_FUNCTIONS) {
+  Object.defineProperty(SpanPlugin.prototype, methodName(entry), {
+    value: function (this: SpanPlugin, node: CallNode, state: CallState) {
+      return this.evaluate(node, state);
+    },
+  });
+  Object.defineProperty(SpanPlugin.prototype, sizeMethodName(entry), {
+    value: function (this: SpanPlugin, node: CallNode, state: CallState) {
+      return this.predict(node, state);
+    },
+  });
+}
+
+let registered = false;
+
+/** Registers the SPAN functions with the formula engine (once per process). */
+export function registerSpanPlugin(): void {
+  if (registered) return;
+  const names = Object.fromEntries(SPAN_FUNCTIONS.map((entry) => [entry.sheetName, entry.sheetName]));
+  HyperFormula.registerFunctionPlugin(SpanPlugin as never, { enGB: names, enUS: names });
+  registered = true;
+}

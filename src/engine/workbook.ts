@@ -1,0 +1,230 @@
+/**
+ * A workbook evaluated by the formula engine with the SPAN functions registered: the one
+ * binding both the workbench page and the command-line calculator use.
+ *
+ * Two things the engine does not do by itself are done here, after every change:
+ * - spill sizes the formula text cannot tell (a spans list in one text cell, DIAGRAM rows) are
+ *   learned from the evaluation and the formula is set again with the learned size;
+ * - the spilled-range operator `A1#` is rewritten to the range the spill covers now, and
+ *   rewritten again whenever that spill changes size.
+ * Both repeat until nothing changes (a few passes at most).
+ */
+import { DetailedCellError, HyperFormula } from "hyperformula";
+import type { SpanFunctions } from "./catalogue";
+import { cellKey, attachContext, type CellAddress, type EngineContext } from "./learnedSizes";
+import { columnLetters, expandSpillReferences, hasSpillReference, normalizeFormula } from "./formulaText";
+import type { BlockSize } from "./resultSize";
+import { registerSpanPlugin } from "./spanPlugin";
+import { SPAN_EXPORTS } from "./spanFunctions";
+
+/** What a cell holds as typed: text starting with "=" is a formula. */
+export type CellInput = string | number | boolean | null | undefined;
+
+export interface SheetInput {
+  name: string;
+  cells: CellInput[][];
+}
+
+export interface CellErrorValue {
+  error: string;
+  message: string;
+}
+
+export type CellResult = number | string | boolean | null | CellErrorValue;
+
+export interface WorkbookOptions {
+  /** The worksheet functions to call; the real exports unless a test passes others. */
+  functions?: SpanFunctions;
+  /** Called once per SPAN function evaluation (for progress bars). */
+  onSpanCall?: () => void;
+}
+
+const MAX_PASSES = 8;
+
+export function isCellError(value: unknown): value is CellErrorValue {
+  return typeof value === "object" && value !== null && "error" in value;
+}
+
+export class SpanWorkbook {
+  private readonly hf: HyperFormula;
+  private readonly context: EngineContext;
+  /** Formulas as typed, where the engine holds another text (saved forms, `A1#`). */
+  private readonly typed = new Map<string, { address: CellAddress; text: string; engineText: string }>();
+
+  constructor(sheets: readonly SheetInput[], options: WorkbookOptions = {}) {
+    registerSpanPlugin();
+    this.hf = HyperFormula.buildEmpty({
+      licenseKey: "gpl-v3",
+      useArrayArithmetic: true,
+      evaluateNullToZero: true,
+      // Values leave the engine exactly as computed (no rounding to 10 digits on export).
+      smartRounding: false,
+      // Text such as "6 8 6" (a spans list) stays text: no dates are read from typed text.
+      parseDateTime: () => undefined,
+    });
+    this.context = { functions: options.functions ?? SPAN_EXPORTS, learned: new Map(), mismatched: new Map(), onCall: options.onSpanCall };
+    attachContext(this.hf.dependencyGraph, this.context);
+    this.hf.batch(() => {
+      for (const sheet of sheets) {
+        const name = this.hf.addSheet(sheet.name);
+        const id = this.sheetId(name);
+        const cells = sheet.cells.map((row, r) => row.map((input, c) => this.prepare({ sheet: id, row: r, col: c }, input)));
+        this.hf.setSheetContent(id, cells);
+      }
+    });
+    this.settle();
+  }
+
+  sheetNames(): string[] {
+    return this.hf.getSheetNames();
+  }
+
+  sheetId(name: string): number {
+    const id = this.hf.getSheetId(name);
+    if (id === undefined) throw new Error(`no sheet named "${name}"`);
+    return id;
+  }
+
+  /** Rows and columns in use on a sheet, spills included. */
+  dimensions(sheet: number): BlockSize {
+    const { height, width } = this.hf.getSheetDimensions(sheet);
+    return { rows: height, cols: width };
+  }
+
+  /** Sets cells from a top-left corner, then recalculates what depends on them. */
+  setCells(sheet: number, top: number, left: number, block: readonly (readonly CellInput[])[]): void {
+    this.hf.batch(() => {
+      block.forEach((row, r) =>
+        row.forEach((input, c) => {
+          const address = { sheet, row: top + r, col: left + c };
+          this.hf.setCellContents(address, [[this.prepare(address, input)]]);
+        }),
+      );
+    });
+    this.settle();
+  }
+
+  setCell(sheet: number, row: number, col: number, input: CellInput): void {
+    this.setCells(sheet, row, col, [[input]]);
+  }
+
+  getValue(sheet: number, row: number, col: number): CellResult {
+    return plain(this.hf.getCellValue({ sheet, row, col }));
+  }
+
+  /** Every value of a sheet, spilled cells included, as a rectangular block. */
+  getSheetValues(sheet: number): CellResult[][] {
+    const { rows, cols } = this.dimensions(sheet);
+    return Array.from({ length: rows }, (_, row) => Array.from({ length: cols }, (_, col) => this.getValue(sheet, row, col)));
+  }
+
+  /** The formula as typed (with `=`), or undefined for a value cell or a spilled cell. */
+  getFormula(sheet: number, row: number, col: number): string | undefined {
+    const typed = this.typed.get(cellKey({ sheet, row, col }));
+    if (typed) return typed.text;
+    return this.hf.getCellFormula({ sheet, row, col });
+  }
+
+  /** What the cell holds as typed: its formula, or its value; undefined when empty. */
+  getInput(sheet: number, row: number, col: number): CellInput {
+    const formula = this.getFormula(sheet, row, col);
+    if (formula !== undefined) return formula;
+    if (this.spillAnchorOf(sheet, row, col)) return undefined;
+    const serialized = this.hf.getCellSerialized({ sheet, row, col });
+    if (serialized === null || serialized === undefined) return undefined;
+    if (typeof serialized === "object") return String(serialized);
+    return serialized as CellInput;
+  }
+
+  /** Size of the array a formula cell spills into, when it spills (more than one cell). */
+  spillSize(sheet: number, row: number, col: number): BlockSize | undefined {
+    const vertex = (this.hf.dependencyGraph as unknown as { getCell(a: CellAddress): unknown }).getCell({ sheet, row, col }) as
+      | { width?: unknown; height?: unknown; isLeftCorner?: (a: CellAddress) => boolean }
+      | undefined;
+    if (!vertex || typeof vertex.width !== "number" || typeof vertex.height !== "number" || !vertex.isLeftCorner) return undefined;
+    if (!vertex.isLeftCorner({ sheet, row, col })) return undefined;
+    return { rows: vertex.height, cols: vertex.width };
+  }
+
+  /** The formula cell whose spill covers this (non-formula) cell. */
+  spillAnchorOf(sheet: number, row: number, col: number): CellAddress | undefined {
+    const vertex = (this.hf.dependencyGraph as unknown as { getCell(a: CellAddress): unknown }).getCell({ sheet, row, col }) as
+      | { getAddress?: unknown; cellAddress?: CellAddress; isLeftCorner?: (a: CellAddress) => boolean }
+      | undefined;
+    if (!vertex || !vertex.isLeftCorner || !vertex.cellAddress) return undefined;
+    if (vertex.isLeftCorner({ sheet, row, col })) return undefined;
+    return { ...vertex.cellAddress };
+  }
+
+  /** Addresses of every formula cell of a sheet. */
+  formulaCells(sheet: number): CellAddress[] {
+    const { rows, cols } = this.dimensions(sheet);
+    const out: CellAddress[] = [];
+    for (let row = 0; row < rows; row++)
+      for (let col = 0; col < cols; col++) if (this.hf.doesCellHaveFormula({ sheet, row, col })) out.push({ sheet, row, col });
+    return out;
+  }
+
+  /** A1-style text of an address, with the sheet name when asked. */
+  addressText(address: CellAddress, withSheet = false): string {
+    const cell = `${columnLetters(address.col)}${address.row + 1}`;
+    if (!withSheet) return cell;
+    const name = this.hf.getSheetName(address.sheet) ?? "";
+    return `${/^[A-Za-z_][\w.]*$/.test(name) ? name : `'${name.replace(/'/g, "''")}'`}!${cell}`;
+  }
+
+  destroy(): void {
+    this.hf.destroy();
+  }
+
+  private prepare(address: CellAddress, input: CellInput): CellInput {
+    const key = cellKey(address);
+    this.typed.delete(key);
+    if (typeof input !== "string" || !input.startsWith("=")) return input ?? null;
+    const normalized = normalizeFormula(input);
+    if (normalized === input && !hasSpillReference(input)) return input;
+    const engineText = this.engineText(address, input);
+    this.typed.set(key, { address, text: input, engineText });
+    return engineText;
+  }
+
+  /** The typed formula as the engine takes it: saved forms normalized, `A1#` resolved. */
+  private engineText(address: CellAddress, formula: string): string {
+    return expandSpillReferences(normalizeFormula(formula), (reference, written) => {
+      const sheet = reference.sheetName === undefined ? address.sheet : this.hf.getSheetId(reference.sheetName);
+      const size = sheet === undefined ? undefined : this.spillSize(sheet, reference.row, reference.col);
+      if (!size) return "#REF!";
+      return `${written}:${columnLetters(reference.col + size.cols - 1)}${reference.row + size.rows}`;
+    });
+  }
+
+  private settle(): void {
+    for (let pass = 0; pass < MAX_PASSES; pass++) {
+      const pending = new Map<string, { address: CellAddress; text: string }>();
+      for (const [key, address] of this.context.mismatched) {
+        const typed = this.typed.get(key);
+        const formula = typed ? this.engineText(address, typed.text) : this.hf.getCellFormula(address);
+        if (formula !== undefined) pending.set(key, { address, text: formula });
+      }
+      this.context.mismatched.clear();
+      for (const [key, entry] of this.typed) {
+        const text = this.engineText(entry.address, entry.text);
+        if (text !== entry.engineText) pending.set(key, { address: entry.address, text });
+      }
+      if (pending.size === 0) return;
+      this.hf.batch(() => {
+        for (const [key, { address, text }] of pending) {
+          const typed = this.typed.get(key);
+          if (typed) typed.engineText = text;
+          this.hf.setCellContents(address, [[text]]);
+        }
+      });
+    }
+  }
+}
+
+function plain(value: unknown): CellResult {
+  if (value instanceof DetailedCellError) return { error: value.value, message: value.message ?? "" };
+  if (value === undefined) return null;
+  return value as CellResult;
+}

@@ -1,0 +1,106 @@
+import { SpanWorkbook } from "../../src/engine";
+import { deflection, diagram, extremes, maxMoment, moment, reactions, shear } from "../../functions/functions";
+import { block, direct } from "./support/direct";
+
+const spans = "6 8 6";
+const loads = "udl 2.5 D; point 10 at 3 L";
+
+function book(): SpanWorkbook {
+  return new SpanWorkbook([
+    {
+      name: "Member",
+      cells: [
+        [spans, loads, "fixed pin pin pin", 12000, "1.2D+1.6L"],
+        [0, 1.5, 3, 4.5, 6],
+        ["=SPAN.REACTIONS(A1,B1)"],
+        [], [], [],
+        ["=SPAN.SHEAR(A1,B1,A2:E2,C1,D1,E1)"],
+        ["=SPAN.MOMENT(A1,B1,A2:E2,C1,,E1)"],
+        ["=SPAN.DEFLECTION(A1,B1,A2:E2,C1,D1)"],
+        ["=SPAN.MAXMOMENT(A1,B1,C1,,E1)", null, "=SUM(A3#)", "=ROWS(A3#)", "=INDEX(A3#,2,2)"],
+        [],
+        ["=SPAN.EXTREMES(A1,B1,C1,D1)"],
+        [], [], [],
+        ["=SPAN.DIAGRAM(A1,B1,7,C1,D1,E1)"],
+      ],
+    },
+  ]);
+}
+
+describe("SpanWorkbook", () => {
+  const wb = book();
+  const values = wb.getSheetValues(0);
+  const x = [[0, 1.5, 3, 4.5, 6]];
+
+  it("spills REACTIONS of a one-cell spans list in the size of the direct result", () => {
+    const expected = direct(() => reactions([[spans]], [[loads]]));
+    expect(expected).toHaveLength(4);
+    expect(wb.spillSize(0, 2, 0)).toEqual({ rows: 4, cols: 3 });
+    expect(block(values, 2, 0, 4, 3)).toEqual(expected);
+  });
+
+  it("spills SHEAR, MOMENT and DEFLECTION in the shape of x, skipped arguments as null", () => {
+    expect(block(values, 6, 0, 1, 5)).toEqual(direct(() => shear([[spans]], [[loads]], x, [["fixed pin pin pin"]], [[12000]], "1.2D+1.6L")));
+    expect(block(values, 7, 0, 1, 5)).toEqual(direct(() => moment([[spans]], [[loads]], x, [["fixed pin pin pin"]], null as never, "1.2D+1.6L")));
+    expect(block(values, 8, 0, 1, 5)).toEqual(direct(() => deflection([[spans]], [[loads]], x, [["fixed pin pin pin"]], [[12000]], null)));
+  });
+
+  it("spills MAXMOMENT, EXTREMES and DIAGRAM like the direct calls", () => {
+    expect(block(values, 9, 0, 2, 2)).toEqual(direct(() => maxMoment([[spans]], [[loads]], [["fixed pin pin pin"]], null as never, "1.2D+1.6L")));
+    const ext = direct(() => extremes([[spans]], [[loads]], [["fixed pin pin pin"]], [[12000]], null));
+    expect(block(values, 11, 0, ext.length, 5)).toEqual(ext);
+    const diag = direct(() => diagram([[spans]], [[loads]], 7, [["fixed pin pin pin"]], [[12000]], "1.2D+1.6L"));
+    expect(wb.spillSize(0, 15, 0)).toEqual({ rows: diag.length, cols: 5 });
+    expect(block(values, 15, 0, diag.length, 5)).toEqual(diag);
+  });
+
+  it("resolves spilled-range references A3# for SUM, ROWS and INDEX", () => {
+    const expected = direct(() => reactions([[spans]], [[loads]])) as number[][];
+    const sum = expected.flat().reduce((a, b) => a + b, 0);
+    expect(values[9][2]).toBeCloseTo(sum, 9);
+    expect(values[9][3]).toBe(expected.length);
+    expect(values[9][4]).toBe(expected[1][1]);
+    expect(wb.getFormula(0, 9, 2)).toBe("=SUM(A3#)");
+  });
+
+  it("recalculates and resizes the spill when an input changes", () => {
+    const edited = book();
+    edited.setCell(0, 0, 0, "5 5");
+    edited.setCell(0, 0, 2, "pin pin pin");
+    const after = edited.getSheetValues(0);
+    const expected = direct(() => reactions([["5 5"]], [[loads]]));
+    expect(expected).toHaveLength(3);
+    expect(edited.spillSize(0, 2, 0)).toEqual({ rows: 3, cols: 3 });
+    expect(block(after, 2, 0, 3, 3)).toEqual(expected);
+    expect(after[5][0]).toBeNull();
+    expect(after[9][3]).toBe(3);
+  });
+
+  it("shows a thrown error with its code and message", () => {
+    const bad = new SpanWorkbook([{ name: "S", cells: [[spans, "point 10 at 30 L", "=SPAN.MOMENT(A1,B1,2)", "=SPAN.SLOPE(A1,B1,2)"]] }]);
+    expect(bad.getValue(0, 0, 2)).toEqual(direct(() => moment([[spans]], [["point 10 at 30 L"]], [[2]]))[0][0]);
+    expect(bad.getValue(0, 0, 2)).toMatchObject({ error: "#VALUE!" });
+    const noEi = direct(() => moment([[spans]], [["udl 1"]], [[2]]));
+    expect(noEi[0][0]).toEqual(expect.any(Number));
+    bad.setCell(0, 0, 1, "udl 1");
+    expect(bad.getValue(0, 0, 2)).toEqual(noEi[0][0]);
+    expect(bad.getValue(0, 0, 3)).toMatchObject({ error: "#N/A" });
+    expect((bad.getValue(0, 0, 3) as { message: string }).message).not.toBe("");
+  });
+
+  it("reads saved-workbook forms of SPAN calls and spilled references", () => {
+    const saved = new SpanWorkbook([
+      {
+        name: "S",
+        cells: [
+          [spans, loads, "=_xldudf_SPAN_REACTIONS(A1,B1)", null, null, "=SUM(_xlfn.ANCHORARRAY(C1))", "=_xll.SPAN.MAXMOMENT(A1,B1)"],
+        ],
+      },
+    ]);
+    const values2 = saved.getSheetValues(0);
+    const expected = direct(() => reactions([[spans]], [[loads]])) as number[][];
+    expect(block(values2, 0, 2, 4, 3)).toEqual(expected);
+    expect(values2[0][5]).toBeCloseTo(expected.flat().reduce((a, b) => a + b, 0), 9);
+    expect(block(values2, 0, 6, 2, 2)).toEqual(direct(() => maxMoment([[spans]], [[loads]])));
+  });
+});
