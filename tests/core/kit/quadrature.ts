@@ -16,3 +16,12 @@ export function integrate(f: (x: number) => number, a: number, b: number, breaks
   }
   return total;
 }
+
+const GAUSS_NODES = [-0.8611363115940526, -0.3399810435848563, 0.3399810435848563, 0.8611363115940526];
+const GAUSS_WEIGHTS = [0.3478548451374538, 0.6521451548625461, 0.6521451548625461, 0.3478548451374538];
+
+/** Four-point Gauss–Legendre rule on [a, b]: exact for polynomials up to degree 7. */
+export function gauss(f: (x: number) => number, a: number, b: number): number {
+  const [mid, half] = [(a + b) / 2, (b - a) / 2];
+  return half * GAUSS_NODES.reduce((sum, t, i) => sum + GAUSS_WEIGHTS[i] * f(mid + half * t), 0);
+}

@@ -3,12 +3,14 @@
  * Hermite beam elements, one per span, degrees of freedom numbered as the core documents
  * (node by node: deflection w unless restrained, then rotation dw/dx unless restrained; a
  * hinge has rotation-left then rotation-right), springs on the w diagonal, and nodal loads as
- * the work of each load on the shape functions (distributed loads by Simpson quadrature).
- * Also: statics along the member from reactions, by direct integration of the loads.
+ * the work of each load on the shape functions (distributed loads by 4-point Gauss quadrature, exact for these degrees).
+ * Reactions come from the residual f - K u at restrained DOFs (force up +, moment
+ * counter-clockwise +), springs from k w. Also: statics along the member from reactions, by Simpson integration of each load over its own (smooth) extent.
  */
+import { EigenvalueDecomposition, Matrix, solve } from "ml-matrix";
 import type { Load, Member, Reaction } from "../../../src/core";
 import { nodesOf } from "./members";
-import { integrate } from "./quadrature";
+import { gauss, integrate } from "./quadrature";
 
 export interface DenseSystem {
   K: number[][];
@@ -31,31 +33,32 @@ export function intensity(load: Load, x: number): number {
   return load.magnitude + ((end - load.magnitude) * (x - load.xStart)) / (load.xEnd - load.xStart);
 }
 
-/** Global DOF index per element end: [w_i, θ_i(right side), w_j, θ_j(left side)], -1 where restrained. */
-function numbering(member: Member): number[][] {
-  let next = 0;
-  const w: number[] = [];
-  const left: number[] = [];
-  const right: number[] = [];
-  for (const s of member.supports) {
-    w.push(s.kind === "pin" || s.kind === "fixed" ? -1 : next++);
-    if (s.kind === "fixed") {
-      left.push(-1);
-      right.push(-1);
-    } else if (s.kind === "hinge") {
-      left.push(next++);
-      right.push(next++);
-    } else {
-      left.push(next);
-      right.push(next++);
-    }
-  }
-  return member.spans.map((_, e) => [w[e], right[e], w[e + 1], left[e + 1]]);
+interface Numbering {
+  /** Per element: global index of [w_i, θ_i (right side), w_j, θ_j (left side)]. */
+  ends: number[][];
+  /** Per node: indices of w and of the rotations left and right of it. */
+  nodes: { w: number; left: number; right: number }[];
+  /** Whether each global index is free (not restrained by a pin or fixed support). */
+  free: boolean[];
 }
 
-export function denseSystem(member: Member): DenseSystem {
+function numbering(member: Member): Numbering {
+  const free: boolean[] = [];
+  const add = (isFree: boolean): number => free.push(isFree) - 1;
+  const nodes = member.supports.map((s) => {
+    const w = add(s.kind !== "pin" && s.kind !== "fixed");
+    if (s.kind === "hinge") return { w, left: add(true), right: add(true) };
+    const r = add(s.kind !== "fixed");
+    return { w, left: r, right: r };
+  });
+  const ends = member.spans.map((_, e) => [nodes[e].w, nodes[e].right, nodes[e + 1].w, nodes[e + 1].left]);
+  return { ends, nodes, free };
+}
+
+/** Stiffness and nodal loads over every degree of freedom, restrained ones included. */
+function fullSystem(member: Member): DenseSystem & Numbering {
   const dofs = numbering(member);
-  const size = Math.max(-1, ...dofs.flat()) + 1;
+  const size = dofs.free.length;
   const K = Array.from({ length: size }, () => new Array<number>(size).fill(0));
   const f = new Array<number>(size).fill(0);
   const x = nodesOf(member);
@@ -68,11 +71,8 @@ export function denseSystem(member: Member): DenseSystem {
       [-12, -6 * l, 12, -6 * l],
       [6 * l, 2 * l * l, -6 * l, 4 * l * l],
     ];
-    const map = dofs[e];
-    for (let i = 0; i < 4; i++) {
-      if (map[i] < 0) continue;
-      for (let j = 0; j < 4; j++) if (map[j] >= 0) K[map[i]][map[j]] += c * k[i][j];
-    }
+    const map = dofs.ends[e];
+    for (let i = 0; i < 4; i++) for (let j = 0; j < 4; j++) K[map[i]][map[j]] += c * k[i][j];
     const [x0, x1] = [x[e], x[e + 1]];
     const last = e === member.spans.length - 1;
     for (const load of member.loads) {
@@ -85,24 +85,65 @@ export function denseSystem(member: Member): DenseSystem {
       } else {
         const [a, b] = [Math.max(x0, load.xStart), Math.min(x1, load.xEnd)];
         if (b <= a) continue;
-        for (let i = 0; i < 4; i++) shares[i] = integrate((s) => intensity(load, s) * hermite(l, s - x0)[i], a, b);
+        for (let i = 0; i < 4; i++) shares[i] = gauss((s) => intensity(load, s) * hermite(l, s - x0)[i], a, b);
       }
-      shares.forEach((v, i) => {
-        if (map[i] >= 0) f[map[i]] += v;
-      });
+      shares.forEach((v, i) => (f[map[i]] += v));
     }
   });
   member.supports.forEach((s, n) => {
-    if (s.kind !== "spring") return;
-    const dof = n < member.spans.length ? dofs[n][0] : dofs[n - 1][2];
-    K[dof][dof] += s.stiffness;
+    if (s.kind === "spring") K[dofs.nodes[n].w][dofs.nodes[n].w] += s.stiffness;
   });
-  return { K, f };
+  return { K, f, ...dofs };
 }
 
-/** Breakpoints of the load along the member (where the intensity may jump or kink). */
-export function loadBreaks(member: Member): number[] {
-  return member.loads.flatMap((l) => [l.xStart, l.xEnd]);
+/** The system over the free degrees of freedom only, numbered as the core numbers them. */
+export function denseSystem(member: Member): DenseSystem {
+  const full = fullSystem(member);
+  const keep = full.free.flatMap((isFree, i) => (isFree ? [i] : []));
+  return { K: keep.map((i) => keep.map((j) => full.K[i][j])), f: keep.map((i) => full.f[i]) };
+}
+
+export interface ReferenceSolution {
+  displacements: number[];
+  deflection: number[];
+  slopeLeft: number[];
+  slopeRight: number[];
+  reactions: Reaction[];
+}
+
+/** Solves the free system with ml-matrix and recovers reactions as f - K u at restrained DOFs. */
+export function referenceSolve(member: Member): ReferenceSolution {
+  const full = fullSystem(member);
+  const keep = full.free.flatMap((isFree, i) => (isFree ? [i] : []));
+  const Kff = new Matrix(keep.map((i) => keep.map((j) => full.K[i][j])));
+  const u = keep.length ? solve(Kff, Matrix.columnVector(keep.map((i) => full.f[i]))).to1DArray() : [];
+  const all = new Array<number>(full.free.length).fill(0);
+  keep.forEach((i, k) => (all[i] = u[k]));
+  const residual = full.K.map((row, i) => row.reduce((sum, v, j) => sum + v * all[j], 0) - full.f[i]);
+  const x = nodesOf(member);
+  const reactions = member.supports.map((s, n) => {
+    const d = full.nodes[n];
+    if (s.kind === "spring") return { x: x[n], force: s.stiffness * all[d.w], moment: 0 };
+    const force = full.free[d.w] ? 0 : -residual[d.w];
+    const moment = s.kind === "fixed" ? -residual[d.left] : 0;
+    return { x: x[n], force, moment };
+  });
+  return {
+    displacements: u,
+    deflection: full.nodes.map((d) => all[d.w]),
+    slopeLeft: full.nodes.map((d) => all[d.left]),
+    slopeRight: full.nodes.map((d) => all[d.right]),
+    reactions,
+  };
+}
+
+/** Ratio of the smallest to the largest eigenvalue of the free stiffness matrix (1 when nothing is free to move). */
+export function stiffnessConditionRatio(member: Member): number {
+  const { K } = denseSystem(member);
+  if (K.length === 0) return 1;
+  const values = new EigenvalueDecomposition(new Matrix(K), { assumeSymmetric: true }).realEigenvalues;
+  const largest = Math.max(...values.map(Math.abs));
+  return Math.min(...values) / largest;
 }
 
 /**
@@ -119,7 +160,6 @@ export function statics(member: Member, reactions: Reaction[], x: number, atEnd:
     shear += r.force;
     moment += r.force * (x - r.x) - r.moment;
   }
-  const breaks = loadBreaks(member);
   for (const load of member.loads) {
     if (load.kind === "point" && left(load.xStart)) {
       shear -= load.magnitude;
@@ -127,8 +167,9 @@ export function statics(member: Member, reactions: Reaction[], x: number, atEnd:
     } else if (load.kind === "moment" && left(load.xStart)) {
       moment += load.magnitude;
     } else if (load.kind === "udl" || load.kind === "linear") {
-      shear -= integrate((s) => intensity(load, s), 0, x, breaks);
-      moment -= integrate((s) => intensity(load, s) * (x - s), 0, x, breaks);
+      const end = Math.min(x, load.xEnd);
+      shear -= integrate((s) => intensity(load, s), load.xStart, end);
+      moment -= integrate((s) => intensity(load, s) * (x - s), load.xStart, end);
     }
   }
   return { shear, moment };
