@@ -73,10 +73,13 @@ function addinConfig(env, argv) {
         template: "./functions/functions.html",
         chunks: ["functions"],
       }),
+      // Placeholder for the page the manifest's DefaultSettings names, until the pane's own
+      // configuration emits taskpane.html (then drop this plugin).
+      new HtmlWebpackPlugin({ filename: "taskpane.html", template: "./assets/taskpane-placeholder.html", chunks: [] }),
       new CopyWebpackPlugin({
         patterns: [
-          { from: "assets/*.png", to: "assets/[name][ext]", noErrorOnMissing: true },
-          { from: "manifest.xml", to: "manifest.xml", noErrorOnMissing: true },
+          { from: "assets/*.png", to: "assets/[name][ext]" },
+          { from: "manifest.xml", to: "manifest.xml" },
           ...officeFiles.map((file) => ({
             from: path.join(officeDist, file),
             to: path.join("office-js", file),

@@ -1,0 +1,52 @@
+import { readSpans, readStiffness } from "../../src/sheet/lists";
+
+describe("readSpans", () => {
+  test.each([
+    ["row of numbers", [[6, 8, 6]], [6, 8, 6]],
+    ["column with numbers as text", [["6"], [" 8 "], [6]], [6, 8, 6]],
+    ["text cell", [["6 8 6"]], [6, 8, 6]],
+    ["text cell with commas", [["4.5,3"]], [4.5, 3]],
+    ["single number", [[7.25]], [7.25]],
+    ["bare number (Node caller)", 5, [5]],
+    ["trailing blanks in all three forms", [[6, 8, "", null, 0]], [6, 8]],
+  ])("%s", (_label, arg, expected) => {
+    expect(readSpans(arg)).toEqual(expected);
+  });
+
+  test.each([
+    ["blank", [[""]], /spans: give at least one span length/],
+    ["omitted", null, /spans: give at least one span length/],
+    ["blank inside", [[6, "", 8]], /spans entry 2: the cell is blank; give a number/],
+    ["zero inside", [[6, 0, 8]], /spans entry 2: a span length must be positive, got 0/],
+    ["negative", [["6 -2"]], /spans entry 2: a span length must be positive, got -2/],
+    ["text", [[6, "eight"]], /spans entry 2: "eight" is not a number/],
+    ["unit in text", [["6m 8m"]], /spans entry 1: "6m" is not a number/],
+    ["error value", [[6, { code: "#DIV/0!" }]], /spans entry 2: the cell holds the error #DIV\/0!/],
+    ["error text", [["#N/A"]], /spans entry 1: the cell holds the error #N\/A/],
+    ["block", [[6, 8], [6, 8]], /spans: give a single row or column/],
+  ])("%s is an error", (_label, arg, message) => {
+    expect(() => readSpans(arg)).toThrow(message);
+  });
+});
+
+describe("readStiffness", () => {
+  test.each([
+    ["omitted", null, 3, null],
+    ["blank cell", [[""]], 3, null],
+    ["blank as 0", [[0]], 3, null],
+    ["blank range", [["", null, 0]], 3, null],
+    ["one value for the member", [[20000]], 3, [20000, 20000, 20000]],
+    ["one per span", [[1, 2, "3"]], 3, [1, 2, 3]],
+    ["text cell", [["1e4 2e4"]], 2, [10000, 20000]],
+  ])("%s", (_label, arg, spans, expected) => {
+    expect(readStiffness(arg, spans)).toEqual(expected);
+  });
+
+  test.each([
+    ["wrong count", [[1, 2]], 3, /EI: give one value for the member or one per span \(3\), got 2/],
+    ["text", [["stiff"]], 1, /EI entry 1: "stiff" is not a number/],
+    ["error value", [[{ code: "#N/A" }]], 1, /EI entry 1: the cell holds the error #N\/A/],
+  ])("%s is an error", (_label, arg, spans, message) => {
+    expect(() => readStiffness(arg, spans)).toThrow(message);
+  });
+});

@@ -1,0 +1,111 @@
+import fc from "fast-check";
+import { formatLoad, formatLoadNotation, parseLoadNotation } from "../../src/sheet/loadNotation";
+import { readLoadRow } from "../../src/sheet/loadTable";
+import type { LoadRow } from "../../src/sheet/loadRow";
+
+function row(partial: Partial<LoadRow> & Pick<LoadRow, "kind">): LoadRow {
+  return { magnitude: 0, xStart: 0, xEnd: null, magnitudeEnd: 0, loadCase: "", row: 1, fromText: true, ...partial };
+}
+
+describe("parseLoadNotation", () => {
+  test.each([
+    ["udl 2.5 D", [row({ kind: "udl", magnitude: 2.5, loadCase: "D" })]],
+    ["udl 2.5 from 1 to 4 L", [row({ kind: "udl", magnitude: 2.5, xStart: 1, xEnd: 4, loadCase: "L" })]],
+    ["UDL 2.5 FROM 1", [row({ kind: "udl", magnitude: 2.5, xStart: 1 })]],
+    ["udl 2.5 to 4", [row({ kind: "udl", magnitude: 2.5, xEnd: 4 })]],
+    ["udl 2.5 to 0", [row({ kind: "udl", magnitude: 2.5 })]],
+    ["point 10 at 3 L", [row({ kind: "point", magnitude: 10, xStart: 3, loadCase: "L" })]],
+    ["Point -1e3 At 0.5", [row({ kind: "point", magnitude: -1000, xStart: 0.5 })]],
+    ["moment 5 at 2", [row({ kind: "moment", magnitude: 5, xStart: 2 })]],
+    ["linear 0 to 6 from 0 to 6 S", [row({ kind: "linear", magnitude: 0, magnitudeEnd: 6, xEnd: 6, loadCase: "S" })]],
+    ["linear 2 to 1", [row({ kind: "linear", magnitude: 2, magnitudeEnd: 1 })]],
+    ["linear 2 to 1 to 3 Lr", [row({ kind: "linear", magnitude: 2, magnitudeEnd: 1, xEnd: 3, loadCase: "Lr" })]],
+    ["udl 1 to", [row({ kind: "udl", magnitude: 1, loadCase: "to" })]],
+    [
+      " udl 2.5 D ;  point 10 at 3 L ; ",
+      [row({ kind: "udl", magnitude: 2.5, loadCase: "D" }), row({ kind: "point", magnitude: 10, xStart: 3, loadCase: "L", row: 2 })],
+    ],
+    ["", []],
+    [" ; ", []],
+  ])("%p", (text, expected) => {
+    expect(parseLoadNotation(text)).toEqual(expected);
+  });
+
+  test.each([
+    ["pont 10 at 3", /^load 1 of the loads text \("pont 10 at 3"\): "pont" is not a load type; start with point, moment, udl or linear$/],
+    ["udl 2; point 10 3", /load 2 of the loads text \("point 10 3"\): expected "at" and the position after the magnitude, found "3"/],
+    ["point at 3", /expected the magnitude \(a number\), found "at"/],
+    ["point 10 at", /expected the position after "at" \(a number\), found the end/],
+    ["udl", /expected the magnitude \(a number\), found the end/],
+    ["udl ten", /found "ten"/],
+    ["linear 2 from 0 to 3", /expected "to" and the end magnitude/],
+    ["udl 2 D L", /unexpected "L"/],
+    ["udl 2 to 3 from 1", /unexpected "1"/],
+    ["udl 2 dead-load", /"dead-load" is not a case label/],
+    ["udl 2 5", /"5" is not a case label/],
+    ["point 1e999 at 1", /expected the magnitude \(a number\), found "1e999"/],
+  ])("%p is an error", (text, message) => {
+    expect(() => parseLoadNotation(text)).toThrow(message);
+  });
+});
+
+describe("formatLoad: one text form per load-table row", () => {
+  test.each([
+    [["udl", 2.5, "", "", "", "D"], "udl 2.5 D"],
+    [["udl", 2.5, 0, 0, 0, "D"], "udl 2.5 D"],
+    [["udl", 2.5, 1, 4, "", "L"], "udl 2.5 from 1 to 4 L"],
+    [["point", 10, 3, "", "", "L"], "point 10 at 3 L"],
+    [["point", 10, "", "", "", ""], "point 10 at 0"],
+    [["moment", -5, 2], "moment -5 at 2"],
+    [["linear", 0, 0, 6, 6, "S"], "linear 0 to 6 to 6 S"],
+    [["linear", 1, 2, "", "", ""], "linear 1 to 0 from 2"],
+  ])("%j -> %p", (cells, text) => {
+    const parsed = readLoadRow(cells, 1);
+    expect(formatLoad(parsed)).toBe(text);
+    expect(parseLoadNotation(text)).toEqual([{ ...parsed, fromText: true }]);
+  });
+
+  test("a table formats as loads joined by '; '", () => {
+    const rows = [readLoadRow(["udl", 2, "", "", "", "D"], 1), readLoadRow(["point", 3, 1, "", "", "L"], 2)];
+    expect(formatLoadNotation(rows)).toBe("udl 2 D; point 3 at 1 L");
+  });
+});
+
+describe("round trip (property)", () => {
+  const finite = fc.double({ noNaN: true, noDefaultInfinity: true, min: -1e6, max: 1e6 });
+  const position = fc.oneof(fc.constant(0), fc.double({ noNaN: true, min: 0, max: 100 }));
+  const label = fc.oneof(fc.constant(""), fc.stringMatching(/^[A-Za-z][A-Za-z0-9]{0,3}$/));
+  const loadRow = fc.record({
+    kind: fc.constantFrom("point" as const, "moment" as const, "udl" as const, "linear" as const),
+    magnitude: finite,
+    xStart: position,
+    xEnd: fc.oneof(fc.constant(null), fc.double({ noNaN: true, min: 0.001, max: 100 })),
+    magnitudeEnd: finite,
+    loadCase: label,
+  });
+
+  test("parse(format(row)) gives the row back, and format is canonical", () => {
+    fc.assert(
+      fc.property(fc.array(loadRow, { maxLength: 5 }), (drafts) => {
+        const rows: LoadRow[] = drafts.map((d, i) => {
+          const distributed = d.kind === "udl" || d.kind === "linear";
+          return {
+            kind: d.kind,
+            magnitude: d.magnitude === 0 ? 0 : d.magnitude,
+            xStart: d.xStart === 0 ? 0 : d.xStart,
+            xEnd: distributed ? d.xEnd : null,
+            magnitudeEnd: d.kind === "linear" ? (d.magnitudeEnd === 0 ? 0 : d.magnitudeEnd) : 0,
+            loadCase: d.loadCase,
+            row: i + 1,
+            fromText: true,
+          };
+        });
+        const text = formatLoadNotation(rows);
+        const parsed = parseLoadNotation(text);
+        expect(parsed).toEqual(rows);
+        expect(formatLoadNotation(parsed)).toBe(text);
+      }),
+      { numRuns: 500 },
+    );
+  });
+});
