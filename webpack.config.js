@@ -91,6 +91,21 @@ function addinConfig(env, argv) {
   };
 }
 
-module.exports = (env, argv) => [addinConfig(env, argv)];
+/** The workbench: a standalone page with the demo workbook evaluated by the formula engine. */
+function workbenchConfig(env, argv) {
+  const base = common(env, argv);
+  return {
+    ...base,
+    name: "workbench",
+    entry: { workbench: "./src/workbench/main.ts" },
+    output: { ...base.output, filename: "[name].js" },
+    plugins: [
+      new HtmlWebpackPlugin({ filename: "workbench.html", template: "./src/workbench/index.html", chunks: ["workbench"] }),
+    ],
+  };
+}
+
+module.exports = (env, argv) => [addinConfig(env, argv), workbenchConfig(env, argv)];
+module.exports.workbenchConfig = workbenchConfig;
 module.exports.addinConfig = addinConfig;
 module.exports.common = common;
