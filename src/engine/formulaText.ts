@@ -25,13 +25,14 @@ function pieces(text: string): { code: boolean; text: string }[] {
   return out;
 }
 
-function mapCode(text: string, change: (code: string) => string): string {
+/** Applies `change` to the parts of formula text outside string literals. */
+export function mapCode(text: string, change: (code: string) => string): string {
   return pieces(text)
     .map((piece) => (piece.code ? change(piece.text) : piece.text))
     .join("");
 }
 
-const REFERENCE = String.raw`(?:(?:'(?:[^']|'')+'|[A-Za-z_][\w.]*)!)?\$?[A-Za-z]{1,3}\$?\d+`;
+export const REFERENCE = String.raw`(?:(?:'(?:[^']|'')+'|[A-Za-z_][\w.]*)!)?\$?[A-Za-z]{1,3}\$?\d+`;
 
 /** Saved-workbook forms to typed forms. Accepts text with or without the leading `=`. */
 export function normalizeFormula(text: string): string {
@@ -50,7 +51,7 @@ export interface SpillReference {
   col: number;
 }
 
-const SPILL = new RegExp(String.raw`(?<![\w$.!'])(${REFERENCE})#`, "g");
+export const SPILL = new RegExp(String.raw`(?<![\w$.!'])(${REFERENCE})#`, "g");
 
 export function columnNumber(letters: string): number {
   let col = 0;

@@ -2,6 +2,6 @@
 export { SPAN_FUNCTIONS, entryFor, type SpanFunctions, type SpanExport, type SheetFunction, type SpanFunctionEntry } from "./catalogue";
 export { SPAN_EXPORTS } from "./spanFunctions";
 export { SpanWorkbook, isCellError, type CellInput, type CellResult, type CellErrorValue, type SheetInput, type WorkbookOptions } from "./workbook";
-export { normalizeFormula, expandSpillReferences, hasSpillReference, columnLetters, columnNumber, parseReference } from "./formulaText";
+export { mapCode, SPILL, normalizeFormula, expandSpillReferences, hasSpillReference, columnLetters, columnNumber, parseReference } from "./formulaText";
 export { predictSize, type BlockSize } from "./resultSize";
 export type { CellAddress } from "./learnedSizes";
