@@ -19,8 +19,8 @@ function rowOf(solution: Solution, piece: Piece, x: number, s: number): DiagramR
 
 /**
  * A diagram table: `points` evenly spaced stations from 0 to the member length, plus every
- * node, load position, piece boundary and peak location, in order of x. Where shear or
- * moment jumps, two rows share the x: the value just left, then just right. Slope and
+ * node, load position, piece boundary and peak location, in order of x. Where shear,
+ * moment or slope (at a hinge) jumps, two rows share the x: the value just left, then just right. Slope and
  * deflection are NaN when the member was solved without EI.
  */
 export function diagram(solution: Solution, points: number): DiagramRow[] {
@@ -59,7 +59,9 @@ export function diagram(solution: Solution, points: number): DiagramRow[] {
       const left = rowOf(solution, before, x, before.x1 - before.x0);
       const right = rowOf(solution, piece, x, 0);
       const jumps =
-        Math.abs(left.shear - right.shear) > jumpTol * shearScale || Math.abs(left.moment - right.moment) > jumpTol * momentScale;
+        Math.abs(left.shear - right.shear) > jumpTol * shearScale ||
+        Math.abs(left.moment - right.moment) > jumpTol * momentScale ||
+        Math.abs(left.slope - right.slope) > jumpTol * solution.scales.slope;
       if (jumps) rows.push(left);
       rows.push(right);
       continue;

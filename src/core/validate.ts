@@ -1,5 +1,6 @@
 import { invalid } from "./errors";
 import type { Load, Member } from "./model";
+import { POSITION_TOLERANCE } from "./tolerance";
 
 const LOAD_KINDS = new Set(["point", "moment", "udl", "linear"]);
 const SUPPORT_KINDS = new Set(["pin", "fixed", "free", "hinge", "spring"]);
@@ -72,16 +73,17 @@ function validateStiffness(member: Member): void {
 
 function validateLoad(load: Load, length: number): void {
   const where = `load row ${load.row}`;
+  const end = length * (1 + POSITION_TOLERANCE);
   if (!LOAD_KINDS.has(load.kind)) {
     throw invalid(`${where}: unknown load type ${show(load.kind)}; use point, moment, udl or linear`);
   }
   if (!isFiniteNumber(load.magnitude)) throw invalid(`${where}: magnitude must be a finite number, got ${show(load.magnitude)}`);
   if (!isFiniteNumber(load.xStart)) throw invalid(`${where}: x start must be a finite number, got ${show(load.xStart)}`);
   if (load.xStart < 0) throw invalid(`${where}: x start ${load.xStart} is before the member start 0`);
-  if (load.xStart > length) throw invalid(`${where}: x start ${load.xStart} is beyond the member end ${length}`);
+  if (load.xStart > end) throw invalid(`${where}: x start ${load.xStart} is beyond the member end ${length}`);
   if (load.kind === "point" || load.kind === "moment") return;
   if (!isFiniteNumber(load.xEnd)) throw invalid(`${where}: x end must be a finite number, got ${show(load.xEnd)}`);
-  if (load.xEnd > length) throw invalid(`${where}: x end ${load.xEnd} is beyond the member end ${length}`);
+  if (load.xEnd > end) throw invalid(`${where}: x end ${load.xEnd} is beyond the member end ${length}`);
   if (load.xEnd <= load.xStart) throw invalid(`${where}: x end ${load.xEnd} is not beyond x start ${load.xStart}`);
   if (load.kind === "linear" && !isFiniteNumber(load.magnitudeEnd)) {
     throw invalid(`${where}: magnitude at end must be a finite number, got ${show(load.magnitudeEnd)}`);
