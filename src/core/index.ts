@@ -14,3 +14,5 @@ export { diagram } from "./diagram";
 export { parseCombination, applyCombination, formatCombination } from "./combination";
 export type { Combination, CombinationTerm } from "./combination";
 export * as tolerance from "./tolerance";
+export { parseUnit, parseUnitOf, convert, derivedUnit, dimensionName, sameDimension, DIMENSIONS, UNIT_NAMES, FOOT, INCH, POUND_FORCE, KIP } from "./units";
+export type { Unit, Dimension, DimensionName } from "./units";
