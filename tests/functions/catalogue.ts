@@ -1,0 +1,77 @@
+/**
+ * The SPAN catalogue of DESIGN.md section 2, written out by hand so the generated metadata
+ * can be checked against the contract: sheet name, JS export, parameters in order with
+ * their dimensionality and whether they are optional, and a matrix result.
+ */
+export type Dimensionality = "scalar" | "matrix";
+
+export interface CatalogueEntry {
+  id: string;
+  exportName: string;
+  parameters: [name: string, dimensionality: Dimensionality, optional: boolean][];
+}
+
+const member: CatalogueEntry["parameters"] = [
+  ["spans", "matrix", false],
+  ["loads", "matrix", false],
+];
+const trailing: CatalogueEntry["parameters"] = [
+  ["supports", "matrix", true],
+  ["EI", "matrix", true],
+  ["combo", "scalar", true],
+];
+
+export const CATALOGUE: CatalogueEntry[] = [
+  { id: "REACTIONS", exportName: "reactions", parameters: [...member, ...trailing] },
+  { id: "SHEAR", exportName: "shear", parameters: [...member, ["x", "matrix", false], ...trailing] },
+  { id: "MOMENT", exportName: "moment", parameters: [...member, ["x", "matrix", false], ...trailing] },
+  { id: "SLOPE", exportName: "slope", parameters: [...member, ["x", "matrix", false], ...trailing] },
+  { id: "DEFLECTION", exportName: "deflection", parameters: [...member, ["x", "matrix", false], ...trailing] },
+  { id: "MAXMOMENT", exportName: "maxMoment", parameters: [...member, ...trailing] },
+  { id: "EXTREMES", exportName: "extremes", parameters: [...member, ...trailing] },
+  { id: "DIAGRAM", exportName: "diagram", parameters: [...member, ["points", "scalar", true], ...trailing] },
+];
+
+interface MetadataParameter {
+  name: string;
+  description?: string;
+  type?: string;
+  dimensionality?: string;
+  optional?: boolean;
+}
+
+export interface MetadataFunction {
+  id: string;
+  name: string;
+  description?: string;
+  parameters: MetadataParameter[];
+  result?: { dimensionality?: string };
+}
+
+/** Every difference between generated metadata and the catalogue (empty when they agree). */
+export function catalogueMismatches(functions: MetadataFunction[]): string[] {
+  const out: string[] = [];
+  const byId = new Map(functions.map((f) => [f.id, f]));
+  if (functions.length !== CATALOGUE.length) out.push(`expected ${CATALOGUE.length} functions, got ${functions.length}`);
+  for (const entry of CATALOGUE) {
+    const f = byId.get(entry.id);
+    if (!f) {
+      out.push(`${entry.id}: missing`);
+      continue;
+    }
+    if (f.name !== entry.id) out.push(`${entry.id}: name ${f.name}`);
+    if (f.result?.dimensionality !== "matrix") out.push(`${entry.id}: result is not a matrix`);
+    const got = f.parameters.map((p) => [p.name, p.dimensionality ?? "scalar", p.optional === true]);
+    if (JSON.stringify(got) !== JSON.stringify(entry.parameters)) {
+      out.push(`${entry.id}: parameters ${JSON.stringify(got)}, expected ${JSON.stringify(entry.parameters)}`);
+    }
+    for (const p of f.parameters) if (!p.description || p.description.length < 20) out.push(`${entry.id}.${p.name}: no help text`);
+    if (!f.description || !/aid to a qualified engineer/.test(f.description) || !/local codes govern/.test(f.description)) {
+      out.push(`${entry.id}: help lacks the caution`);
+    }
+    if (!f.description || !/loads down \+/.test(f.description) || !/Example: =SPAN\./.test(f.description)) {
+      out.push(`${entry.id}: help lacks the sign convention or an example`);
+    }
+  }
+  return out;
+}

@@ -1,0 +1,70 @@
+/**
+ * The generated custom-functions metadata lists the whole catalogue: straight from the
+ * generator's API on functions/functions.ts, and as built into dist's functions.json.
+ */
+import { generateCustomFunctionsMetadata } from "custom-functions-metadata";
+import * as fs from "fs";
+import * as path from "path";
+import * as fx from "../../functions/functions";
+import { buildAddin } from "./build";
+import { CATALOGUE, catalogueMismatches, type MetadataFunction } from "./catalogue";
+
+describe("metadata generator on functions/functions.ts", () => {
+  let generated: Awaited<ReturnType<typeof generateCustomFunctionsMetadata>>;
+  beforeAll(async () => {
+    generated = await generateCustomFunctionsMetadata([path.resolve(__dirname, "../../functions/functions.ts")], true);
+  });
+
+  test("no errors, every catalogue function with the right parameters", () => {
+    expect(generated.errors).toEqual([]);
+    const functions = JSON.parse(generated.metadataJson).functions as MetadataFunction[];
+    expect(catalogueMismatches(functions)).toEqual([]);
+  });
+
+  test("each id is associated with its JS export, and the export exists", () => {
+    const pairs = generated.associate.map((a) => [a.id, a.functionName]).sort();
+    expect(pairs).toEqual(CATALOGUE.map((c) => [c.id, c.exportName]).sort());
+    for (const c of CATALOGUE) expect(typeof (fx as Record<string, unknown>)[c.exportName]).toBe("function");
+  });
+
+  test("the catalogue check catches a wrong optional flag (control)", () => {
+    const functions = JSON.parse(generated.metadataJson).functions as MetadataFunction[];
+    const broken = functions.map((f) => (f.id === "SHEAR" ? { ...f, parameters: f.parameters.map((p) => (p.name === "x" ? { ...p, optional: true } : p)) } : f));
+    expect(catalogueMismatches(broken)).toHaveLength(1);
+  });
+});
+
+describe("webpack production build", () => {
+  let out: string;
+  beforeAll(async () => {
+    out = await buildAddin();
+  }, 240000);
+
+  test("functions.json is generated with the whole catalogue", () => {
+    const json = JSON.parse(fs.readFileSync(path.join(out, "functions.json"), "utf8"));
+    expect(catalogueMismatches(json.functions)).toEqual([]);
+  });
+
+  test("functions.js carries one generated associate call per function", () => {
+    const js = fs.readFileSync(path.join(out, "functions.js"), "utf8");
+    for (const c of CATALOGUE) expect(js).toContain(`CustomFunctions.associate("${c.id}"`);
+    expect(js.match(/CustomFunctions\.associate\(/g)).toHaveLength(CATALOGUE.length);
+  });
+
+  test("functions.html loads the local runtime and the bundle; pages, icons, manifest and office.js are copied", () => {
+    const html = fs.readFileSync(path.join(out, "functions.html"), "utf8");
+    expect(html).toContain("office-js/custom-functions-runtime.js");
+    expect(html).toMatch(/<script[^>]+functions\.js/);
+    for (const file of ["taskpane.html", "manifest.xml", "assets/icon-16.png", "assets/icon-32.png", "assets/icon-64.png", "assets/icon-80.png", "office-js/office.js", "office-js/o15apptofilemappingtable.js", "office-js/custom-functions-runtime.js"]) {
+      expect(fs.existsSync(path.join(out, file))).toBe(true);
+    }
+    expect(fs.readFileSync(path.join(out, "taskpane.html"), "utf8")).toMatch(/aid to a qualified engineer/);
+  });
+
+  test("office.js is copied unmodified (its licence allows only that)", () => {
+    const officeDist = path.join(path.dirname(require.resolve("@microsoft/office-js/package.json")), "dist");
+    for (const file of ["office.js", "custom-functions-runtime.js"]) {
+      expect(fs.readFileSync(path.join(out, "office-js", file)).equals(fs.readFileSync(path.join(officeDist, file)))).toBe(true);
+    }
+  });
+});
