@@ -1,0 +1,61 @@
+import { invalid } from "./errors";
+import { valueAt } from "./evaluate";
+import type { Load, Member, Solution } from "./model";
+import { solve } from "./solve";
+import { memberLength } from "./validate";
+
+/** What an influence line or a moving load measures. */
+export type Effect =
+  | { kind: "reaction"; node: number }
+  | { kind: "moment-reaction"; node: number }
+  | { kind: "shear"; x: number }
+  | { kind: "moment"; x: number }
+  | { kind: "deflection"; x: number };
+
+function unitLoad(x: number): Load {
+  return { kind: "point", magnitude: 1, xStart: x, xEnd: x, magnitudeEnd: 0, loadCase: "", row: 1 };
+}
+
+/** Checks an effect against a member; returns a human name for messages. */
+export function checkEffect(member: Member, effect: Effect): void {
+  const length = memberLength(member.spans);
+  if (effect.kind === "reaction" || effect.kind === "moment-reaction") {
+    if (!Number.isInteger(effect.node) || effect.node < 1 || effect.node > member.spans.length + 1) {
+      throw invalid(`effect: node ${effect.node} does not exist; nodes are numbered 1 to ${member.spans.length + 1}`);
+    }
+    return;
+  }
+  if (!Number.isFinite(effect.x) || effect.x < 0 || effect.x > length) {
+    throw invalid(`effect: x = ${effect.x} is outside the member, which runs from 0 to ${length}`);
+  }
+  if (effect.kind === "deflection" && member.stiffness === null) throw invalid("effect: deflection needs EI");
+}
+
+/** The value of an effect in a solved member. */
+export function measure(solution: Solution, effect: Effect): number {
+  switch (effect.kind) {
+    case "reaction":
+      return solution.reactions[effect.node - 1].force;
+    case "moment-reaction":
+      return solution.reactions[effect.node - 1].moment;
+    default:
+      return valueAt(solution, effect.kind, effect.x);
+  }
+}
+
+/**
+ * Influence line ordinates: the effect caused by a unit downward load placed at each
+ * position in turn, each an exact solve of the member (supports, springs, hinges and EI
+ * included). For shear at x, a unit load exactly at x counts as just left of the section
+ * (the value just right of x is measured), so the ordinate there is the lower one.
+ */
+export function influenceLine(member: Member, effect: Effect, positions: number[]): number[] {
+  checkEffect(member, effect);
+  const length = memberLength(member.spans);
+  return positions.map((p) => {
+    if (!Number.isFinite(p) || p < 0 || p > length) {
+      throw invalid(`unit load position ${p} is outside the member, which runs from 0 to ${length}`);
+    }
+    return measure(solve({ ...member, loads: [unitLoad(p)] }), effect);
+  });
+}

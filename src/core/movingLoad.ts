@@ -1,0 +1,147 @@
+import { invalid } from "./errors";
+import { valueAt } from "./evaluate";
+import { chebyshevPoints, fitPolynomial } from "./fit";
+import { checkEffect, measure, type Effect } from "./influence";
+import { nodePositions } from "./layout";
+import type { Load, Member, Solution } from "./model";
+import { derivative, evaluatePolynomial } from "./polynomial";
+import { rootsBetween } from "./roots";
+import { solve } from "./solve";
+import { cleanZero, POSITION_TOLERANCE } from "./tolerance";
+import { validateMember } from "./validate";
+
+/** A train of axle loads: `loads[i]` acts `offsets[i]` behind the first axle (offsets[0] = 0). */
+export interface Train {
+  loads: number[];
+  offsets: number[];
+}
+
+export type MovingEffect = Effect | { kind: "absolute-moment" };
+
+export type Direction = "as given" | "reversed";
+
+/** Where the train stands when an effect peaks. */
+export interface Placement {
+  value: number;
+  /** x of the first axle. */
+  leadX: number;
+  direction: Direction;
+  /** Where the effect is measured (the section, or for absolute moment where it peaks). */
+  x: number;
+}
+
+export interface MovingResult {
+  max: Placement;
+  min: Placement;
+}
+
+/** Builds a train from axle loads and the spacings between consecutive axles. */
+export function trainFrom(loads: number[], spacings: number[]): Train {
+  if (loads.length === 0) throw invalid("train: give at least one axle load");
+  if (spacings.length !== loads.length - 1) {
+    throw invalid(`train: ${loads.length} axles need ${loads.length - 1} spacings, got ${spacings.length}`);
+  }
+  loads.forEach((p, i) => {
+    if (!Number.isFinite(p)) throw invalid(`train: axle ${i + 1} load must be a finite number, got ${p}`);
+  });
+  const offsets = [0];
+  spacings.forEach((s, i) => {
+    if (!Number.isFinite(s) || s < 0) throw invalid(`train: spacing ${i + 1} must be a number of at least 0, got ${s}`);
+    offsets.push(offsets[i] + s);
+  });
+  return { loads, offsets };
+}
+
+const FIT_POINTS = chebyshevPoints(5);
+
+interface Probe {
+  x: number;
+  value: number;
+}
+
+function axlePositions(train: Train, leadX: number, direction: Direction): number[] {
+  const sign = direction === "as given" ? 1 : -1;
+  return train.offsets.map((o) => leadX + sign * o);
+}
+
+/**
+ * Peaks of an effect as a train of axle loads crosses the member in both directions: the
+ * largest and smallest value, the position of the first axle and where the effect is
+ * measured. Between the positions where an axle meets a node or the section, every effect
+ * is a polynomial of degree at most four in the train position (the member's response to a
+ * point load is cubic in its position between nodes); it is fitted exactly from five
+ * solves and its turning points found from its derivative, then solved again exactly there.
+ * Limits at those positions are kept, so a peak reached just beyond a section counts.
+ */
+export function movingLoad(member: Member, train: Train, effect: MovingEffect): MovingResult {
+  validateMember(member);
+  if (effect.kind !== "absolute-moment") checkEffect(member, effect);
+  const nodeX = nodePositions(member.spans);
+  const length = nodeX[nodeX.length - 1];
+  const tol = POSITION_TOLERANCE * length;
+  const breaks = [...nodeX];
+  if (effect.kind !== "absolute-moment" && "x" in effect) breaks.push(effect.x);
+  let max: Placement | null = null;
+  let min: Placement | null = null;
+  const offer = (value: number, leadX: number, direction: Direction, x: number): void => {
+    if (max === null || value > max.value) max = { value, leadX, direction, x };
+    if (min === null || value < min.value) min = { value, leadX, direction, x };
+  };
+  const solveAt = (leadX: number, direction: Direction): Solution => {
+    const loads: Load[] = [];
+    axlePositions(train, leadX, direction).forEach((x, i) => {
+      if (x >= -tol && x <= length + tol && train.loads[i] !== 0) {
+        const at = Math.min(Math.max(x, 0), length);
+        loads.push({ kind: "point", magnitude: train.loads[i], xStart: at, xEnd: at, magnitudeEnd: 0, loadCase: "", row: i + 1 });
+      }
+    });
+    return solve({ ...member, loads });
+  };
+  const probes = (solution: Solution, leadX: number, direction: Direction): Probe[] => {
+    if (effect.kind !== "absolute-moment") return [{ x: "x" in effect ? effect.x : nodeX[effect.node - 1], value: measure(solution, effect) }];
+    const list: Probe[] = nodeX.map((x) => ({ x, value: valueAt(solution, "moment", x) }));
+    for (const x of axlePositions(train, leadX, direction)) {
+      if (x >= 0 && x <= length) list.push({ x, value: valueAt(solution, "moment", x) });
+    }
+    return list;
+  };
+  for (const direction of ["as given", "reversed"] as Direction[]) {
+    const sign = direction === "as given" ? 1 : -1;
+    const events = new Set<number>();
+    for (const b of breaks) for (const o of train.offsets) events.add(b - sign * o);
+    const sorted = [...events].sort((a, b) => a - b);
+    for (const e of sorted) {
+      const solution = solveAt(e, direction);
+      for (const p of probes(solution, e, direction)) offer(p.value, e, direction, p.x);
+    }
+    for (let k = 0; k + 1 < sorted.length; k++) {
+      const lo = sorted[k];
+      const hi = sorted[k + 1];
+      if (hi - lo <= tol) continue;
+      const mid = (lo + hi) / 2;
+      const half = (hi - lo) / 2;
+      const samples = FIT_POINTS.map((u) => probes(solveAt(mid + half * u, direction), mid + half * u, direction));
+      const count = samples[0].length;
+      for (let c = 0; c < count; c++) {
+        const fit = fitPolynomial(FIT_POINTS, samples.map((s) => s[c].value));
+        const placeOf = (u: number): number => {
+          const probeX = samples.map((s) => s[c].x);
+          const line = fitPolynomial(FIT_POINTS, probeX);
+          return evaluatePolynomial(line, u);
+        };
+        offer(evaluatePolynomial(fit, -1), lo, direction, placeOf(-1));
+        offer(evaluatePolynomial(fit, 1), hi, direction, placeOf(1));
+        for (const u of rootsBetween(derivative(fit), -1, 1)) {
+          const leadX = mid + half * u;
+          const exact = probes(solveAt(leadX, direction), leadX, direction)[c];
+          offer(exact.value, leadX, direction, exact.x);
+        }
+      }
+    }
+  }
+  const scale = train.loads.reduce((sum, p) => sum + Math.abs(p), 0) * length;
+  const found = { max: max!, min: min! } as MovingResult;
+  found.max.value = cleanZero(found.max.value, scale);
+  found.min.value = cleanZero(found.min.value, scale);
+  return found;
+}
