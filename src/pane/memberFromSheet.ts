@@ -1,0 +1,173 @@
+/**
+ * Finds the member behind the selected cell: parses its SPAN formula, reads each member
+ * argument through the host (ranges, spilled ranges, names, literals, array constants),
+ * builds the member with the sheet layer's own readers and solves it with the core.
+ */
+import { solve, type Member, type Solution } from "../core";
+import { describeError, readLoads, readMember, type MemberArgs } from "../sheet";
+import { parseBlock, blockText } from "./addresses";
+import { MEMBER_ARGUMENTS, parseSpanFormula, unresolvedArguments, type ArgSource, type MemberArgument, type SpanCall } from "./formulaRefs";
+import { qualify, splitAddress, type CellValue, type Selection, type SheetHost } from "./host";
+import { guessUnits, type Units } from "./units";
+
+export type MemberSources = Record<MemberArgument, ArgSource>;
+
+export interface ResolvedMember {
+  /** Sheet and cell of the formula (or of the picked inputs). */
+  sheet: string;
+  cell: string;
+  call: SpanCall | undefined;
+  sources: MemberSources;
+  /** Where each argument's values came from, sheet-qualified, when they came from a range. */
+  ranges: Partial<Record<MemberArgument, string>>;
+  /** The argument values as a worksheet function would receive them. */
+  args: MemberArgs;
+  /** Case labels of the load table, in order of first use. */
+  cases: string[];
+  units: Units;
+}
+
+export type Lookup =
+  | { ok: true; member: ResolvedMember }
+  | { ok: false; reason: "no-formula"; message: string }
+  | { ok: false; reason: "unresolved"; message: string; unresolved: MemberArgument[]; call: SpanCall; sheet: string; cell: string }
+  | { ok: false; reason: "invalid"; message: string };
+
+const OMITTED: ArgSource = { kind: "omitted", text: "" };
+
+function sheetOf(source: { sheet?: string }, sheet: string): string {
+  return source.sheet ?? sheet;
+}
+
+/** The range an argument reads, sheet-qualified, or undefined for literals and skipped ones. */
+async function rangeOf(host: SheetHost, source: ArgSource, sheet: string): Promise<string | undefined> {
+  switch (source.kind) {
+    case "range":
+      return qualify(sheetOf(source, sheet), source.address);
+    case "spill": {
+      const spill = await host.spillRange(qualify(sheetOf(source, sheet), source.address));
+      if (spill === undefined) throw new Error(`${source.text}: ${source.address} does not spill`);
+      return spill;
+    }
+    case "name": {
+      const range = await host.resolveName(source.name, sheetOf(source, sheet));
+      if (range === undefined) throw new Error(`${source.text}: no range has that name`);
+      return range;
+    }
+    default:
+      return undefined;
+  }
+}
+
+function literalValue(source: ArgSource): unknown {
+  switch (source.kind) {
+    case "omitted":
+      return null;
+    case "literal":
+      return source.value;
+    case "array":
+      return source.rows;
+    default:
+      throw new Error(`${source.text}: the pane cannot work out this expression`);
+  }
+}
+
+function casesOf(loads: unknown): string[] {
+  try {
+    const seen: string[] = [];
+    for (const row of readLoads(loads)) if (row.loadCase && !seen.includes(row.loadCase)) seen.push(row.loadCase);
+    return seen;
+  } catch {
+    return [];
+  }
+}
+
+/** Label cells near a range: the cell left of its first cell, and the cells above it in its column. */
+async function labelsNear(host: SheetHost, qualified: string | undefined): Promise<CellValue[]> {
+  if (qualified === undefined) return [];
+  try {
+    const { sheet, address } = splitAddress(qualified);
+    const block = parseBlock(address);
+    const out: CellValue[] = [];
+    if (block.from.col > 0) {
+      const left = { row: block.from.row, col: block.from.col - 1 };
+      out.push(...(await host.getValues(qualify(sheet ?? "", blockText({ from: left, to: left }))))[0]);
+    }
+    if (block.from.row > 0) {
+      const top = Math.max(0, block.from.row - 12);
+      const above = await host.getValues(qualify(sheet ?? "", blockText({ from: { row: top, col: block.from.col }, to: { row: block.from.row - 1, col: block.from.col } })));
+      out.push(...above.map((row) => row[0]).reverse());
+    }
+    return out;
+  } catch {
+    return [];
+  }
+}
+
+/** Reads every member argument's values through the host and builds the resolved member. */
+export async function resolveSources(host: SheetHost, sheet: string, cell: string, sources: MemberSources, call?: SpanCall): Promise<Lookup> {
+  const ranges: Partial<Record<MemberArgument, string>> = {};
+  const values: Partial<Record<MemberArgument, unknown>> = {};
+  try {
+    for (const name of MEMBER_ARGUMENTS) {
+      const source = sources[name];
+      const range = await rangeOf(host, source, sheet);
+      if (range !== undefined) {
+        ranges[name] = range;
+        values[name] = await host.getValues(range);
+      } else values[name] = literalValue(source);
+    }
+  } catch (error) {
+    return { ok: false, reason: "invalid", message: error instanceof Error ? error.message : String(error) };
+  }
+  const args: MemberArgs = { spans: values.spans, loads: values.loads, supports: values.supports ?? null, EI: values.EI ?? null, combo: values.combo ?? null };
+  const [spanLabels, eiLabels, loadLabels] = [await labelsNear(host, ranges.spans), await labelsNear(host, ranges.EI), await labelsNear(host, ranges.loads)];
+  const units = guessUnits({ spans: spanLabels, EI: eiLabels, loads: loadLabels });
+  return { ok: true, member: { sheet, cell, call, sources, ranges, args, cases: casesOf(args.loads), units } };
+}
+
+/** The member behind a selection holding a SPAN formula. */
+export async function findMember(host: SheetHost, selection: Selection): Promise<Lookup> {
+  const parsed = parseSpanFormula(selection.formula);
+  if (!parsed.ok) return { ok: false, reason: "no-formula", message: `${selection.cell}: ${parsed.message}` };
+  const call = parsed.call;
+  const unresolved = unresolvedArguments(call);
+  if (unresolved.length > 0) {
+    const list = unresolved.map((name) => `${name} (${call.args[name].text})`).join(", ");
+    return {
+      ok: false,
+      reason: "unresolved",
+      message: `${selection.cell}: the pane cannot work out ${list}; pick the input ranges instead`,
+      unresolved,
+      call,
+      sheet: selection.sheet,
+      cell: selection.cell,
+    };
+  }
+  const sources = Object.fromEntries(MEMBER_ARGUMENTS.map((name) => [name, call.args[name] ?? OMITTED])) as MemberSources;
+  return resolveSources(host, selection.sheet, selection.cell, sources, call);
+}
+
+export interface Solved {
+  member: Member;
+  solution: Solution;
+  /** The combination applied ("" = every load at factor 1). */
+  comboText: string;
+}
+
+/**
+ * Solves the member, with `combo` in place of the formula's combination when given
+ * (`""` = every load at 1). Bad input gives `{ error }` with the sheet layer's message.
+ */
+export function solveMember(resolved: ResolvedMember, combo?: string): Solved | { error: string } {
+  try {
+    const args: MemberArgs = combo === undefined ? resolved.args : { ...resolved.args, combo };
+    const member = readMember(args);
+    const solution = solve(member);
+    const comboText = combo ?? (typeof args.combo === "string" ? args.combo : Array.isArray(args.combo) ? String(args.combo[0]?.[0] ?? "") : "");
+    return { member, solution, comboText };
+  } catch (error) {
+    const { code, message } = describeError(error);
+    return { error: `${code} ${message}` };
+  }
+}

@@ -1,0 +1,98 @@
+/**
+ * The pane's host over the workbench page's programmatic interface (`window.spanwiseWorkbench`).
+ * Charts go to the workbench's own chart strip, drawn from the values of the requested ranges.
+ */
+import type { WorkbenchApi } from "../workbench/api";
+import { blockText, parseBlock } from "./addresses";
+import { qualify, splitAddress, type CellInput, type CellValue, type ChartRequest, type Selection, type SheetHost } from "./host";
+
+/** The parts of the workbench interface the pane uses; optional ones are used when present. */
+export type WorkbenchLike = Pick<WorkbenchApi, "getSelection" | "getFormula" | "getValues" | "setValues" | "onSelectionChange" | "addChart"> & {
+  spillRange?(address: string): string | undefined;
+  resolveName?(name: string, scope?: string): string | undefined;
+};
+
+function cellValue(value: unknown): CellValue {
+  if (value === null || value === undefined) return null;
+  if (typeof value === "object") return String((value as { error?: unknown }).error ?? "#VALUE!");
+  return value as CellValue;
+}
+
+function numbers(rows: CellValue[][]): number[] {
+  return rows.map((row) => (typeof row[0] === "number" ? row[0] : Number.NaN));
+}
+
+export class WorkbenchHost implements SheetHost {
+  readonly kind = "workbench";
+  constructor(private readonly api: WorkbenchLike) {}
+
+  async getSelection(): Promise<Selection> {
+    const s = this.api.getSelection();
+    const value = cellValue(this.api.getValues(qualify(s.sheet, s.activeCell))[0]?.[0]);
+    return { sheet: s.sheet, cell: s.activeCell, formula: s.formula, value, range: s.address };
+  }
+
+  async getValues(address: string): Promise<CellValue[][]> {
+    return this.api.getValues(address).map((row) => row.map(cellValue));
+  }
+
+  async resolveName(name: string, scope: string): Promise<string | undefined> {
+    return this.api.resolveName?.(name, scope);
+  }
+
+  /**
+   * The workbench reports spills itself when its interface has spillRange; otherwise the
+   * spill is taken as the run of value cells right of and below the anchor that hold no
+   * formula of their own (how a spill shows through getFormula and getValues).
+   */
+  async spillRange(address: string): Promise<string | undefined> {
+    if (this.api.spillRange) return this.api.spillRange(address);
+    const { sheet = this.api.getSelection().sheet, address: cell } = splitAddress(address);
+    const anchor = parseBlock(cell).from;
+    if (this.api.getFormula(qualify(sheet, blockText({ from: anchor, to: anchor }))) === undefined) return undefined;
+    const spilled = (row: number, col: number): boolean => {
+      const at = qualify(sheet, blockText({ from: { row, col }, to: { row, col } }));
+      const value = cellValue(this.api.getValues(at)[0]?.[0]);
+      return this.api.getFormula(at) === undefined && value !== null && value !== "";
+    };
+    let cols = 1;
+    while (cols < 64 && spilled(anchor.row, anchor.col + cols)) cols++;
+    let rows = 1;
+    while (rows < 20000 && spilled(anchor.row + rows, anchor.col)) rows++;
+    return qualify(sheet, blockText({ from: anchor, to: { row: anchor.row + rows - 1, col: anchor.col + cols - 1 } }));
+  }
+
+  async isEmpty(address: string): Promise<boolean> {
+    const { sheet = this.api.getSelection().sheet, address: range } = splitAddress(address);
+    const block = parseBlock(range);
+    const values = this.api.getValues(address);
+    for (let r = block.from.row; r <= block.to.row; r++) {
+      for (let c = block.from.col; c <= block.to.col; c++) {
+        const value = cellValue(values[r - block.from.row]?.[c - block.from.col]);
+        if (value !== null && value !== "") return false;
+        if (this.api.getFormula(qualify(sheet, blockText({ from: { row: r, col: c }, to: { row: r, col: c } }))) !== undefined) return false;
+      }
+    }
+    return true;
+  }
+
+  async writeBlock(address: string, block: CellInput[][]): Promise<void> {
+    this.api.setValues(address, block);
+  }
+
+  async addChart(request: ChartRequest): Promise<void> {
+    const x = numbers(await this.getValues(qualify(request.sheet, request.x)));
+    const series = await Promise.all(
+      request.series.map(async (s) => ({ name: s.name, values: numbers(await this.getValues(qualify(request.sheet, s.y))) })),
+    );
+    this.api.addChart({ title: request.title, x, series });
+  }
+
+  onSelectionChange(listener: () => void): () => void {
+    return this.api.onSelectionChange(() => listener());
+  }
+
+  theme(): "light" | "dark" | undefined {
+    return undefined;
+  }
+}

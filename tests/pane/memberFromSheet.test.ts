@@ -1,0 +1,108 @@
+import { extremes, solve } from "../../src/core";
+import { readMember, sheetExtremes } from "../../src/sheet";
+import { findMember, solveMember, type ResolvedMember } from "../../src/pane/memberFromSheet";
+import { FakeHost } from "./support/fakeHost";
+
+/** A two-span member laid out on a "Beam" sheet, with a load table on "Load table". */
+function beamBook(): FakeHost {
+  return new FakeHost()
+    .put("Beam!A3", [["Spans (m)", 5.5, 4]])
+    .put("Beam!A4", [["Supports", "pin", "pin", "fixed"]])
+    .put("Beam!A5", [["EI (kN·m²)", 18500]])
+    .put("Beam!A6", [["Combination", "1.2D+1.6L"]])
+    .put("'Load table'!A1", [
+      ["type", "magnitude", "x start", "x end", "magnitude at end", "case"],
+      ["udl", 5.8, null, null, null, "D"],
+      ["udl", 8.1, null, null, null, "L"],
+      ["point", 12, 2.5, null, null, "L"],
+      ["moment", 4, 7, null, null, "D"],
+    ]);
+}
+
+async function found(host: FakeHost, cell: string): Promise<ResolvedMember> {
+  host.select(cell);
+  const lookup = await findMember(host, await host.getSelection());
+  if (!lookup.ok) throw new Error(lookup.message);
+  return lookup.member;
+}
+
+const directArgs = () =>
+  [
+    [[5.5, 4]],
+    [
+      ["udl", 5.8, null, null, null, "D"],
+      ["udl", 8.1, null, null, null, "L"],
+      ["point", 12, 2.5, null, null, "L"],
+      ["moment", 4, 7, null, null, "D"],
+    ],
+    [["pin", "pin", "fixed"]],
+    [[18500]],
+    "1.2D+1.6L",
+  ] as const;
+
+describe("findMember", () => {
+  it("reads references, quoted sheet names and the combination, and solves like the sheet function", async () => {
+    const host = beamBook().putFormula("Beam!H3", "=SPAN.EXTREMES(B3:C3,'Load table'!A2:F5,B4:D4,B5,B6)");
+    const member = await found(host, "Beam!H3");
+    expect(member.ranges).toEqual({ spans: "Beam!B3:C3", loads: "'Load table'!A2:F5", supports: "Beam!B4:D4", EI: "Beam!B5", combo: "Beam!B6" });
+    expect(member.cases).toEqual(["D", "L"]);
+    expect(member.units).toEqual({ length: "m", force: "kN" });
+    const solved = solveMember(member);
+    if ("error" in solved) throw new Error(solved.error);
+    expect(solved.comboText).toBe("1.2D+1.6L");
+    const [spans, loads, supports, EI, combo] = directArgs();
+    const table = sheetExtremes(spans, loads, supports, EI, combo);
+    const moment = extremes(solved.solution, "moment");
+    expect(table[1]).toEqual(["moment", moment.max, moment.xMax, moment.min, moment.xMin]);
+  });
+
+  it("takes literals, array constants, names and spilled ranges", async () => {
+    const host = beamBook()
+      .putFormula("Beam!H4", '=SPAN.MAXMOMENT({5.5,4},beamLoads,Beam!B4#,18500,"D+L")')
+      .put("Beam!J1", [["skip"]]);
+    host.names.set("beamLoads", "'Load table'!A2:F5");
+    host.spills.set("Beam!B4", "Beam!B4:D4");
+    const member = await found(host, "Beam!H4");
+    expect(member.ranges).toEqual({ loads: "'Load table'!A2:F5", supports: "Beam!B4:D4" });
+    const solved = solveMember(member);
+    if ("error" in solved) throw new Error(solved.error);
+    const [spans, loads, supports, EI] = directArgs();
+    const direct = solve(readMember({ spans, loads, supports, EI, combo: "D+L" }));
+    expect(solved.solution.reactions).toEqual(direct.reactions);
+  });
+
+  it("solves under another combination when asked, and with every load at 1 for blank", async () => {
+    const member = await found(beamBook().putFormula("Beam!H3", "=SPAN.REACTIONS(B3:C3,'Load table'!A2:F5,B4:D4,B5,B6)"), "Beam!H3");
+    const [spans, loads, supports, EI] = directArgs();
+    for (const combo of ["D", "", "0.9D"]) {
+      const solved = solveMember(member, combo);
+      if ("error" in solved) throw new Error(solved.error);
+      expect(solved.solution.reactions).toEqual(solve(readMember({ spans, loads, supports, EI, combo })).reactions);
+    }
+  });
+
+  it("says which arguments are expressions and offers to pick ranges", async () => {
+    const host = beamBook().putFormula("Beam!H5", "=SPAN.MOMENT(B3:C3*2,'Load table'!A2:F5,3)");
+    host.select("Beam!H5");
+    const lookup = await findMember(host, await host.getSelection());
+    expect(lookup).toMatchObject({ ok: false, reason: "unresolved", unresolved: ["spans"] });
+    if (!lookup.ok) expect(lookup.message).toBe("H5: the pane cannot work out spans (B3:C3*2); pick the input ranges instead");
+  });
+
+  it("explains a cell without a SPAN formula, an unknown name and a missing spill", async () => {
+    const host = beamBook().putFormula("Beam!H6", "=SPAN.REACTIONS(nothing,B3)").putFormula("Beam!H7", "=SPAN.REACTIONS(B3:C3,Z9#)");
+    host.select("Beam!B3");
+    expect(await findMember(host, await host.getSelection())).toEqual({ ok: false, reason: "no-formula", message: "B3: the cell holds no formula" });
+    host.select("Beam!H6");
+    expect(await findMember(host, await host.getSelection())).toEqual({ ok: false, reason: "invalid", message: "nothing: no range has that name" });
+    host.select("Beam!H7");
+    expect(await findMember(host, await host.getSelection())).toEqual({ ok: false, reason: "invalid", message: "Z9#: Z9 does not spill" });
+  });
+
+  it("turns bad member input into the sheet layer's message, never a throw", async () => {
+    const host = beamBook().putFormula("Beam!H3", "=SPAN.REACTIONS(B3:C3,'Load table'!A2:F5,B4:C4)");
+    const solved = solveMember(await found(host, "Beam!H3"));
+    expect(solved).toHaveProperty("error");
+    if ("error" in solved) expect(solved.error).toMatch(/^#VALUE! supports/);
+  });
+});
