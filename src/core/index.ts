@@ -27,3 +27,5 @@ export { movingLoad, trainFrom } from "./movingLoad";
 export type { Train, MovingEffect, Placement, MovingResult, Direction } from "./movingLoad";
 export { sectionProperties, validateSection, blockProperties, blocksOf, SECTION_DIMENSIONS } from "./section";
 export type { SectionShape, SectionKind, SectionProperties, Block } from "./section";
+export { bendingStress, averageShearStress, peakShearStress, fibreStresses, largestMagnitude, parseDeflectionLimit, deflectionRatio, spanDeflections, utilisation } from "./checks";
+export type { FibreStress, SpanDeflection } from "./checks";
