@@ -1,0 +1,126 @@
+/**
+ * Unit labels as the sheet gives them: one unit in a cell ("kip/ft", "mm^4"), and the
+ * `units` argument of the check functions, which labels a member's inputs and the results
+ * wanted: key=unit pairs separated by commas, semicolons or spaces, in one cell or spread over
+ * cells (a two-column range of key | unit also works), e.g. "length=ft, force=kip, EI=kip*in^2,
+ * section=in, stress=ksi". No spaces inside a unit: write kip*ft or kip-ft.
+ *
+ * Keys: length (spans, x, load positions), force (loads: forces, force/length, force x length),
+ * EI (stiffness; default force x length^2), section (the length unit of section properties;
+ * default length), stress (results; default force/section^2), deflection (results; default length).
+ * Without a units argument every value is taken in consistent units, as before.
+ */
+import { derivedUnit, invalid, parseUnitOf, type DimensionName, type Member, type Unit } from "../core";
+import { errorCodeOf, isEmpty, show } from "./cells";
+import { rowsOf, singleCell } from "./ranges";
+
+/** Reads one unit cell: "" (blank) gives null; otherwise the unit, which must measure `quantity`. */
+export function readUnit(arg: unknown, quantity: DimensionName, name: string): Unit | null {
+  const cell = singleCell(arg);
+  if (cell === undefined) throw invalid(`${name}: give one cell with a unit`);
+  if (isEmpty(cell) || cell === 0) return null;
+  const code = errorCodeOf(cell);
+  if (code !== null) throw invalid(`${name}: the cell holds the error ${code}`);
+  if (typeof cell !== "string") throw invalid(`${name}: ${show(cell)} is not a unit; write one such as ${example(quantity)}`);
+  return parseUnitOf(cell, quantity, name);
+}
+
+function example(quantity: DimensionName): string {
+  const examples: Record<DimensionName, string> = {
+    length: "m, mm, ft or in",
+    force: "kN or kip",
+    "force/length": "kN/m or kip/ft",
+    "force x length": "kN*m or kip*ft",
+    "force/length^2": "MPa or ksi",
+    "length^2": "mm^2 or in^2",
+    "length^3": "mm^3 or in^3",
+    "length^4": "mm^4 or in^4",
+    "force x length^2": "kN*m^2 or kip*in^2",
+  };
+  return examples[quantity];
+}
+
+/** The keys of the units argument and the quantity each measures. */
+export const UNIT_KEYS: Record<string, DimensionName> = {
+  length: "length",
+  force: "force",
+  EI: "force x length^2",
+  section: "length",
+  stress: "force/length^2",
+  deflection: "length",
+};
+
+/** The member's units, with the defaults filled in. Factors convert to metres and newtons. */
+export interface MemberUnits {
+  length: Unit;
+  force: Unit;
+  EI: Unit;
+  section: Unit;
+  stress: Unit;
+  deflection: Unit;
+}
+
+function pairsOf(arg: unknown): string[] {
+  const parts: string[] = [];
+  for (const row of rowsOf(arg)) {
+    const cells = (Array.isArray(row) ? row : [row]).filter((cell) => !isEmpty(cell) && cell !== 0);
+    for (const cell of cells) {
+      const code = errorCodeOf(cell);
+      if (code !== null) throw invalid(`units: a cell holds the error ${code}`);
+      if (typeof cell !== "string") throw invalid(`units: ${show(cell)} is not a unit label; write pairs such as length=ft, force=kip`);
+    }
+    const texts = cells as string[];
+    if (texts.length === 2 && !texts[0].includes("=") && !texts[1].includes("=")) parts.push(`${texts[0].trim()}=${texts[1].trim()}`);
+    else parts.push(...texts);
+  }
+  return parts
+    .join(",")
+    .replace(/\s*[=:]\s*/g, "=")
+    .split(/[\s,;]+/)
+    .filter((p) => p !== "");
+}
+
+/** Reads the units argument: null when it is blank (consistent units). */
+export function readMemberUnits(arg: unknown): MemberUnits | null {
+  if (arg === null || arg === undefined) return null;
+  const pairs = pairsOf(arg);
+  if (pairs.length === 0) return null;
+  const given = new Map<string, Unit>();
+  for (const pair of pairs) {
+    const [rawKey, text, extra] = pair.split("=");
+    const key = Object.keys(UNIT_KEYS).find((k) => k.toLowerCase() === (rawKey ?? "").toLowerCase());
+    if (extra !== undefined || text === undefined || text === "") {
+      throw invalid(`units: cannot read "${pair}"; write key=unit pairs such as length=ft, force=kip`);
+    }
+    if (key === undefined) throw invalid(`units: unknown key "${rawKey}"; use ${Object.keys(UNIT_KEYS).join(", ")}`);
+    if (given.has(key)) throw invalid(`units: ${key} is given twice`);
+    given.set(key, parseUnitOf(text, UNIT_KEYS[key], `units ${key}`));
+  }
+  const length = given.get("length");
+  const force = given.get("force");
+  if (!length || !force) throw invalid(`units: give both length and force (for example length=ft, force=kip); got ${[...given.keys()].join(", ")}`);
+  const section = given.get("section") ?? length;
+  return {
+    length,
+    force,
+    section,
+    EI: given.get("EI") ?? derivedUnit(length, force, 2, 1),
+    stress: given.get("stress") ?? derivedUnit(section, force, -2, 1),
+    deflection: given.get("deflection") ?? length,
+  };
+}
+
+/** The member in metres and newtons, from a member read in the given units. */
+export function memberInSI(member: Member, units: MemberUnits): Member {
+  const L = units.length.factor;
+  const F = units.force.factor;
+  return {
+    spans: member.spans.map((s) => s * L),
+    supports: member.supports.map((s) => (s.kind === "spring" ? { kind: "spring", stiffness: (s.stiffness * F) / L } : s)),
+    stiffness: member.stiffness === null ? null : member.stiffness.map((ei) => ei * units.EI.factor),
+    loads: member.loads.map((load) => {
+      const scale = load.kind === "point" ? F : load.kind === "moment" ? F * L : F / L;
+      return { ...load, magnitude: load.magnitude * scale, magnitudeEnd: load.magnitudeEnd * scale, xStart: load.xStart * L, xEnd: load.xEnd * L };
+    }),
+  };
+}

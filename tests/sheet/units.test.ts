@@ -1,0 +1,107 @@
+/**
+ * The units argument and unit cells at the sheet boundary. Factors: NIST SP 811 (2008),
+ * Appendix B (from memory): 1 ft = 0.3048 m, 1 in = 0.0254 m, 1 lbf = 4.4482216152605 N
+ * (0.45359237 kg x 9.80665 m/s^2), 1 kip = 1000 lbf — written out here, not taken from the code.
+ */
+import { tolerance, type Member } from "../../src/core";
+import { memberInSI, readMemberUnits, readUnit } from "../../src/sheet";
+import { thrown } from "../core/kit/errors";
+
+const FT = 0.3048;
+const IN = 0.0254;
+const KIP = 4448.2216152605;
+
+const near = (a: number, b: number) => expect(tolerance.relDiff(a, b)).toBeLessThan(1e-14);
+
+describe("readUnit", () => {
+  test("blank cells give no unit; text parses and must fit the quantity", () => {
+    for (const blank of [null, "", 0, [[""]], [[null]]]) expect(readUnit(blank, "length", "unit")).toBeNull();
+    near(readUnit([["in"]], "length", "unit")!.factor, IN);
+    expect(thrown(() => readUnit("ksi", "length", "unit")).message).toBe('unit: "ksi" measures force/length^2, not length');
+    expect(thrown(() => readUnit(12, "length", "unit")).message).toMatch(/^unit: 12 is not a unit; write one such as m, mm, ft or in/);
+    expect(thrown(() => readUnit([["ft", "in"]], "length", "unit")).message).toMatch(/^unit: give one cell/);
+    expect(thrown(() => readUnit("#N/A", "length", "unit")).message).toMatch(/^unit: the cell holds the error #N\/A/);
+  });
+});
+
+describe("readMemberUnits", () => {
+  test("blank means consistent units", () => {
+    for (const blank of [null, "", [[""]], [["", null]]]) expect(readMemberUnits(blank)).toBeNull();
+  });
+
+  test("one cell of pairs, with defaults derived from length and force", () => {
+    const u = readMemberUnits("length=ft, force=kip")!;
+    near(u.length.factor, FT);
+    near(u.force.factor, KIP);
+    near(u.EI.factor, KIP * FT * FT);
+    near(u.section.factor, FT);
+    near(u.stress.factor, KIP / (FT * FT));
+    expect(u.stress.text).toBe("kip/ft^2");
+    near(u.deflection.factor, FT);
+  });
+
+  test("spellings: spaces, semicolons, colons, any key case, cells, a key | unit table", () => {
+    const forms: unknown[] = [
+      "length = ft; force: kip; EI=kip*in^2 section=in stress=ksi deflection=in",
+      [["length=ft", "force=kip", "ei=kip*in^2"], ["SECTION=in", "stress=ksi", "deflection=in"]],
+      [["length", "ft"], ["force", "kip"], ["EI", "kip*in^2"], ["section", "in"], ["stress", "ksi"], ["deflection", "in"]],
+    ];
+    for (const form of forms) {
+      const u = readMemberUnits(form)!;
+      near(u.EI.factor, KIP * IN * IN);
+      near(u.section.factor, IN);
+      near(u.stress.factor, KIP / (IN * IN));
+      near(u.deflection.factor, IN);
+    }
+  });
+
+  test.each([
+    ["length=kip, force=kip", /^units length: "kip" measures force, not length$/],
+    ["length=ft, force=kip/ft", /^units force: "kip\/ft" measures force\/length, not force$/],
+    ["length=ft, force=kip, EI=ksi", /^units EI: "ksi" measures force\/length\^2, not force x length\^2$/],
+    ["length=ft, force=kip, stress=kip", /^units stress: /],
+    ["length=ft", /^units: give both length and force/],
+    ["length=ft, force=kip, span=ft", /^units: unknown key "span"/],
+    ["length=ft, force=kip, length=m", /^units: length is given twice/],
+    ["length=ft force", /^units: cannot read "force"/],
+    ["length=ft=m, force=kip", /^units: cannot read "length=ft=m"/],
+    ["length=furlong, force=kip", /^units length: unknown unit "furlong"/],
+  ])("%j is an error naming the argument", (text, message) => {
+    const e = thrown(() => readMemberUnits(text));
+    expect(e.code).toBe("#VALUE!");
+    expect(e.message).toMatch(message);
+  });
+
+  test("numbers and error values in the units cells are errors", () => {
+    expect(thrown(() => readMemberUnits([["length=ft", 3]])).message).toMatch(/^units: 3 is not a unit label/);
+    expect(thrown(() => readMemberUnits([["#REF!"]])).message).toMatch(/^units: a cell holds the error #REF!/);
+  });
+});
+
+describe("memberInSI", () => {
+  test("every load kind, springs and EI scale by their own dimension", () => {
+    const m: Member = {
+      spans: [20, 10],
+      supports: [{ kind: "pin" }, { kind: "spring", stiffness: 50 }, { kind: "fixed" }],
+      stiffness: [1e6, 2e6],
+      loads: [
+        { kind: "point", magnitude: 8, xStart: 5, xEnd: 5, magnitudeEnd: 0, loadCase: "L", row: 1 },
+        { kind: "moment", magnitude: 3, xStart: 25, xEnd: 25, magnitudeEnd: 0, loadCase: "", row: 2 },
+        { kind: "udl", magnitude: 1.5, xStart: 0, xEnd: 30, magnitudeEnd: 1.5, loadCase: "D", row: 3 },
+        { kind: "linear", magnitude: 0, xStart: 2, xEnd: 12, magnitudeEnd: 2, loadCase: "", row: 4 },
+      ],
+    };
+    const si = memberInSI(m, readMemberUnits("length=ft, force=kip, EI=kip*in^2")!);
+    near(si.spans[0], 20 * FT);
+    expect(si.supports[1]).toEqual({ kind: "spring", stiffness: expect.any(Number) });
+    near((si.supports[1] as { stiffness: number }).stiffness, (50 * KIP) / FT);
+    near(si.stiffness![1], 2e6 * KIP * IN * IN);
+    near(si.loads[0].magnitude, 8 * KIP);
+    near(si.loads[0].xStart, 5 * FT);
+    near(si.loads[1].magnitude, 3 * KIP * FT);
+    near(si.loads[2].magnitudeEnd, (1.5 * KIP) / FT);
+    near(si.loads[3].xEnd, 12 * FT);
+    expect(si.loads.map((l) => l.loadCase)).toEqual(["L", "", "D", ""]);
+    expect(m.spans[0]).toBe(20);
+  });
+});
