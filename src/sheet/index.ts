@@ -13,3 +13,7 @@ export { rowsOf, singleCell, isOmitted, isAllBlank, vectorCells, splitList, list
 export { mapPositions, orBlank, finite } from "./shape";
 export { hostError, describeError, guarded, MESSAGE_LIMIT } from "./hostError";
 export { memberKey, LruCache, solvedMembers, MEMBER_CACHE_SIZE } from "./cache";
+export { readUnit, readMemberUnits, memberInSI, UNIT_KEYS } from "./units";
+export type { MemberUnits } from "./units";
+export { sheetSection, readShape, readDimensions, SECTION_ROWS } from "./section";
+export { sheetStress, sheetShearStress, sheetDeflectionCheck, sheetUtilisation, sheetConvert, sheetStiffness } from "./checks";
