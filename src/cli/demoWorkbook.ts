@@ -18,7 +18,7 @@ export async function writeDemoWorkbook(out: string, force: boolean, io: Io): Pr
   const workbook = new ExcelJS.Workbook();
   workbook.creator = "Spanwise";
   workbook.title = DEMO_TITLE;
-  // Fixed dates keep the generated file byte-stable between runs.
+  // Fixed document dates: regenerating changes the file only where the demo changed.
   workbook.created = new Date(Date.UTC(2024, 0, 1));
   workbook.modified = workbook.created;
   const sheets: SheetInput[] = DEMO_SHEETS.map((sheet) => ({
