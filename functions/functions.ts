@@ -10,6 +10,7 @@
  * them; local codes govern.
  */
 import { sheetDiagram, sheetExtremes, sheetMaxMoment, sheetReactions, sheetValuesAt } from "../src/sheet";
+import { sheetCombinationSet, sheetEnvelope, sheetInfluence, sheetMoving, sheetPeaks } from "../src/sheet/studies";
 
 /**
  * Reactions at every node of a continuous beam: one row per node (span end) with x, the vertical reaction (up +) and the moment reaction (counter-clockwise +); unsupported nodes give 0, a spring gives its force. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.REACTIONS("6 8 6", "udl 2.5 D; point 10 at 3 L")
@@ -126,4 +127,191 @@ export function extremes(spans: any[][], loads: any[][], supports?: any[][], EI?
  */
 export function diagram(spans: any[][], loads: any[][], points?: any, supports?: any[][], EI?: any[][], combo?: any): any[][] {
   return sheetDiagram(spans, loads, points, supports, EI, combo);
+}
+
+// ---------------------------------------------------------------------------------------
+// Load arrangements: envelopes over combinations, governing peaks, pattern live load,
+// influence lines and moving loads.
+// ---------------------------------------------------------------------------------------
+
+/**
+ * Envelope of shear, moment or deflection over a list of load combinations: for each x, the largest and smallest value and the combination that produces it (with pattern live load, also the loaded spans). Combinations may be written out (1.2D+1.6L) or named as sets: ASCE7-2.3.1 (strength), ASCE7-2.4.1 (allowable stress), EN1990-6.10 (needs psi0). Signs: loads down +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.ENVELOPE("6 8 6", A2:F9, H2:H40, "ASCE7-2.3.1", , , "moment", "full L")
+ * @customfunction ENVELOPE
+ * @param spans Span lengths left to right (any length unit): a row or column, or one text cell such as "6 8 6".
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation; every load needs a case label.
+ * @param x Positions from the member's left end: a cell, row, column or block; one result row per cell, in reading order (blank cells give blank rows).
+ * @param combos Combinations: a cell or range of texts such as 1.2D+1.6L+0.5S, and/or set names ASCE7-2.3.1, ASCE7-2.4.1, EN1990-6.10 (each expanded to its individual combinations).
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
+ * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
+ * @param [quantity] shear, moment (default) or deflection.
+ * @param [pattern] Pattern live load: blank or none (loads as given), standard (the classical span arrangements), or full (every subset of spans, exact by superposition), optionally followed by the live case label (default L), e.g. "full L".
+ * @param [psi0] EN 1990 combination factor psi0 for the accompanying variable cases: one number, or pairs such as "Q 0.7, S 0.5".
+ * @returns One row per x: x, largest value, governing combination, smallest value, governing combination.
+ */
+export function envelope(spans: any[][], loads: any[][], x: any[][], combos: any[][], supports?: any[][], EI?: any[][], quantity?: any, pattern?: any, psi0?: any): any[][] {
+  return sheetEnvelope(spans, loads, x, combos, supports, EI, quantity, pattern, psi0);
+}
+
+/**
+ * Governing peaks over a list of load combinations: for shear, moment and (with EI) slope and deflection, the largest and smallest value anywhere on the member, where it occurs and the combination (and, with pattern live load, the loaded spans) that produces it. Found exactly from each combination's curves. Signs: loads down +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.PEAKS("6 8 6", A2:F9, "ASCE7-2.3.1", , 20000, "standard L")
+ * @customfunction PEAKS
+ * @param spans Span lengths left to right (any length unit): a row or column, or one text cell such as "6 8 6".
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation; every load needs a case label.
+ * @param combos Combinations: a cell or range of texts such as 1.2D+1.6L+0.5S, and/or set names ASCE7-2.3.1, ASCE7-2.4.1, EN1990-6.10.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
+ * @param [EI] Flexural stiffness: one value or one per span. Adds the slope and deflection rows.
+ * @param [pattern] Pattern live load: blank or none, standard (classical arrangements) or full (every subset of spans, at most 12 spans), optionally followed by the live case label (default L).
+ * @param [psi0] EN 1990 combination factor psi0: one number, or pairs such as "Q 0.7, S 0.5".
+ * @returns Rows shear, moment (slope, deflection with EI): label, max, x at max, governing combination, min, x at min, governing combination.
+ */
+export function peaks(spans: any[][], loads: any[][], combos: any[][], supports?: any[][], EI?: any[][], pattern?: any, psi0?: any): any[][] {
+  return sheetPeaks(spans, loads, combos, supports, EI, pattern, psi0);
+}
+
+/**
+ * Influence line ordinates: the value of an effect caused by a unit downward load at each position, from an exact solve of the member (continuous spans, springs and hinges included). For shear at a section, a unit load exactly at the section counts as just left of it. Signs: reactions up +, moment reactions counter-clockwise +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.INFLUENCE("10 10", "moment at 10", A2:A42)
+ * @customfunction INFLUENCE
+ * @param spans Span lengths left to right (any length unit): a row or column, or one text cell such as "10 10".
+ * @param effect What is measured: "reaction 2" (vertical reaction at node 2, nodes numbered from 1 at the left end), "moment reaction 1", "shear at 4.5", "moment at 6" or "deflection at 3" (needs EI).
+ * @param positions Unit-load positions from the left end: a cell, row, column or block; the result has the same shape.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
+ * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
+ * @returns The ordinate at each position, in the shape of positions.
+ */
+export function influence(spans: any[][], effect: any, positions: any[][], supports?: any[][], EI?: any[][]): any[][] {
+  return sheetInfluence(spans, effect, positions, supports, EI);
+}
+
+/**
+ * Moving loads: a train of axle loads crossing the member in both directions; the largest and smallest value of an effect and where the train stands. Between positions where an axle meets a node or the section the effect is a polynomial in the train position, so peaks are found exactly, not by stepping. Signs: loads down +, sagging M +, reactions up +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.MOVING("12", "35 145 145", "4.3 4.3", "absolute moment")
+ * @customfunction MOVING
+ * @param spans Span lengths left to right (any length unit): a row or column, or one text cell such as "12".
+ * @param axles Axle loads, first axle first (force, down +): a row or column, or one text cell such as "35 145 145".
+ * @param spacings Distances between consecutive axles (length): one fewer than the axles; blank for one axle.
+ * @param effect What is measured: "absolute moment" (largest moment anywhere), "moment at 6", "shear at 4.5", "reaction 2", "moment reaction 1" or "deflection at 3" (needs EI).
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
+ * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
+ * @returns Rows max and min: label, value, x of the first axle, direction ("as given": the other axles follow at larger x; "reversed"), x where the effect is measured.
+ */
+export function moving(spans: any[][], axles: any[][], spacings: any[][], effect: any, supports?: any[][], EI?: any[][]): any[][] {
+  return sheetMoving(spans, axles, spacings, effect, supports, EI);
+}
+
+/**
+ * The individual combinations of a named set, one per row, ready to feed ENVELOPE or PEAKS or to inspect: ASCE7-2.3.1 (ASCE/SEI 7 strength design basic combinations), ASCE7-2.4.1 (allowable stress design), EN1990-6.10 (EN 1990 expression 6.10 with gamma G 1.35 or 1.0 and gamma Q 1.5, each variable case leading in turn). "Lr or S or R" alternatives become separate combinations. The governing code and a qualified engineer decide which combinations apply. Example: =SPAN.COMBOS("EN1990-6.10", "Q 0.7, S 0.5", "Q S")
+ * @customfunction COMBOS
+ * @param set The set name: ASCE7-2.3.1, ASCE7-2.4.1 or EN1990-6.10.
+ * @param [psi0] EN 1990 only: psi0 for the accompanying variable cases, one number or pairs such as "Q 0.7, S 0.5".
+ * @param [cases] EN 1990 only: the variable case labels (default Q); G is the permanent case.
+ * @returns One combination per row.
+ */
+export function combos(set: any, psi0?: any, cases?: any[][]): any[][] {
+  return sheetCombinationSet(set, psi0, cases);
+}
+
+// ---------------------------------------------------------------------------------------
+// Sections, stresses, serviceability checks and units. These check the engineer's own
+// numbers (section sizes, stated limits and capacities); they are not code design: the
+// governing code and a qualified engineer decide which limits and capacities apply.
+// ---------------------------------------------------------------------------------------
+import { sheetConvert, sheetDeflectionCheck, sheetSection, sheetShearStress, sheetStiffness, sheetStress, sheetUtilisation } from "../src/sheet";
+
+/**
+ * Section properties of a rectangle, solid circle, box (hollow rectangle), tube (hollow circle), symmetric I, channel or tee, sharp-cornered: rows property, value, unit (area, Ix, Iy, Sx top, Sx bottom, Sy left, Sy right, Zx, Zy, rx, ry, Qx, width at axis, Q/t max, centroid x, centroid y). Axes: x horizontal (bending about x is the usual, strong-axis case), y vertical; centroid from the left and bottom edges; tee flange at the top, channel web at the left. S = I / (distance to that fibre); Z plastic (equal areas); Qx first moment of the area above the neutral axis. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.SECTION("I", "400 180 13.5 8.6", "mm")
+ * @customfunction SECTION
+ * @param shape rectangle, circle, box, tube, I, channel or tee (also rect, round, hollow rectangle, pipe, hollow circle).
+ * @param dimensions In order, a row, column or one text cell: rectangle b h; circle d; box b h t (wall); tube d t (wall); I, channel, tee: d (overall depth) bf (flange width) tf (flange thickness) tw (web or stem thickness).
+ * @param [unit] Length unit of the dimensions, such as mm, cm, m, in or ft. Blank = no unit: results in the dimensions' unit.
+ * @param [resultUnit] Length unit of the results (area in unit^2, I in unit^4, S, Z and Q in unit^3). Blank = the dimensions' unit.
+ * @returns Rows property, value, unit.
+ */
+export function section(shape: any, dimensions: any[][], unit?: any, resultUnit?: any): any[][] {
+  return sheetSection(shape, dimensions, unit, resultUnit);
+}
+
+/**
+ * Extreme-fibre bending stress M/S from the member's largest and smallest moments: rows top and bottom with the largest stress, its x, the smallest stress, its x. Tension +, compression -; sagging moment (+) compresses the top. Signs: loads down +, couples clockwise +. A check of the stated section only: the governing code and a qualified engineer decide the allowable stress. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.STRESS("20 15", "udl 1.2 D; point 8 at 10 L", G2:I17, , , "1.2D+1.6L", "length=ft, force=kip, stress=ksi")
+ * @customfunction STRESS
+ * @param spans Span lengths left to right (the length unit of units, or any consistent unit): a row or column, or one text cell such as "20 15".
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation. Forces down +, couples clockwise +; forces in the force unit, intensities in force/length, couples in force x length.
+ * @param section Section modulus S (one value, both fibres), or S top and S bottom; or a SPAN.SECTION result (its Sx top and Sx bottom rows, with their units). In section-unit^3.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
+ * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Needed for springs; without it the member is taken as uniform.
+ * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels. Blank = every load at factor 1.
+ * @param [units] Unit labels, key=unit pairs: length=ft, force=kip (both needed when any is given), EI=kip*in^2, section=in (default length), stress=ksi (default force/section^2). Blank = consistent units.
+ * @returns Rows top and bottom: fibre, largest stress, x, smallest stress, x.
+ */
+export function stress(spans: any[][], loads: any[][], section: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
+  return sheetStress(spans, loads, section, supports, EI, combo, units);
+}
+
+/**
+ * Shear stress at the largest shear force |V|: the average V/A and the peak V Q/(I t), with x. With a SPAN.SECTION result the peak uses its Q/t max row (the largest Q/t over the depth: at the neutral axis except in a tee whose axis is in its flange). Sign follows V (V = dM/dx). Signs: loads down +, couples clockwise +. A check of the stated section only: the governing code and a qualified engineer decide the allowable stress. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.SHEARSTRESS("6", "udl 20", "0.015 2.8e-5 2.8e-4 0.1", , , , "length=m, force=kN, stress=MPa")
+ * @customfunction SHEARSTRESS
+ * @param spans Span lengths left to right (the length unit of units, or any consistent unit): a row or column, or one text cell such as "20 15".
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation. Forces down +, couples clockwise +.
+ * @param section A (area: average only), or A I Q t (area, second moment, first moment about the neutral axis of the area beyond the point, width there), in section-unit powers; or a SPAN.SECTION result.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
+ * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Needed for springs; without it the member is taken as uniform.
+ * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels. Blank = every load at factor 1.
+ * @param [units] Unit labels, key=unit pairs: length=m, force=kN (both needed when any is given), EI=kN*m^2, section=mm (default length), stress=MPa (default force/section^2). Blank = consistent units.
+ * @returns Rows average and peak: label, stress, x of the largest |V|.
+ */
+export function shearStress(spans: any[][], loads: any[][], section: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
+  return sheetShearStress(spans, loads, section, supports, EI, combo, units);
+}
+
+/**
+ * Deflection check per span: the largest deflection in each span (by magnitude, down +, from the undeflected axis, spring settlement included), span/deflection, and pass when span/deflection >= the stated limit's divisor. The limit is the engineer's: typical floor limits (such as L/360 live, L/240 total) come from the governing building code's table of deflection limits, which also says how cantilevers count; the code and a qualified engineer decide. Needs EI (#N/A without it). Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.DEFLECTIONCHECK("20 15", "udl 0.8 L", "L/360", , 2.4e6, , "length=ft, force=kip, EI=kip*in^2, deflection=in")
+ * @customfunction DEFLECTIONCHECK
+ * @param spans Span lengths left to right (the length unit of units, or any consistent unit): a row or column, or one text cell such as "20 15".
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation. Forces down +, couples clockwise +.
+ * @param limit The stated limit as L/360, span/360 or 360: one for the member or one per span (a row, column or text such as "L/360 L/180").
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
+ * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Required here; SPAN.STIFFNESS builds it from E and I.
+ * @param [combo] Load combination such as D+L or L alone: factors on the case labels. Blank = every load at factor 1.
+ * @param [units] Unit labels, key=unit pairs: length=ft, force=kip (both needed when any is given), EI=kip*in^2, deflection=in (default length). Blank = consistent units.
+ * @returns One row per span: span number, span length, deflection, x, span/deflection ("" when 0), limit divisor, pass or fail.
+ */
+export function deflectionCheck(spans: any[][], loads: any[][], limit: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
+  return sheetDeflectionCheck(spans, loads, limit, supports, EI, combo, units);
+}
+
+/**
+ * Utilisation |demand| / capacity, cell by cell (one capacity for all, or one per demand); at most 1 means the demand is within the stated capacity. The capacity is the engineer's: the governing code and a qualified engineer decide it. Signs: loads down +, so demands may be negative; the ratio uses the magnitude. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.UTILISATION(B4, 250, "kip*ft", "kN*m")
+ * @customfunction UTILISATION
+ * @param demand Demand values (moment, shear, stress, deflection...): a cell or range; the result has its shape.
+ * @param capacity Capacity (> 0) in the same quantity: one cell, or a range the size of demand.
+ * @param [demandUnit] Unit of the demand, such as kip*ft. Give both units or neither.
+ * @param [capacityUnit] Unit of the capacity, such as kN*m; must measure the same quantity as the demand unit.
+ * @returns The ratio for each demand.
+ */
+export function utilisation(demand: any[][], capacity: any[][], demandUnit?: any, capacityUnit?: any): any[][] {
+  return sheetUtilisation(demand, capacity, demandUnit, capacityUnit);
+}
+
+/**
+ * Converts values between units of the same quantity: length (m, mm, cm, ft, in), force (N, kN, lbf, kip), force/length (kN/m, kip/ft, plf, klf), moment (kN*m, kip*ft, kip*in), stress (Pa, kPa, MPa, GPa, psi, ksi, psf), I (mm^4, in^4), EI (kN*m^2, kip*in^2) and any product of these; factors from NIST SP 811. Signs: loads down + is kept (values keep their sign). Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.CONVERT(1.2, "kip/ft", "kN/m")
+ * @customfunction CONVERT
+ * @param value The values: a cell or range; the result has its shape.
+ * @param from Unit of the values, such as kip*ft (no spaces inside a unit).
+ * @param to Unit wanted, such as kN*m: must measure the same quantity.
+ * @returns The converted values.
+ */
+export function convertUnits(value: any[][], from: any, to: any): any[][] {
+  return sheetConvert(value, from, to);
+}
+
+/**
+ * Flexural stiffness EI from E and I given separately, optionally in their own units and converted to the unit wanted (for example E in ksi and I in in^4 to EI in kip*ft^2), ready for the EI argument. Signs: loads down + (EI is positive). Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.STIFFNESS(29000, 510, "ksi", "in^4", "kip*ft^2")
+ * @customfunction STIFFNESS
+ * @param E Modulus of elasticity (> 0): a cell or range.
+ * @param I Second moment of area (> 0): one cell, or a range the size of E (one per span).
+ * @param [EUnit] Unit of E, such as ksi, MPa or GPa. Give the units of both E and I, or neither.
+ * @param [IUnit] Unit of I, such as in^4, mm^4 or cm^4.
+ * @param [resultUnit] Unit of the result, such as kip*in^2 or kN*m^2. Blank = E unit x I unit.
+ * @returns E x I for each cell.
+ */
+export function stiffness(E: any[][], I: any[][], EUnit?: any, IUnit?: any, resultUnit?: any): any[][] {
+  return sheetStiffness(E, I, EUnit, IUnit, resultUnit);
 }

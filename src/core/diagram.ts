@@ -26,22 +26,29 @@ function rowOf(solution: Solution, piece: Piece, x: number, s: number): DiagramR
 export function diagram(solution: Solution, points: number): DiagramRow[] {
   if (!Number.isInteger(points) || points < 2) throw invalid(`points must be a whole number of at least 2, got ${points}`);
   const { length, pieces } = solution;
-  const xs: number[] = [];
-  for (let i = 0; i < points; i++) xs.push(i === points - 1 ? length : (length * i) / (points - 1));
-  for (const p of pieces) xs.push(p.x0);
-  const quantities: Quantity[] = solution.hasStiffness ? ["shear", "moment", "slope", "deflection"] : ["shear", "moment"];
-  for (const q of quantities) for (const c of candidates(solution, q)) xs.push(c.x);
-  xs.sort((a, b) => a - b);
   const tol = POSITION_TOLERANCE * length;
   const boundaries = new Set(pieces.map((p) => p.x0));
+  // Priority where stations fall within rounding of each other: a piece boundary (exact
+  // node or load position) first, then an evenly spaced station, then a peak location.
+  const marked: Array<[number, number]> = [];
+  for (let i = 0; i < points; i++) marked.push([i === points - 1 ? length : (length * i) / (points - 1), 1]);
+  for (const p of pieces) marked.push([p.x0, 2]);
+  const quantities: Quantity[] = solution.hasStiffness ? ["shear", "moment", "slope", "deflection"] : ["shear", "moment"];
+  for (const q of quantities) for (const c of candidates(solution, q)) marked.push([c.x, boundaries.has(c.x) ? 2 : 0]);
+  marked.sort((a, b) => a[0] - b[0]);
   const stations: number[] = [];
-  for (const x of xs) {
+  let lastPriority = -1;
+  for (const [x, priority] of marked) {
     const last = stations[stations.length - 1];
     if (stations.length > 0 && x - last <= tol) {
-      if (boundaries.has(x) && !boundaries.has(last)) stations[stations.length - 1] = x;
+      if (priority > lastPriority) {
+        stations[stations.length - 1] = x;
+        lastPriority = priority;
+      }
       continue;
     }
     stations.push(x);
+    lastPriority = priority;
   }
   const shearScale = solution.scales.shear;
   const momentScale = solution.scales.moment;

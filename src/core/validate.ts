@@ -90,6 +90,25 @@ function validateLoad(load: Load, length: number): void {
   }
 }
 
+/** A couple exactly at a hinge has no side to act on: the user must say which. */
+function rejectCouplesOnHinges(member: Member, length: number): void {
+  let x = 0;
+  const hinges: number[] = [];
+  member.supports.forEach((support, i) => {
+    if (support.kind === "hinge") hinges.push(x);
+    if (i < member.spans.length) x += member.spans[i];
+  });
+  if (hinges.length === 0) return;
+  const tol = POSITION_TOLERANCE * length;
+  for (const load of member.loads) {
+    if (load.kind !== "moment") continue;
+    const at = hinges.find((h) => Math.abs(h - load.xStart) <= tol);
+    if (at !== undefined) {
+      throw invalid(`load row ${load.row}: a couple exactly at the hinge at x = ${+at.toPrecision(12)} has no side to act on; place it just left or just right of the hinge`);
+    }
+  }
+}
+
 /**
  * Checks a member's data: positive finite spans, one support per node, known support kinds,
  * positive springs (which need EI), hinges only between spans, EI once or per span, and
@@ -102,4 +121,5 @@ export function validateMember(member: Member): void {
   validateSupports(member, length);
   if (!Array.isArray(member.loads)) throw invalid("loads: expected a list of loads");
   for (const load of member.loads) validateLoad(load, length);
+  rejectCouplesOnHinges(member, length);
 }

@@ -1,0 +1,188 @@
+/**
+ * Bodies of the worksheet functions that study many load arrangements of one member:
+ * envelopes over combinations (with pattern live load), governing peaks, influence lines,
+ * moving loads and the expansion of named combination sets.
+ */
+import {
+  envelope,
+  expandCombinationSet,
+  governingPeaks,
+  influenceLine,
+  invalid,
+  movingLoad,
+  trainFrom,
+  type Bound,
+  type EnvelopeOptions,
+  type Member,
+  type PatternMode,
+  type Quantity,
+} from "../core";
+import { errorCodeOf, isBlank, isEmpty, readNumber, show } from "./cells";
+import { readCombinations, readPsi0 } from "./combinations";
+import { readEffect } from "./effect";
+import { guarded } from "./hostError";
+import { readLoads, readMember } from "./member";
+import { isAllBlank, listEntries, rowsOf, singleCell } from "./ranges";
+import { finite } from "./shape";
+
+function memberOf(spans: unknown, loads: unknown, supports: unknown, EI: unknown): Member {
+  return readMember({ spans, loads, supports: supports ?? null, EI: EI ?? null, combo: null });
+}
+
+function caseLabels(loads: unknown): string[] {
+  return readLoads(loads).map((row) => row.loadCase);
+}
+
+/** Reads the pattern argument: blank or "none", "standard" or "full", optionally followed by the live case label. */
+export function readPattern(arg: unknown): EnvelopeOptions {
+  const cell = singleCell(arg);
+  if (cell === undefined) throw invalid("pattern: give one cell such as full L");
+  if (isBlank(cell)) return { pattern: "none" };
+  if (typeof cell !== "string" || errorCodeOf(cell) !== null) throw invalid(`pattern: ${show(cell)} is not a pattern; write none, standard or full, then the live case (default L)`);
+  const words = cell.trim().split(/\s+/);
+  const mode = words[0].toLowerCase();
+  if (mode !== "none" && mode !== "standard" && mode !== "full") {
+    throw invalid(`pattern: "${words[0]}" is not a pattern; write none, standard or full, then the live case (default L)`);
+  }
+  if (words.length > 2 || (words[1] !== undefined && !/^[A-Za-z][A-Za-z0-9]*$/.test(words[1]))) {
+    throw invalid(`pattern: "${cell.trim()}" should be the pattern and at most one case label, such as full L`);
+  }
+  return { pattern: mode as PatternMode, liveCase: words[1] ?? "L" };
+}
+
+function readQuantity(arg: unknown): Quantity {
+  const cell = singleCell(arg);
+  if (cell === undefined) throw invalid("quantity: give one cell: shear, moment or deflection");
+  if (isBlank(cell)) return "moment";
+  const text = typeof cell === "string" ? cell.trim().toLowerCase() : "";
+  if (text === "shear" || text === "moment" || text === "deflection") return text;
+  throw invalid(`quantity: ${show(cell)} is not one of shear, moment, deflection`);
+}
+
+function governedBy(bound: Bound): string {
+  return bound.arrangement ? `${bound.combination}; live on ${bound.arrangement}` : bound.combination;
+}
+
+function positionsOf(x: unknown): { cells: unknown[]; values: (number | null)[] } {
+  const rows = rowsOf(x);
+  const cells = rows.flatMap((row) => (Array.isArray(row) ? row : [row]));
+  if (cells.length === 0) throw invalid("x: give a cell or a range of positions");
+  const values = cells.map((cell, i) =>
+    isEmpty(cell) ? null : readNumber(cell, () => (cells.length === 1 ? "x" : `x cell ${i + 1}`)),
+  );
+  return { cells, values };
+}
+
+/** SPAN.ENVELOPE: one row per x cell [x, max, governed by, min, governed by]. */
+export function sheetEnvelope(
+  spans: unknown,
+  loads: unknown,
+  x: unknown,
+  combos: unknown,
+  supports: unknown,
+  EI: unknown,
+  quantity: unknown,
+  pattern: unknown,
+  psi0: unknown,
+): (number | string)[][] {
+  return guarded(() => {
+    const member = memberOf(spans, loads, supports, EI);
+    const q = readQuantity(quantity ?? null);
+    if (q === "deflection" && member.stiffness === null) throw invalid("quantity deflection needs EI: give EI for the member or each span");
+    const combinations = readCombinations(combos, psi0 ?? null, caseLabels(loads));
+    const options = readPattern(pattern ?? null);
+    const { values } = positionsOf(x);
+    const given = values.filter((v): v is number => v !== null);
+    const stations = envelope(member, combinations, given, options);
+    let next = 0;
+    return values.map((v) => {
+      if (v === null) return ["", "", "", "", ""];
+      const s = stations[next++];
+      const max = s.max[q]!;
+      const min = s.min[q]!;
+      return [v, finite(max.value, `the largest ${q}`), governedBy(max), finite(min.value, `the smallest ${q}`), governedBy(min)];
+    });
+  });
+}
+
+/** SPAN.PEAKS: rows [label, max, x at max, governed by, min, x at min, governed by]. */
+export function sheetPeaks(
+  spans: unknown,
+  loads: unknown,
+  combos: unknown,
+  supports: unknown,
+  EI: unknown,
+  pattern: unknown,
+  psi0: unknown,
+): (number | string)[][] {
+  return guarded(() => {
+    const member = memberOf(spans, loads, supports, EI);
+    const combinations = readCombinations(combos, psi0 ?? null, caseLabels(loads));
+    const peaks = governingPeaks(member, combinations, readPattern(pattern ?? null));
+    return peaks.map((p) => [
+      p.quantity,
+      finite(p.max.value, `the largest ${p.quantity}`),
+      p.max.x,
+      governedBy(p.max),
+      finite(p.min.value, `the smallest ${p.quantity}`),
+      p.min.x,
+      governedBy(p.min),
+    ]);
+  });
+}
+
+/** SPAN.INFLUENCE: the effect of a unit load at each position, in the shape of positions. */
+export function sheetInfluence(spans: unknown, effect: unknown, positions: unknown, supports: unknown, EI: unknown): (number | string)[][] {
+  return guarded(() => {
+    const member = memberOf(spans, null, supports, EI);
+    const e = readEffect(effect, false);
+    if (e.kind === "absolute-moment") throw invalid("effect: absolute moment applies to moving loads only");
+    const rows = rowsOf(positions);
+    if (rows.length === 0) throw invalid("positions: give a cell or a range of unit-load positions");
+    return rows.map((row, r) =>
+      (Array.isArray(row) ? row : [row]).map((cell, c) => {
+        if (isEmpty(cell)) return "";
+        const p = readNumber(cell, () => (rows.length === 1 && row.length === 1 ? "positions" : `positions row ${r + 1}, column ${c + 1}`));
+        return finite(influenceLine(member, e, [p])[0], `the ordinate at ${p}`);
+      }),
+    );
+  });
+}
+
+function readNumberList(arg: unknown, name: string): number[] {
+  const entries = listEntries(arg, name);
+  let count = entries.length;
+  while (count > 0 && isBlank(entries[count - 1])) count--;
+  return entries.slice(0, count).map((cell, i) => readNumber(cell, () => `${name} entry ${i + 1}`));
+}
+
+/** SPAN.MOVING: rows ["max" | "min", value, x of the first axle, direction, x where measured]. */
+export function sheetMoving(
+  spans: unknown,
+  axles: unknown,
+  spacings: unknown,
+  effect: unknown,
+  supports: unknown,
+  EI: unknown,
+): (number | string)[][] {
+  return guarded(() => {
+    const member = memberOf(spans, null, supports, EI);
+    const loads = readNumberList(axles, "axles");
+    const gaps = isAllBlank(spacings ?? null) ? [] : readNumberList(spacings, "spacings");
+    const result = movingLoad(member, trainFrom(loads, gaps), readEffect(effect, true));
+    return (["max", "min"] as const).map((label) => {
+      const p = result[label];
+      return [label, finite(p.value, `the ${label} value`), p.leadX, p.direction, p.x];
+    });
+  });
+}
+
+/** SPAN.COMBOS: the individual combinations of a named set, one per row. */
+export function sheetCombinationSet(name: unknown, psi0: unknown, cases: unknown): string[][] {
+  return guarded(() => {
+    const cell = singleCell(name);
+    if (typeof cell !== "string" || cell.trim() === "") throw invalid(`set: ${show(cell)} is not a set name; use ASCE7-2.3.1, ASCE7-2.4.1 or EN1990-6.10`);
+    const variableCases = isAllBlank(cases ?? null) ? ["Q"] : listEntries(cases, "cases").filter((c) => !isBlank(c)).map(String);
+    return expandCombinationSet(cell, { psi0: readPsi0(psi0 ?? null), variableCases }).map((c) => [c.text]);
+  });
+}

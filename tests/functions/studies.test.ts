@@ -1,0 +1,118 @@
+/**
+ * The load-arrangement functions called exactly as the host calls them: 2-D arrays, blanks as
+ * "", null or 0, skipped optional arguments as null. Values are checked against direct core
+ * calls and closed forms.
+ */
+import { combos, envelope, influence, moment, moving, peaks } from "../../functions/functions";
+import { relDiff } from "../../src/core/tolerance";
+
+const loadTable = [
+  ["udl", 3, "", "", "", "D"],
+  ["udl", 4, 0, 0, null, "L"],
+  ["point", 12, 10, "", "", "L"],
+  ["", "", "", "", "", ""],
+];
+const spans = [[6, 8, 6]];
+
+function codeOf(call: () => unknown): { code: string; message: string } {
+  try {
+    call();
+  } catch (e) {
+    return e as { code: string; message: string };
+  }
+  throw new Error("expected an error");
+}
+
+describe("SPAN.ENVELOPE", () => {
+  it("equals the max and min of SPAN.MOMENT over the combinations, naming the governing one", () => {
+    const list = [["1.4D"], ["1.2D+1.6L"], [""], ["0.9D"]];
+    const xs = [[0], [3], [""], [6], [10.5], [20]];
+    const rows = envelope(spans, loadTable, xs, list, null as any, null as any, null, null, null);
+    expect(rows).toHaveLength(6);
+    expect(rows[2]).toEqual(["", "", "", "", ""]);
+    for (const row of rows.filter((r) => r[0] !== "")) {
+      const each = ["1.4D", "1.2D+1.6L", "0.9D"].map((c) => moment(spans, loadTable, [[row[0]]], null as any, null as any, c)[0][0] as number);
+      expect(row[1]).toBe(Math.max(...each));
+      expect(row[3]).toBe(Math.min(...each));
+    }
+    expect(rows[1][2]).toBe("1.2D + 1.6L");
+  });
+
+  it("expands named sets and reports the loaded spans of a patterned live case", () => {
+    const rows = envelope(spans, loadTable, [[3], [6]], [["ASCE7-2.3.1"]], null as any, null as any, "moment", "full L", null);
+    expect(String(rows[0][2])).toMatch(/^1\.2D \+ 1\.6L \+ 0\.5(Lr|S|R); live on span/);
+    expect(String(rows[1][4])).toMatch(/live on spans 1, 2/);
+  });
+
+  it.each([
+    ["no combinations", () => envelope(spans, loadTable, [[3]], [[""]], null as any, null as any, null, null, null), /give at least one combination/],
+    ["bad combination text", () => envelope(spans, loadTable, [[3]], [["1.2D"], ["1.2D +"]], null as any, null as any, null, null, null), /combinations row 2, column 1: combination "1.2D \+"/],
+    ["bad pattern", () => envelope(spans, loadTable, [[3]], [["D"]], null as any, null as any, null, "checker", null), /pattern: "checker" is not a pattern/],
+    ["bad quantity", () => envelope(spans, loadTable, [[3]], [["D"]], null as any, null as any, "torsion", null, null), /quantity: "torsion" is not one of/],
+    ["deflection without EI", () => envelope(spans, loadTable, [[3]], [["D"]], null as any, null as any, "deflection", null, null), /deflection needs EI/],
+    ["EN 1990 without psi0", () => envelope(spans, loadTable, [[3]], [["EN1990-6.10"]], null as any, null as any, null, null, null), /psi0/],
+    ["x off the member", () => envelope(spans, loadTable, [[21]], [["D"]], null as any, null as any, null, null, null), /x = 21 is outside the member/],
+  ])("%s is #VALUE! with a message", (_name, call, message) => {
+    const e = codeOf(call);
+    expect(e.code).toBe("#VALUE!");
+    expect(e.message).toMatch(message);
+  });
+});
+
+describe("SPAN.PEAKS", () => {
+  it("rows for shear and moment, and slope and deflection with EI, each with x and the governing combination", () => {
+    const rows = peaks(spans, loadTable, [["1.4D"], ["1.2D+1.6L"]], null as any, [[20000]], null, null);
+    expect(rows.map((r) => r[0])).toEqual(["shear", "moment", "slope", "deflection"]);
+    const m = rows[1];
+    const each = ["1.4D", "1.2D+1.6L"].map((c) => moment(spans, loadTable, [[m[2]]], null as any, [[20000]], c)[0][0] as number);
+    expect(relDiff(m[1] as number, Math.max(...each))).toBeLessThan(1e-12);
+    expect(m[3]).toBe("1.2D + 1.6L");
+  });
+});
+
+describe("SPAN.INFLUENCE", () => {
+  it("simple span moment at midspan: xi/2 left of it, (L - xi)/2 right of it (Muller-Breslau, from memory), in the shape of positions", () => {
+    const out = influence([[10]], "moment at 5", [[0, 2.5, ""], [5, 7.5, 10]], null as any, null as any);
+    const exact = [[0, 1.25, ""], [2.5, 1.25, 0]];
+    out.forEach((row, r) => row.forEach((v, c) => (exact[r][c] === "" ? expect(v).toBe("") : expect(relDiff(v as number, exact[r][c] as number, 1)).toBeLessThan(1e-12))));
+  });
+
+  it.each([
+    ["unknown effect", "torque at 3", /effect: "torque at 3" is not an effect/],
+    ["absolute moment", "absolute moment", /moving loads only/],
+    ["node that does not exist", "reaction 4", /node 4 does not exist/],
+  ])("%s is #VALUE!", (_name, effect, message) => {
+    const e = codeOf(() => influence([[10]], effect, [[1]], null as any, null as any));
+    expect(e.code).toBe("#VALUE!");
+    expect(e.message).toMatch(message);
+  });
+});
+
+describe("SPAN.MOVING", () => {
+  it("two equal axles on a simple span: absolute maximum moment by the textbook rule (axle at L/2 - s/4)", () => {
+    const rows = moving([[12]], [[10, 10]], [[2]], "absolute moment", null as any, null as any);
+    // Closed form: M = R (L/2 - d/2)^2 / L with R = 20 and d = s/2 = 1.
+    expect(rows[0][0]).toBe("max");
+    expect(relDiff(rows[0][1] as number, (20 * 5.5 ** 2) / 12)).toBeLessThan(1e-10);
+    expect(rows[1][0]).toBe("min");
+  });
+
+  it("spacings must be one fewer than the axles", () => {
+    const e = codeOf(() => moving([[12]], [[10, 10, 10]], [[2]], "moment at 6", null as any, null as any));
+    expect(e.message).toMatch(/3 axles need 2 spacings, got 1/);
+  });
+});
+
+describe("SPAN.COMBOS", () => {
+  it("spills ASCE 7 strength combinations as a column (14 with the roof alternatives)", () => {
+    const out = combos("ASCE7-2.3.1", null, null as any);
+    expect(out).toHaveLength(14);
+    expect(out[0]).toEqual(["1.4D"]);
+  });
+  it("EN 1990 with psi0 pairs and case labels", () => {
+    expect(combos("EN1990-6.10", "Q 0.7, S 0.5", [["Q", "S"]])).toEqual([["1.35G"], ["1.35G + 1.5Q + 0.75S"], ["1.35G + 1.5S + 1.05Q"], ["1.0G + 1.5Q + 0.75S"], ["1.0G + 1.5S + 1.05Q"]]);
+  });
+  it("an unknown set is #VALUE!", () => {
+    expect(codeOf(() => combos("NBC-1", null, null as any)).message).toMatch(/unknown combination set "NBC-1"/);
+  });
+});
