@@ -8,7 +8,20 @@
 /** A worksheet function as functions/functions.ts exports it. */
 export type SheetFunction = (...args: any[]) => unknown[][];
 
-export type SpanExport = "reactions" | "shear" | "moment" | "slope" | "deflection" | "maxMoment" | "extremes" | "diagram";
+export type SpanExport =
+  | "reactions"
+  | "shear"
+  | "moment"
+  | "slope"
+  | "deflection"
+  | "maxMoment"
+  | "extremes"
+  | "diagram"
+  | "envelope"
+  | "peaks"
+  | "influence"
+  | "moving"
+  | "combos";
 
 /** The function table the engine calls: the real exports, or a stand-in in tests. */
 export type SpanFunctions = Record<SpanExport, SheetFunction>;
@@ -17,7 +30,7 @@ export type SpanFunctions = Record<SpanExport, SheetFunction>;
 export type ArgumentKind = "block" | "value";
 
 /** How the spill size is predicted from the formula text. */
-export type SizeRule = "perNode" | "shapeOfX" | "twoByTwo" | "extremes" | "diagram";
+export type SizeRule = "perNode" | "shapeOfX" | "twoByTwo" | "extremes" | "diagram" | "rowPerX" | "peaks" | "shapeOfPositions" | "twoByFive" | "learned";
 
 export interface SpanFunctionEntry {
   sheetName: string;
@@ -37,6 +50,39 @@ const tail = [
 ] as const;
 const atX = [...member, { name: "x", kind: "block", optional: false }, ...tail] as const;
 
+const block = (name: string, optional = false) => ({ name, kind: "block" as const, optional });
+const value = (name: string, optional = false) => ({ name, kind: "value" as const, optional });
+
+/** Functions that study load arrangements (envelopes, peaks, influence lines, moving loads). */
+const STUDIES: SpanFunctionEntry[] = [
+  {
+    sheetName: "SPAN.ENVELOPE",
+    exportName: "envelope",
+    arguments: [...member, block("x"), block("combos"), block("supports", true), block("EI", true), value("quantity", true), value("pattern", true), value("psi0", true)],
+    sizeRule: "rowPerX",
+  },
+  {
+    sheetName: "SPAN.PEAKS",
+    exportName: "peaks",
+    arguments: [...member, block("combos"), block("supports", true), block("EI", true), value("pattern", true), value("psi0", true)],
+    sizeRule: "peaks",
+  },
+  {
+    sheetName: "SPAN.INFLUENCE",
+    exportName: "influence",
+    arguments: [block("spans"), value("effect"), block("positions"), block("supports", true), block("EI", true)],
+    sizeRule: "shapeOfPositions",
+  },
+  {
+    sheetName: "SPAN.MOVING",
+    exportName: "moving",
+    arguments: [block("spans"), block("axles"), block("spacings"), value("effect"), block("supports", true), block("EI", true)],
+    sizeRule: "twoByFive",
+  },
+  { sheetName: "SPAN.COMBOS", exportName: "combos", arguments: [value("set"), value("psi0", true), block("cases", true)], sizeRule: "learned" },
+];
+
+
 export const SPAN_FUNCTIONS: readonly SpanFunctionEntry[] = [
   { sheetName: "SPAN.REACTIONS", exportName: "reactions", arguments: [...member, ...tail], sizeRule: "perNode" },
   { sheetName: "SPAN.SHEAR", exportName: "shear", arguments: atX, sizeRule: "shapeOfX" },
@@ -51,6 +97,7 @@ export const SPAN_FUNCTIONS: readonly SpanFunctionEntry[] = [
     arguments: [...member, { name: "points", kind: "value", optional: true }, ...tail],
     sizeRule: "diagram",
   },
+  ...STUDIES,
 ];
 
 export function entryFor(sheetName: string): SpanFunctionEntry | undefined {

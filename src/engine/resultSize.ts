@@ -54,6 +54,21 @@ export function predictSize(entry: SpanFunctionEntry, args: readonly ArgumentNod
       return { rows: 2, cols: 2 };
     case "extremes":
       return { rows: isGiven(argument("EI")) ? 4 : 2, cols: 5 };
+    case "rowPerX": {
+      const x = argument("x");
+      const size = isGiven(x) ? sizeOf(x) : { rows: 1, cols: 1 };
+      return { rows: Math.max(1, size.rows * size.cols), cols: 5 };
+    }
+    case "peaks":
+      return { rows: isGiven(argument("EI")) ? 4 : 2, cols: 7 };
+    case "shapeOfPositions": {
+      const positions = argument("positions");
+      return isGiven(positions) ? sizeOf(positions) : { rows: 1, cols: 1 };
+    }
+    case "twoByFive":
+      return { rows: 2, cols: 5 };
+    case "learned":
+      return { rows: 1, cols: 1 };
     case "diagram": {
       const points = argument("points");
       const count = points && points.type === "NUMBER" && typeof points.value === "number" ? Math.trunc(points.value) : DEFAULT_DIAGRAM_POINTS;
