@@ -30,6 +30,14 @@ export const CATALOGUE: CatalogueEntry[] = [
   { id: "MAXMOMENT", exportName: "maxMoment", parameters: [...member, ...trailing] },
   { id: "EXTREMES", exportName: "extremes", parameters: [...member, ...trailing] },
   { id: "DIAGRAM", exportName: "diagram", parameters: [...member, ["points", "scalar", true], ...trailing] },
+  // sections, stresses, serviceability checks and units
+  { id: "SECTION", exportName: "section", parameters: [["shape", "scalar", false], ["dimensions", "matrix", false], ["unit", "scalar", true], ["resultUnit", "scalar", true]] },
+  { id: "STRESS", exportName: "stress", parameters: [...member, ["section", "matrix", false], ...trailing, ["units", "matrix", true]] },
+  { id: "SHEARSTRESS", exportName: "shearStress", parameters: [...member, ["section", "matrix", false], ...trailing, ["units", "matrix", true]] },
+  { id: "DEFLECTIONCHECK", exportName: "deflectionCheck", parameters: [...member, ["limit", "matrix", false], ...trailing, ["units", "matrix", true]] },
+  { id: "UTILISATION", exportName: "utilisation", parameters: [["demand", "matrix", false], ["capacity", "matrix", false], ["demandUnit", "scalar", true], ["capacityUnit", "scalar", true]] },
+  { id: "CONVERT", exportName: "convertUnits", parameters: [["value", "matrix", false], ["from", "scalar", false], ["to", "scalar", false]] },
+  { id: "STIFFNESS", exportName: "stiffness", parameters: [["E", "matrix", false], ["I", "matrix", false], ["EUnit", "scalar", true], ["IUnit", "scalar", true], ["resultUnit", "scalar", true]] },
 ];
 
 interface MetadataParameter {
@@ -69,7 +77,8 @@ export function catalogueMismatches(functions: MetadataFunction[]): string[] {
     if (!f.description || !/aid to a qualified engineer/.test(f.description) || !/local codes govern/.test(f.description)) {
       out.push(`${entry.id}: help lacks the caution`);
     }
-    if (!f.description || !/loads down \+/.test(f.description) || !/Example: =SPAN\./.test(f.description)) {
+    const takesLoads = entry.parameters.some(([name]) => name === "loads");
+    if (!f.description || (takesLoads && !/loads down \+/.test(f.description)) || !/Example: =SPAN\./.test(f.description)) {
       out.push(`${entry.id}: help lacks the sign convention or an example`);
     }
   }
