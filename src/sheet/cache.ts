@@ -1,59 +1,88 @@
 /**
  * Solved members, keyed on the raw member arguments, so that a diagram, or many x-cells of
  * one member, solve once. Solving is pure, so a cached solution is always the right one.
- * The key is built straight from the cell values (before any parsing) to keep the hot path
- * lean; different spellings of one member just get separate entries. Least recently used
- * entries are dropped beyond `capacity`.
+ *
+ * The hot path is lean: a 32-bit hash of the cell values (no strings built, no parsing)
+ * finds the entry, and a cell-by-cell comparison with a copy of the arguments it was solved
+ * from confirms it, so a hash collision is only ever a miss. Different spellings of one
+ * member (6 vs "6", a range vs a text cell) just get separate entries. Least recently used
+ * entries are dropped beyond the capacity.
  */
 import type { Solution } from "../core";
 import type { MemberArgs } from "./member";
 
-/** Appends one argument's cells to a key; false when a cell cannot be keyed (error objects). */
-function keyOf(arg: unknown): string | null {
-  if (arg === null || arg === undefined) return "_";
-  switch (typeof arg) {
-    case "number":
-      return "n" + arg;
-    case "string":
-      return "s" + arg.length + ":" + arg;
-    case "boolean":
-      return arg ? "t" : "f";
-    case "object":
-      break;
-    default:
-      return null;
-  }
-  if (!Array.isArray(arg)) return null;
-  let key = "[";
-  for (let i = 0; i < arg.length; i++) {
-    const part = keyOf(arg[i]);
-    if (part === null) return null;
-    key += part + ",";
-  }
-  return key + "]";
+const scratch = new Float64Array(1);
+const scratchWords = new Uint32Array(scratch.buffer);
+
+function mix(hash: number, value: number): number {
+  let h = Math.imul(hash ^ value, 0x5bd1e995);
+  h ^= h >>> 15;
+  return h;
 }
 
-/** A cache key for the member arguments, or null when they cannot be keyed. */
-export function memberKey(args: MemberArgs): string | null {
-  const spans = keyOf(args.spans);
-  const loads = keyOf(args.loads);
-  const supports = keyOf(args.supports);
-  const stiffness = keyOf(args.EI);
-  const combo = keyOf(args.combo);
-  if (spans === null || loads === null || supports === null || stiffness === null || combo === null) return null;
-  return spans + "|" + loads + "|" + supports + "|" + stiffness + "|" + combo;
+/** Hash of one argument's cells, or NaN when a cell cannot be keyed (error objects). */
+function hashOf(arg: unknown, hash: number): number {
+  if (arg === null || arg === undefined) return mix(hash, 1);
+  switch (typeof arg) {
+    case "number":
+      scratch[0] = arg === 0 ? 0 : arg;
+      return mix(mix(mix(hash, 2), scratchWords[0]), scratchWords[1]);
+    case "string": {
+      let h = mix(hash, 3 + arg.length * 16);
+      for (let i = 0; i < arg.length; i++) h = mix(h, arg.charCodeAt(i));
+      return h;
+    }
+    case "boolean":
+      return mix(hash, arg ? 4 : 5);
+    case "object": {
+      if (!Array.isArray(arg)) return NaN;
+      let h = mix(hash, 6 + arg.length * 16);
+      for (let i = 0; i < arg.length; i++) {
+        h = hashOf(arg[i], h);
+        if (h !== h) return NaN;
+      }
+      return mix(h, 7);
+    }
+    default:
+      return NaN;
+  }
+}
+
+/** A 32-bit hash of the member arguments' cells, or null when they cannot be keyed. */
+export function memberHash(args: MemberArgs): number | null {
+  const parts = [args.spans, args.loads, args.supports, args.EI, args.combo];
+  let h = 0x9e3779b9 | 0;
+  for (let i = 0; i < parts.length; i++) {
+    h = hashOf(parts[i], mix(h, 11 + i));
+    if (h !== h) return null;
+  }
+  return h >>> 0;
+}
+
+/** True when two arguments hold the same cells in the same shape (same types, same values). */
+export function sameCells(a: unknown, b: unknown): boolean {
+  if (a === b) return true;
+  if (a === null || b === null || a === undefined || b === undefined) return (a ?? null) === (b ?? null);
+  if (!Array.isArray(a) || !Array.isArray(b) || a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (!sameCells(a[i], b[i])) return false;
+  return true;
+}
+
+/** A copy of an argument's cells (arrays copied, cell values are primitives). */
+function snapshot(arg: unknown): unknown {
+  return Array.isArray(arg) ? arg.map(snapshot) : arg;
 }
 
 /** A small least-recently-used map. */
-export class LruCache<V> {
-  private readonly entries = new Map<string, V>();
+export class LruCache<K, V> {
+  private readonly entries = new Map<K, V>();
   constructor(readonly capacity: number) {}
 
   get size(): number {
     return this.entries.size;
   }
 
-  get(key: string): V | undefined {
+  get(key: K): V | undefined {
     const value = this.entries.get(key);
     if (value !== undefined) {
       this.entries.delete(key);
@@ -62,13 +91,10 @@ export class LruCache<V> {
     return value;
   }
 
-  set(key: string, value: V): void {
+  set(key: K, value: V): void {
     this.entries.delete(key);
     this.entries.set(key, value);
-    if (this.entries.size > this.capacity) {
-      const oldest = this.entries.keys().next().value as string;
-      this.entries.delete(oldest);
-    }
+    if (this.entries.size > this.capacity) this.entries.delete(this.entries.keys().next().value as K);
   }
 
   clear(): void {
@@ -76,8 +102,57 @@ export class LruCache<V> {
   }
 }
 
+interface Entry {
+  args: MemberArgs;
+  solution: Solution;
+}
+
+/** Solutions keyed on the raw member arguments. */
+export class MemberCache {
+  private readonly entries: LruCache<number, Entry>;
+  /** The entry used last: already the most recent, so a repeat hit skips the LRU update. */
+  private lastHash = -1;
+  private lastEntry: Entry | undefined = undefined;
+  constructor(readonly capacity: number) {
+    this.entries = new LruCache(capacity);
+  }
+
+  get size(): number {
+    return this.entries.size;
+  }
+
+  /** The solution cached for exactly these arguments, if any. */
+  get(args: MemberArgs, hash: number): Solution | undefined {
+    const entry = hash === this.lastHash ? this.lastEntry : this.entries.get(hash);
+    if (entry === undefined) return undefined;
+    this.lastHash = hash;
+    this.lastEntry = entry;
+    const same =
+      sameCells(entry.args.spans, args.spans) &&
+      sameCells(entry.args.loads, args.loads) &&
+      sameCells(entry.args.supports, args.supports) &&
+      sameCells(entry.args.EI, args.EI) &&
+      sameCells(entry.args.combo, args.combo);
+    return same ? entry.solution : undefined;
+  }
+
+  set(args: MemberArgs, hash: number, solution: Solution): void {
+    const copy: MemberArgs = { spans: snapshot(args.spans), loads: snapshot(args.loads), supports: snapshot(args.supports), EI: snapshot(args.EI), combo: snapshot(args.combo) };
+    const entry = { args: copy, solution };
+    this.entries.set(hash, entry);
+    this.lastHash = hash;
+    this.lastEntry = entry;
+  }
+
+  clear(): void {
+    this.entries.clear();
+    this.lastHash = -1;
+    this.lastEntry = undefined;
+  }
+}
+
 /** How many solved members are kept. */
 export const MEMBER_CACHE_SIZE = 256;
 
 /** The solved-member cache shared by every sheet function. */
-export const solvedMembers = new LruCache<Solution>(MEMBER_CACHE_SIZE);
+export const solvedMembers = new MemberCache(MEMBER_CACHE_SIZE);

@@ -23,7 +23,11 @@ export function isBlank(value: unknown): boolean {
 
 /** The error code a cell holds ("#N/A", "#DIV/0!", ...), or null when it holds no error. */
 export function errorCodeOf(value: unknown): string | null {
-  if (typeof value === "string") return ERROR_TEXT.test(value.trim()) ? value.trim() : null;
+  if (typeof value === "string") {
+    if (value.indexOf("#") < 0) return null;
+    const trimmed = value.trim();
+    return ERROR_TEXT.test(trimmed) ? trimmed : null;
+  }
   if (typeof value === "object" && value !== null) {
     const code = (value as { code?: unknown; errorCode?: unknown }).code ?? (value as { errorCode?: unknown }).errorCode;
     if (typeof code === "string") return code.startsWith("#") ? code : `#${code}`;
@@ -57,16 +61,16 @@ export function show(value: unknown): string {
  */
 export function readNumber(value: unknown, where: () => string, blank?: number): number {
   if (typeof value === "number" && Number.isFinite(value)) return value;
+  if (typeof value === "string") {
+    const parsed = numberFromText(value);
+    if (parsed !== null) return parsed;
+  }
   if (isEmpty(value)) {
     if (blank !== undefined) return blank;
     throw invalid(`${where()}: the cell is blank; give a number`);
   }
   const code = errorCodeOf(value);
   if (code !== null) throw invalid(`${where()}: the cell holds the error ${code}`);
-  if (typeof value === "string") {
-    const parsed = numberFromText(value);
-    if (parsed !== null) return parsed;
-  }
   throw invalid(`${where()}: ${show(value)} is not a number`);
 }
 

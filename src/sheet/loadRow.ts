@@ -2,7 +2,7 @@
  * One load as the user wrote it, in a load-table row or the load notation, before the member
  * length is known: `xEnd` null means "to the member end" (blank or 0 in the table).
  */
-import { invalid, type Load, type LoadKind } from "../core";
+import { invalid, tolerance, type Load, type LoadKind } from "../core";
 
 export interface LoadRow {
   kind: LoadKind;
@@ -45,17 +45,21 @@ function isDistributed(kind: LoadKind): boolean {
 
 /**
  * The solver's load for a row on a member of the given length. Positions are checked here
- * so that the message names the column; the solver validates again.
+ * so that the message names the column (a position within rounding of the member end, as
+ * the solver's tolerance allows, is on the member); the solver validates again. The values
+ * the user gave are passed on unchanged.
  */
 export function toLoad(row: LoadRow, length: number): Load {
   const { xStart } = row;
+  const end = length * (1 + tolerance.POSITION_TOLERANCE);
+  const shownEnd = Number(length.toPrecision(12));
   if (xStart < 0) throw invalid(`${placeOf(row.row, row.fromText, "x start")}: ${xStart} is before the member start 0`);
-  if (xStart > length) throw invalid(`${placeOf(row.row, row.fromText, "x start")}: ${xStart} is beyond the member end ${length}`);
+  if (xStart > end) throw invalid(`${placeOf(row.row, row.fromText, "x start")}: ${xStart} is beyond the member end ${shownEnd}`);
   if (!isDistributed(row.kind)) {
     return { kind: row.kind, magnitude: row.magnitude, xStart, xEnd: xStart, magnitudeEnd: 0, loadCase: row.loadCase, row: row.row };
   }
   const xEnd = row.xEnd === null ? length : row.xEnd;
-  if (xEnd > length) throw invalid(`${placeOf(row.row, row.fromText, "x end")}: ${xEnd} is beyond the member end ${length}`);
+  if (xEnd > end) throw invalid(`${placeOf(row.row, row.fromText, "x end")}: ${xEnd} is beyond the member end ${shownEnd}`);
   if (xEnd <= xStart) {
     throw invalid(`${placeOf(row.row, row.fromText, "x end")}: ${xEnd} is not beyond x start ${xStart}, so the load has no length`);
   }

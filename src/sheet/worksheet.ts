@@ -5,7 +5,7 @@
  */
 import { diagram, extremes, invalid, solve, unavailable, valueAt, type Quantity, type Solution } from "../core";
 import { errorCodeOf, isEmpty, readNumber } from "./cells";
-import { memberKey, solvedMembers } from "./cache";
+import { memberHash, solvedMembers } from "./cache";
 import { guarded } from "./hostError";
 import { readMember, type MemberArgs } from "./member";
 import { singleCell } from "./ranges";
@@ -18,13 +18,13 @@ export const MAX_POINTS = 10001;
 
 /** The solution for the member arguments, from the cache when the same arguments were solved before. */
 export function solvedMember(args: MemberArgs): Solution {
-  const key = memberKey(args);
-  if (key !== null) {
-    const cached = solvedMembers.get(key);
+  const hash = memberHash(args);
+  if (hash !== null) {
+    const cached = solvedMembers.get(args, hash);
     if (cached !== undefined) return cached;
   }
   const solution = solve(readMember(args));
-  if (key !== null) solvedMembers.set(key, solution);
+  if (hash !== null) solvedMembers.set(args, hash, solution);
   return solution;
 }
 

@@ -42,3 +42,15 @@ describe("case labels and places", () => {
     expect(placeOf(2, true, "x end")).toBe("load 2 of the loads text (x end)");
   });
 });
+
+describe("positions at the member end within rounding (spans 3.3 + 3.3 + 3.3 sum to 9.899999999999999 in binary)", () => {
+  const length = 3.3 + 3.3 + 3.3;
+  test("a point load typed at 9.9 is on the member and keeps the value typed", () => {
+    expect(length).toBeLessThan(9.9);
+    expect(toLoad({ ...base, kind: "point", xStart: 9.9 }, length).xStart).toBe(9.9);
+    expect(toLoad({ ...base, xStart: 1, xEnd: 9.9 }, length).xEnd).toBe(9.9);
+  });
+  test("clearly beyond is still an error, with the end shown as typed", () => {
+    expect(() => toLoad({ ...base, kind: "point", xStart: 9.901 }, length)).toThrow(/9.901 is beyond the member end 9.9$/);
+  });
+});
