@@ -24,6 +24,7 @@ describe("validateMember accepts well-formed members", () => {
     // as the user typed it must not be reported as beyond the end.
     ["point load at the end of spans 0.7 + 0.1", member({ spans: [0.7, 0.1], loads: [point(1, 0.8)] })],
     ["udl to the end of spans 0.7 + 0.1", member({ spans: [0.7, 0.1], loads: [udl(1, 0, 0.8)] })],
+    ["a couple just beside a hinge", member({ spans: [4, 4], supports: ["fixed", "hinge", "pin"], loads: [couple(1, 4.001)] })],
   ];
   test.each(cases)("%s", (_name, m) => {
     expect(() => validateMember(m)).not.toThrow();
@@ -62,6 +63,11 @@ describe("validateMember rejects bad members with #VALUE! and a message naming t
     ["udl running backwards", () => withLoadRow(udl(1, 5, 3), 2), /load row 2.*x end/i],
     ["udl ending at 0 (a blank read as zero)", () => withLoadRow(udl(1, 0, 0), 2), /load row 2.*x end/i],
     ["linear with NaN end magnitude", () => withLoadRow(linear(1, 0, NaN, 4), 5), /load row 5.*magnitude at end/i],
+    [
+      "a couple exactly on a hinge",
+      () => member({ spans: [4, 4], supports: ["fixed", "hinge", "pin"], loads: [{ ...couple(1, 4), row: 6 }] }),
+      /load row 6.*hinge/i,
+    ],
     ["linear with NaN x end", () => withLoadRow(linear(1, 0, 2, NaN), 5), /load row 5.*x end/i],
   ];
   test.each(cases)("%s", (_name, make, message) => {
