@@ -64,7 +64,7 @@ function addinConfig(env, argv) {
   return {
     ...base,
     name: "addin",
-    entry: { functions: "./functions/functions.ts" },
+    entry: { functions: "./functions/functions.ts", taskpane: "./src/pane/taskpane.ts" },
     output: { ...base.output, filename: "[name].js" },
     plugins: [
       new CustomFunctionsMetadataPlugin({ input: "./functions/functions.ts", output: "functions.json" }),
@@ -73,9 +73,8 @@ function addinConfig(env, argv) {
         template: "./functions/functions.html",
         chunks: ["functions"],
       }),
-      // Placeholder for the page the manifest's DefaultSettings names, until the pane's own
-      // configuration emits taskpane.html (then drop this plugin).
-      new HtmlWebpackPlugin({ filename: "taskpane.html", template: "./assets/taskpane-placeholder.html", chunks: [] }),
+      // The diagram pane, the page the manifest's DefaultSettings names.
+      new HtmlWebpackPlugin({ filename: "taskpane.html", template: "./src/pane/taskpane.html", chunks: ["taskpane"] }),
       new CopyWebpackPlugin({
         patterns: [
           { from: "assets/*.png", to: "assets/[name][ext]" },
