@@ -53,6 +53,8 @@ export interface SheetHost {
   isEmpty(address: string): Promise<boolean>;
   /** Writes a block with its top-left cell at the range's top-left; the range must have the block's size. */
   writeBlock(address: string, block: CellInput[][]): Promise<void>;
+  /** Empties the cells of a range (contents only), after the user agreed to overwrite them. */
+  clear(address: string): Promise<void>;
   addChart(request: ChartRequest): Promise<void>;
   /** Calls back on every selection change; returns the unsubscribe function. */
   onSelectionChange(listener: () => void): () => void;

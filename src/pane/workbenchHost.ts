@@ -80,6 +80,13 @@ export class WorkbenchHost implements SheetHost {
     this.api.setValues(address, block);
   }
 
+  async clear(address: string): Promise<void> {
+    const block = parseBlock(splitAddress(address).address);
+    const rows = block.to.row - block.from.row + 1;
+    const cols = block.to.col - block.from.col + 1;
+    this.api.setValues(address, Array.from({ length: rows }, () => Array.from({ length: cols }, () => null)));
+  }
+
   async addChart(request: ChartRequest): Promise<void> {
     const x = numbers(await this.getValues(qualify(request.sheet, request.x)));
     const series = await Promise.all(

@@ -83,6 +83,14 @@ export class FakeHost implements SheetHost {
       }),
     );
   }
+  readonly cleared: string[] = [];
+  async clear(address: string): Promise<void> {
+    this.cleared.push(address);
+    const { sheet = this.selection.sheet, address: range } = splitAddress(address);
+    const block = parseBlock(range);
+    const grid = this.grid(sheet);
+    for (let r = block.from.row; r <= block.to.row; r++) for (let c = block.from.col; c <= block.to.col; c++) grid.delete(blockText({ from: { row: r, col: c }, to: { row: r, col: c } }));
+  }
   async addChart(request: ChartRequest): Promise<void> {
     this.charts.push(request);
   }

@@ -1,0 +1,403 @@
+/**
+ * The diagram pane's page logic: follows the host's selection (debounced, asynchronous, so
+ * typing is never held up), finds and solves the member, draws it, shows the readout under the
+ * pointer, and writes the table and charts into the sheet on request. All host access goes
+ * through SheetHost; all drawing is the pure draw/ code.
+ */
+import { diagram } from "../core";
+import { debounce } from "./debounce";
+import { drawDiagrams, type Drawing } from "./draw/diagramSvg";
+import { escapeXml } from "./draw/format";
+import type { Theme } from "./draw/palette";
+import { readoutAt, readoutText, xAtPixel } from "./draw/readout";
+import { MEMBER_ARGUMENTS, classifyArgument, type MemberArgument } from "./formulaRefs";
+import { qualify, type SheetHost } from "./host";
+import { findMember, resolveSources, solveMember, type MemberSources, type ResolvedMember, type Solved } from "./memberFromSheet";
+import { chartRequests, planTable, writeTable } from "./writeBack";
+import { DEFAULT_POINTS } from "../sheet";
+
+export const CAUTION = "Results are an aid to a qualified engineer, who checks them; local codes and licensed practice govern.";
+
+export interface PaneElements {
+  root: HTMLElement;
+}
+
+const FORMULA_COMBO = "\u0000formula";
+
+function el<T extends HTMLElement>(root: HTMLElement, selector: string): T {
+  const found = root.querySelector(selector);
+  if (!found) throw new Error(`the pane lacks ${selector}`);
+  return found as T;
+}
+
+export const PANE_HTML = `
+<div class="pane-head"><strong>Spanwise diagrams</strong> <span class="host-kind"></span></div>
+<p class="caution">${escapeXml(CAUTION)}</p>
+<p class="source" aria-live="polite">Select a cell holding a SPAN formula.</p>
+<p class="message" role="status" hidden></p>
+<form class="pick" hidden>
+  <p>Pick the member's input ranges (select a range in the sheet, then press its "use selection"):</p>
+  ${MEMBER_ARGUMENTS.map((name) => `<label><span>${name}</span><input name="${name}" spellcheck="false" autocomplete="off"/><button type="button" data-use="${name}">use selection</button></label>`).join("")}
+  <button type="submit" class="draw-picked">Draw</button>
+</form>
+<div class="controls" hidden>
+  <label class="combo" hidden><span>Combination</span><select></select><input class="combo-text" spellcheck="false" autocomplete="off" aria-label="combination"/></label>
+  <label><span>Length unit</span><input class="unit-length" size="4" autocomplete="off"/></label>
+  <label><span>Force unit</span><input class="unit-force" size="4" autocomplete="off"/></label>
+</div>
+<div class="figure"></div>
+<div class="readout" aria-live="off"></div>
+<div class="actions" hidden>
+  <button type="button" class="write-table">Write diagram table</button>
+  <button type="button" class="insert-charts">Insert charts</button>
+  <button type="button" class="export-svg">Export SVG</button>
+  <button type="button" class="export-png">Export PNG</button>
+</div>
+<div class="confirm" role="alertdialog" hidden><p></p><button type="button" class="confirm-yes">Write anyway</button> <button type="button" class="confirm-no">Cancel</button></div>
+`;
+
+export class Pane {
+  private generation = 0;
+  private resolved: ResolvedMember | undefined;
+  private solved: Solved | undefined;
+  private drawing: Drawing | undefined;
+  private unitsEdited = false;
+  private pendingConfirm: ((ok: boolean) => void) | undefined;
+  private readonly follow = debounce(() => void this.refresh(), 180);
+  private unsubscribe: (() => void) | undefined;
+  /** Milliseconds the last redraw took (solve, diagram, SVG, into the page). */
+  lastDrawMs = 0;
+
+  constructor(
+    private readonly host: SheetHost,
+    private readonly root: HTMLElement,
+    private readonly themeOf: () => Theme,
+  ) {
+    root.classList.add("spanwise-pane");
+    root.innerHTML = PANE_HTML;
+    el(root, ".host-kind").textContent = `(${host.kind})`;
+    this.bind();
+  }
+
+  start(): void {
+    this.unsubscribe = this.host.onSelectionChange(() => this.follow());
+    void this.refresh();
+  }
+
+  stop(): void {
+    this.unsubscribe?.();
+    this.follow.cancel();
+  }
+
+  get member(): ResolvedMember | undefined {
+    return this.resolved;
+  }
+
+  get currentDrawing(): Drawing | undefined {
+    return this.drawing;
+  }
+
+  private message(text: string | undefined, kind: "info" | "error" = "info"): void {
+    const box = el<HTMLElement>(this.root, ".message");
+    box.hidden = !text;
+    box.textContent = text ?? "";
+    box.dataset.kind = kind;
+  }
+
+  /** Reads the selection and, when it holds a SPAN formula, finds, solves and draws its member. */
+  async refresh(): Promise<void> {
+    const generation = ++this.generation;
+    try {
+      const selection = await this.host.getSelection();
+      if (generation !== this.generation) return;
+      if (!selection.formula || !/SPAN/i.test(selection.formula)) {
+        if (!this.resolved) el(this.root, ".source").textContent = `${selection.cell}: select a cell holding a SPAN formula.`;
+        return;
+      }
+      const lookup = await findMember(this.host, selection);
+      if (generation !== this.generation) return;
+      el(this.root, ".source").textContent = `${qualify(selection.sheet, selection.cell)}  ${selection.formula}`;
+      if (!lookup.ok) {
+        this.message(lookup.message, "error");
+        if (lookup.reason === "unresolved") this.showPick(lookup.call.args as Partial<MemberSources>, lookup.unresolved);
+        return;
+      }
+      this.use(lookup.member);
+    } catch (error) {
+      if (generation === this.generation) this.message(error instanceof Error ? error.message : String(error), "error");
+    }
+  }
+
+  private use(member: ResolvedMember): void {
+    this.resolved = member;
+    el<HTMLFormElement>(this.root, ".pick").hidden = true;
+    this.message(undefined);
+    if (!this.unitsEdited) {
+      el<HTMLInputElement>(this.root, ".unit-length").value = member.units.length;
+      el<HTMLInputElement>(this.root, ".unit-force").value = member.units.force;
+    }
+    this.fillCombos(member);
+    el(this.root, ".controls").hidden = false;
+    this.redraw();
+  }
+
+  private fillCombos(member: ResolvedMember): void {
+    const label = el<HTMLElement>(this.root, ".combo");
+    const select = el<HTMLSelectElement>(this.root, ".combo select");
+    const formulaCombo = typeof member.args.combo === "string" ? member.args.combo : Array.isArray(member.args.combo) ? String(member.args.combo[0]?.[0] ?? "") : "";
+    const options: [string, string][] = [[FORMULA_COMBO, formulaCombo ? `as in the formula: ${formulaCombo}` : "as in the formula: every load at 1"], ["", "every load at 1"]];
+    for (const c of member.cases) options.push([c, `${c} alone`]);
+    select.innerHTML = options.map(([value, text]) => `<option value="${escapeXml(value)}">${escapeXml(text)}</option>`).join("");
+    select.value = FORMULA_COMBO;
+    el<HTMLInputElement>(this.root, ".combo-text").value = formulaCombo;
+    label.hidden = member.cases.length === 0;
+  }
+
+  /** The combination the user chose, or undefined for the formula's own. */
+  private chosenCombo(): string | undefined {
+    const select = el<HTMLSelectElement>(this.root, ".combo select");
+    const text = el<HTMLInputElement>(this.root, ".combo-text").value.trim();
+    if (select.value === FORMULA_COMBO && text === (this.formulaComboText() ?? "")) return undefined;
+    return text;
+  }
+
+  private formulaComboText(): string | undefined {
+    const combo = this.resolved?.args.combo;
+    return typeof combo === "string" ? combo : Array.isArray(combo) ? String(combo[0]?.[0] ?? "") : "";
+  }
+
+  private units() {
+    return { length: el<HTMLInputElement>(this.root, ".unit-length").value.trim(), force: el<HTMLInputElement>(this.root, ".unit-force").value.trim() };
+  }
+
+  /** Solves (with the chosen combination) and draws; returns the time taken in ms. */
+  redraw(): number {
+    const member = this.resolved;
+    if (!member) return 0;
+    const started = performance.now();
+    const solved = solveMember(member, this.chosenCombo());
+    const figure = el<HTMLElement>(this.root, ".figure");
+    if ("error" in solved) {
+      this.solved = undefined;
+      this.drawing = undefined;
+      figure.innerHTML = "";
+      el(this.root, ".actions").hidden = true;
+      this.message(solved.error, "error");
+      return performance.now() - started;
+    }
+    this.message(undefined);
+    this.solved = solved;
+    const width = Math.max(320, Math.floor(figure.clientWidth || this.root.clientWidth || 360));
+    const theme = this.themeOf();
+    this.root.dataset.theme = theme;
+    this.drawing = drawDiagrams({
+      member: solved.member,
+      solution: solved.solution,
+      units: this.units(),
+      theme,
+      width,
+      subtitle: solved.comboText ? `combination ${solved.comboText}` : "every load at factor 1",
+    });
+    figure.innerHTML = this.drawing.svg;
+    void figure.offsetHeight;
+    el(this.root, ".actions").hidden = false;
+    this.lastDrawMs = performance.now() - started;
+    return this.lastDrawMs;
+  }
+
+  private showPick(known: Partial<MemberSources>, unresolved: MemberArgument[]): void {
+    const form = el<HTMLFormElement>(this.root, ".pick");
+    form.hidden = false;
+    for (const name of MEMBER_ARGUMENTS) {
+      const input = form.querySelector<HTMLInputElement>(`input[name="${name}"]`);
+      if (!input) continue;
+      const source = known[name];
+      input.value = source && !unresolved.includes(name) && source.kind !== "omitted" ? source.text : "";
+      input.classList.toggle("needed", unresolved.includes(name));
+    }
+  }
+
+  private async drawPicked(): Promise<void> {
+    const form = el<HTMLFormElement>(this.root, ".pick");
+    const selection = await this.host.getSelection();
+    const sources = {} as MemberSources;
+    for (const name of MEMBER_ARGUMENTS) {
+      const value = form.querySelector<HTMLInputElement>(`input[name="${name}"]`)?.value ?? "";
+      sources[name] = classifyArgument(value);
+      if (sources[name].kind === "expression") {
+        this.message(`${name}: "${value}" is not a range, a name or a value`, "error");
+        return;
+      }
+    }
+    const lookup = await resolveSources(this.host, selection.sheet, selection.cell, sources);
+    if (!lookup.ok) this.message(lookup.message, "error");
+    else this.use(lookup.member);
+  }
+
+  private ask(question: string): Promise<boolean> {
+    const box = el<HTMLElement>(this.root, ".confirm");
+    el(box, "p").textContent = question;
+    box.hidden = false;
+    return new Promise((resolve) => {
+      this.pendingConfirm = (ok) => {
+        box.hidden = true;
+        this.pendingConfirm = undefined;
+        resolve(ok);
+      };
+    });
+  }
+
+  /** Writes the DIAGRAM table beside the member (asking first over non-empty cells). */
+  async writeTable(): Promise<{ address: string; rows: number } | undefined> {
+    const member = this.resolved;
+    const solved = this.solved;
+    if (!member || !solved) return undefined;
+    const rows = diagram(solved.solution, DEFAULT_POINTS).length;
+    const spill = await this.host.spillRange(qualify(member.sheet, member.cell)).catch(() => undefined);
+    const plan = planTable(member, spill, rows, DEFAULT_POINTS, this.chosenCombo());
+    const outcome = await writeTable(this.host, plan, (q) => this.ask(q));
+    this.message(outcome.written ? `Diagram table written to ${outcome.address}.` : outcome.reason);
+    return outcome.written ? { address: outcome.address, rows } : undefined;
+  }
+
+  /** Writes the table (same rules) and adds scatter-line charts over its columns. */
+  async insertCharts(): Promise<number> {
+    const member = this.resolved;
+    const solved = this.solved;
+    if (!member || !solved) return 0;
+    const rows = diagram(solved.solution, DEFAULT_POINTS).length;
+    const spill = await this.host.spillRange(qualify(member.sheet, member.cell)).catch(() => undefined);
+    const plan = planTable(member, spill, rows, DEFAULT_POINTS, this.chosenCombo());
+    const outcome = await writeTable(this.host, plan, (q) => this.ask(q));
+    if (!outcome.written) {
+      this.message(`${outcome.reason}; the charts need the table`);
+      return 0;
+    }
+    const requests = chartRequests(plan, solved.solution.hasStiffness, this.units());
+    for (const request of requests) await this.host.addChart(request);
+    this.message(`Diagram table written to ${outcome.address}, ${requests.length} charts added.`);
+    return requests.length;
+  }
+
+  private fileStem(): string {
+    return `spanwise-${(this.resolved?.cell ?? "member").toLowerCase()}`;
+  }
+
+  exportSvg(): void {
+    if (!this.drawing) return;
+    download(new Blob([this.drawing.svg], { type: "image/svg+xml" }), `${this.fileStem()}.svg`);
+  }
+
+  async exportPng(): Promise<void> {
+    const drawing = this.drawing;
+    if (!drawing) return;
+    const url = URL.createObjectURL(new Blob([drawing.svg], { type: "image/svg+xml" }));
+    try {
+      const image = new Image();
+      await new Promise<void>((resolve, reject) => {
+        image.onload = () => resolve();
+        image.onerror = () => reject(new Error("the drawing could not be turned into an image"));
+        image.src = url;
+      });
+      const canvas = document.createElement("canvas");
+      canvas.width = drawing.layout.width * 2;
+      canvas.height = drawing.layout.height * 2;
+      const context = canvas.getContext("2d");
+      if (!context) throw new Error("no canvas in this browser");
+      context.scale(2, 2);
+      context.drawImage(image, 0, 0);
+      const blob = await new Promise<Blob | null>((resolve) => canvas.toBlob(resolve, "image/png"));
+      if (blob) download(blob, `${this.fileStem()}.png`);
+    } catch (error) {
+      this.message(error instanceof Error ? error.message : String(error), "error");
+    } finally {
+      URL.revokeObjectURL(url);
+    }
+  }
+
+  private pointer(event: PointerEvent): void {
+    const drawing = this.drawing;
+    const solved = this.solved;
+    const svg = this.root.querySelector<SVGSVGElement>(".figure svg");
+    if (!drawing || !solved || !svg) return;
+    const box = svg.getBoundingClientRect();
+    const px = ((event.clientX - box.left) * drawing.layout.width) / (box.width || drawing.layout.width);
+    const cursor = svg.querySelector<SVGGElement>(".cursor");
+    if (px < drawing.layout.left - 4 || px > drawing.layout.right + 4) {
+      cursor?.setAttribute("visibility", "hidden");
+      return;
+    }
+    const x = xAtPixel(drawing.layout, px);
+    const line = cursor?.querySelector("line");
+    line?.setAttribute("x1", String(drawing.layout.x(x)));
+    line?.setAttribute("x2", String(drawing.layout.x(x)));
+    cursor?.setAttribute("visibility", "visible");
+    const parts = readoutText(readoutAt(solved.solution, x), this.units());
+    el(this.root, ".readout").innerHTML = parts.map(([name, value]) => `<span data-name="${name}"><b>${escapeXml(name)}</b> ${escapeXml(value)}</span>`).join(" ");
+  }
+
+  private bind(): void {
+    const root = this.root;
+    root.querySelector(".write-table")?.addEventListener("click", () => void this.writeTable());
+    root.querySelector(".insert-charts")?.addEventListener("click", () => void this.insertCharts());
+    root.querySelector(".export-svg")?.addEventListener("click", () => this.exportSvg());
+    root.querySelector(".export-png")?.addEventListener("click", () => void this.exportPng());
+    root.querySelector(".confirm-yes")?.addEventListener("click", () => this.pendingConfirm?.(true));
+    root.querySelector(".confirm-no")?.addEventListener("click", () => this.pendingConfirm?.(false));
+    const select = el<HTMLSelectElement>(root, ".combo select");
+    select.addEventListener("change", () => {
+      el<HTMLInputElement>(root, ".combo-text").value = select.value === FORMULA_COMBO ? (this.formulaComboText() ?? "") : select.value;
+      this.redraw();
+    });
+    el<HTMLInputElement>(root, ".combo-text").addEventListener("change", () => this.redraw());
+    for (const selector of [".unit-length", ".unit-force"]) {
+      el<HTMLInputElement>(root, selector).addEventListener("change", () => {
+        this.unitsEdited = true;
+        this.redraw();
+      });
+    }
+    const figure = el<HTMLElement>(root, ".figure");
+    let frame = 0;
+    figure.addEventListener("pointermove", (event) => {
+      if (frame) return;
+      frame = requestAnimationFrame(() => {
+        frame = 0;
+        this.pointer(event);
+      });
+    });
+    figure.addEventListener("pointerleave", () => root.querySelector(".figure svg .cursor")?.setAttribute("visibility", "hidden"));
+    const form = el<HTMLFormElement>(root, ".pick");
+    form.addEventListener("submit", (event) => {
+      event.preventDefault();
+      void this.drawPicked();
+    });
+    form.addEventListener("click", (event) => {
+      const name = (event.target as HTMLElement).dataset?.use;
+      if (!name) return;
+      void this.host.getSelection().then((s) => {
+        const input = form.querySelector<HTMLInputElement>(`input[name="${name}"]`);
+        if (input) input.value = qualify(s.sheet, s.range);
+      });
+    });
+    let lastWidth = 0;
+    const resize = debounce(() => {
+      const width = figure.clientWidth;
+      if (Math.abs(width - lastWidth) > 4) {
+        lastWidth = width;
+        this.redraw();
+      }
+    }, 120);
+    if (typeof ResizeObserver !== "undefined") new ResizeObserver(() => resize()).observe(root);
+  }
+}
+
+function download(blob: Blob, name: string): void {
+  const url = URL.createObjectURL(blob);
+  const a = document.createElement("a");
+  a.href = url;
+  a.download = name;
+  document.body.appendChild(a);
+  a.click();
+  a.remove();
+  setTimeout(() => URL.revokeObjectURL(url), 1000);
+}

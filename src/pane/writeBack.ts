@@ -1,0 +1,116 @@
+/**
+ * Putting the diagrams into the sheet: a live DIAGRAM table beside the member and native
+ * scatter-line charts over its columns. The cells a table needs are checked first; when any
+ * holds something, the caller is asked and nothing is written unless it agrees.
+ */
+import { blockAt, blockText, parseBlock, type Block } from "./addresses";
+import { MEMBER_ARGUMENTS, type ArgSource } from "./formulaRefs";
+import { qualify, splitAddress, type CellInput, type ChartRequest, type SheetHost } from "./host";
+import type { ResolvedMember } from "./memberFromSheet";
+import { quantityUnits, withUnit, type Units } from "./units";
+
+export const TABLE_COLUMNS = 5;
+
+export interface TablePlan {
+  sheet: string;
+  /** Header row plus the spilled rows, unqualified ("N3:R128"). */
+  block: Block;
+  header: string[];
+  formula: string;
+  /** Rows the DIAGRAM formula spills into. */
+  rows: number;
+}
+
+function argText(source: ArgSource): string {
+  return source.kind === "omitted" ? "" : source.text;
+}
+
+function quoted(text: string): string {
+  return `"${text.replace(/"/g, '""')}"`;
+}
+
+/**
+ * The DIAGRAM formula for the member: its own argument texts (so the table stays live), the
+ * combination shown in the pane when it differs from the formula's, trailing blanks dropped.
+ */
+export function diagramFormula(member: ResolvedMember, points: number, combo: string | undefined): string {
+  const text: Record<string, string> = {};
+  for (const name of MEMBER_ARGUMENTS) text[name] = argText(member.sources[name]);
+  if (combo !== undefined) text.combo = combo === "" ? "" : quoted(combo);
+  const args = [text.spans, text.loads, String(points), text.supports, text.EI, text.combo];
+  while (args.length > 3 && args[args.length - 1] === "") args.pop();
+  return `=SPAN.DIAGRAM(${args.join(",")})`;
+}
+
+/** Column headings with the user's units. */
+export function tableHeader(units: Units): string[] {
+  const u = quantityUnits(units);
+  return [withUnit("x", u.x), withUnit("V", u.shear), withUnit("M", u.moment), withUnit("slope", u.slope), withUnit("deflection", u.deflection)];
+}
+
+/**
+ * Where the table goes: on the member's sheet, starting one empty column right of the
+ * formula cell (or of its spill), on the formula's row.
+ */
+export function planTable(member: ResolvedMember, formulaSpill: string | undefined, rows: number, points: number, combo: string | undefined): TablePlan {
+  const right = formulaSpill ? parseBlock(splitAddress(formulaSpill).address).to.col : parseBlock(member.cell).from.col;
+  const top = { row: parseBlock(member.cell).from.row, col: right + 2 };
+  return {
+    sheet: member.sheet,
+    block: blockAt(top, rows + 1, TABLE_COLUMNS),
+    header: tableHeader(member.units),
+    formula: diagramFormula(member, points, combo),
+    rows,
+  };
+}
+
+/** The block to write: the header, then the formula in the first cell under it. */
+export function tableBlock(plan: TablePlan): { address: string; block: CellInput[][] } {
+  const from = plan.block.from;
+  return {
+    address: qualify(plan.sheet, blockText(blockAt(from, 2, TABLE_COLUMNS))),
+    block: [plan.header, [plan.formula, null, null, null, null]],
+  };
+}
+
+export type Confirm = (message: string) => Promise<boolean>;
+export type WriteOutcome = { written: true; address: string } | { written: false; reason: string };
+
+/** Writes the table when its cells are empty, or when `confirm` agrees to overwrite them. */
+export async function writeTable(host: SheetHost, plan: TablePlan, confirm: Confirm): Promise<WriteOutcome> {
+  const target = qualify(plan.sheet, blockText(plan.block));
+  if (!(await host.isEmpty(target))) {
+    const ok = await confirm(`${target} already holds something. Write the diagram table over it?`);
+    if (!ok) return { written: false, reason: `nothing written: ${target} holds something` };
+    await host.clear(target);
+  }
+  const { address, block } = tableBlock(plan);
+  await host.writeBlock(address, block);
+  return { written: true, address: target };
+}
+
+/** Scatter-line charts of V, M and (with EI) deflection over the table's columns, right of the table. */
+export function chartRequests(plan: TablePlan, withDeflection: boolean, units: Units): ChartRequest[] {
+  const u = quantityUnits(units);
+  const first = plan.block.from.row + 1;
+  const last = plan.block.from.row + plan.rows;
+  const col = (offset: number): string => blockText({ from: { row: first, col: plan.block.from.col + offset }, to: { row: last, col: plan.block.from.col + offset } });
+  const quantities: { name: string; offset: number; title: string; unit: string }[] = [
+    { name: "V", offset: 1, title: "Shear", unit: u.shear },
+    { name: "M", offset: 2, title: "Moment", unit: u.moment },
+  ];
+  if (withDeflection) quantities.push({ name: "deflection", offset: 4, title: "Deflection", unit: u.deflection });
+  const left = plan.block.to.col + 2;
+  return quantities.map((q, i) => {
+    const top = plan.block.from.row + i * 16;
+    return {
+      sheet: plan.sheet,
+      title: q.title,
+      x: col(0),
+      series: [{ name: q.name, y: col(q.offset) }],
+      placeAt: blockText({ from: { row: top, col: left }, to: { row: top + 14, col: left + 7 } }),
+      xTitle: withUnit("x", u.x),
+      yTitle: withUnit(q.name, q.unit),
+    };
+  });
+}
