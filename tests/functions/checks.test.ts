@@ -7,6 +7,7 @@
  * Closed forms: simple span M = wL^2/8, deflection 5wL^4/(384EI) (handbook beam diagrams,
  * from memory); rectangle S = bh^2/6 (Roark, properties of plane areas, from memory).
  */
+import fc from "fast-check";
 import * as fx from "../../functions/functions";
 import { tolerance } from "../../src/core";
 import { isSheetSafe, thrown } from "./host";
@@ -182,5 +183,37 @@ describe("bad units and bad input give #VALUE! naming the argument", () => {
 
   test("deflection check without EI is #N/A", () => {
     expect(thrown(() => fx.deflectionCheck(us.spans, us.loads, [["L/360"]], null as any, null as any, null, null as any)).code).toBe("#N/A");
+  });
+});
+
+describe("fuzzed arguments: a sheet-safe result or a #VALUE!/#N/A error with a message of ours, never anything else", () => {
+  const cell = fc.oneof(
+    fc.constantFrom<unknown>(null, "", 0, "#N/A", "L/360", "kip/ft", "length=ft, force=kip", "ksi", "in^4", "I", "tee", "udl 2", "6 8", "pin pin pin", "1e400", "-3", true),
+    fc.double({ noNaN: false }),
+    fc.string({ maxLength: 8 }),
+  );
+  const range = fc.oneof(cell, fc.array(fc.array(cell, { minLength: 1, maxLength: 3 }), { minLength: 1, maxLength: 3 }));
+  const calls: [string, (a: unknown[]) => unknown[][]][] = [
+    ["section", (a) => fx.section(a[0], a[1] as any, a[2], a[3])],
+    ["stress", (a) => fx.stress(a[0] as any, a[1] as any, a[2] as any, a[3] as any, a[4] as any, a[5], a[6] as any)],
+    ["shearStress", (a) => fx.shearStress(a[0] as any, a[1] as any, a[2] as any, a[3] as any, a[4] as any, a[5], a[6] as any)],
+    ["deflectionCheck", (a) => fx.deflectionCheck(a[0] as any, a[1] as any, a[2] as any, a[3] as any, a[4] as any, a[5], a[6] as any)],
+    ["utilisation", (a) => fx.utilisation(a[0] as any, a[1] as any, a[2], a[3])],
+    ["convertUnits", (a) => fx.convertUnits(a[0] as any, a[1], a[2])],
+    ["stiffness", (a) => fx.stiffness(a[0] as any, a[1] as any, a[2], a[3], a[4])],
+  ];
+  test.each(calls)("%s", (_name, call) => {
+    fc.assert(
+      fc.property(fc.array(range, { minLength: 7, maxLength: 7 }), (args) => {
+        try {
+          return isSheetSafe(call(args));
+        } catch (e) {
+          const code = (e as { code?: unknown }).code;
+          const message = (e as { message?: unknown }).message;
+          return (code === "#VALUE!" || code === "#N/A") && typeof message === "string" && !message.startsWith("unexpected problem");
+        }
+      }),
+      { seed: 11, numRuns: 150 },
+    );
   });
 });
