@@ -198,7 +198,7 @@ export function moving(spans: any[][], axles: any[][], spacings: any[][], effect
 }
 
 /**
- * The individual combinations of a named set, one per row, ready to feed ENVELOPE or PEAKS or to inspect: ASCE7-2.3.1 (ASCE/SEI 7 strength design basic combinations), ASCE7-2.4.1 (allowable stress design), EN1990-6.10 (EN 1990 expression 6.10 with gamma G 1.35 or 1.0 and gamma Q 1.5, each variable case leading in turn). "Lr or S or R" alternatives become separate combinations. The governing code and a qualified engineer decide which combinations apply. Example: =SPAN.COMBOS("EN1990-6.10", "Q 0.7, S 0.5", "Q S")
+ * The individual combinations of a named set, one per row, ready to feed ENVELOPE or PEAKS or to inspect: ASCE7-2.3.1 (ASCE/SEI 7 strength design basic combinations), ASCE7-2.4.1 (allowable stress design), EN1990-6.10 (EN 1990 expression 6.10 with gamma G 1.35 or 1.0 and gamma Q 1.5, each variable case leading in turn). "Lr or S or R" alternatives become separate combinations. Results are an aid to a qualified engineer: check them; local codes govern, and decide which combinations apply. Example: =SPAN.COMBOS("EN1990-6.10", "Q 0.7, S 0.5", "Q S")
  * @customfunction COMBOS
  * @param set The set name: ASCE7-2.3.1, ASCE7-2.4.1 or EN1990-6.10.
  * @param [psi0] EN 1990 only: psi0 for the accompanying variable cases, one number or pairs such as "Q 0.7, S 0.5".

@@ -30,6 +30,24 @@ export const CATALOGUE: CatalogueEntry[] = [
   { id: "MAXMOMENT", exportName: "maxMoment", parameters: [...member, ...trailing] },
   { id: "EXTREMES", exportName: "extremes", parameters: [...member, ...trailing] },
   { id: "DIAGRAM", exportName: "diagram", parameters: [...member, ["points", "scalar", true], ...trailing] },
+  // load arrangements: envelopes, peaks, influence lines, moving loads, combination sets
+  {
+    id: "ENVELOPE",
+    exportName: "envelope",
+    parameters: [...member, ["x", "matrix", false], ["combos", "matrix", false], ["supports", "matrix", true], ["EI", "matrix", true], ["quantity", "scalar", true], ["pattern", "scalar", true], ["psi0", "scalar", true]],
+  },
+  {
+    id: "PEAKS",
+    exportName: "peaks",
+    parameters: [...member, ["combos", "matrix", false], ["supports", "matrix", true], ["EI", "matrix", true], ["pattern", "scalar", true], ["psi0", "scalar", true]],
+  },
+  { id: "INFLUENCE", exportName: "influence", parameters: [["spans", "matrix", false], ["effect", "scalar", false], ["positions", "matrix", false], ["supports", "matrix", true], ["EI", "matrix", true]] },
+  {
+    id: "MOVING",
+    exportName: "moving",
+    parameters: [["spans", "matrix", false], ["axles", "matrix", false], ["spacings", "matrix", false], ["effect", "scalar", false], ["supports", "matrix", true], ["EI", "matrix", true]],
+  },
+  { id: "COMBOS", exportName: "combos", parameters: [["set", "scalar", false], ["psi0", "scalar", true], ["cases", "matrix", true]] },
   // sections, stresses, serviceability checks and units
   { id: "SECTION", exportName: "section", parameters: [["shape", "scalar", false], ["dimensions", "matrix", false], ["unit", "scalar", true], ["resultUnit", "scalar", true]] },
   { id: "STRESS", exportName: "stress", parameters: [...member, ["section", "matrix", false], ...trailing, ["units", "matrix", true]] },
