@@ -48,13 +48,22 @@ export function parseCombination(text: string | null | undefined): Combination {
   return { text: source.trim(), terms };
 }
 
+/** A factor written without an exponent, so that the text parses back to the same factor. */
+function plainDecimal(value: number): string {
+  const text = String(value);
+  if (!/e/i.test(text)) return text;
+  if (value >= 1e21) return BigInt(value).toString();
+  const digits = Math.min(100, Math.max(0, 20 - Math.floor(Math.log10(value))));
+  return value.toFixed(digits).replace(/\.?0+$/, "");
+}
+
 /** The canonical text of a combination, e.g. `1.2D + 1.6L`. */
 export function formatCombination(combination: Combination): string {
   return combination.terms
     .map((t, i) => {
       const sign = t.factor < 0 ? "-" : i === 0 ? "" : "+";
       const size = Math.abs(t.factor);
-      const body = `${size === 1 ? "" : size}${t.loadCase}`;
+      const body = `${size === 1 ? "" : plainDecimal(size)}${t.loadCase}`;
       return i === 0 ? `${sign}${body}` : ` ${sign} ${body}`;
     })
     .join("");

@@ -3,6 +3,7 @@ import { elementDofs } from "./layout";
 import type { Member, Piece, Quantity, Reaction, Solution } from "./model";
 import { pieceValue } from "./polynomial";
 import { cleanZero } from "./tolerance";
+import { invalid } from "./errors";
 import { integrateSpan } from "./pieces";
 import { checkStability } from "./stability";
 import { assembleMember, elementMatrix } from "./stiffness";
@@ -43,6 +44,20 @@ function scalesOf(pieces: Piece[], spans: number[], force: number): Record<Quant
     scales[quantity] = largest;
   }
   return scales;
+}
+
+/** Numbers that overflowed (or underflowed into 0/0) must never reach the sheet. */
+function requireFinite(d: Float64Array, pieces: Piece[], reactions: Reaction[], scales: Record<Quantity, number>): void {
+  let ok = Object.values(scales).every(Number.isFinite);
+  for (const v of d) ok = ok && Number.isFinite(v);
+  for (const p of pieces) {
+    ok = ok && Number.isFinite(p.shear0) && Number.isFinite(p.moment0) && Number.isFinite(p.slope0) && Number.isFinite(p.deflection0);
+    ok = ok && Number.isFinite(p.flexibility);
+  }
+  for (const r of reactions) ok = ok && Number.isFinite(r.force) && Number.isFinite(r.moment);
+  if (!ok) {
+    throw invalid("the numbers are too large or too small to compute reliably (check the units of spans, loads and EI)");
+  }
 }
 
 /**
@@ -96,6 +111,8 @@ export function solve(member: Member): Solution {
         return { x, force: 0, moment: 0 };
     }
   });
+  const scales = scalesOf(pieces, member.spans, loadScale + reactions.reduce((sum, r) => sum + Math.abs(r.force), 0));
+  requireFinite(d, pieces, reactions, scales);
   return {
     length: layout.length,
     nodeX: layout.nodeX,
@@ -103,7 +120,7 @@ export function solve(member: Member): Solution {
     pieces,
     hasStiffness: member.stiffness !== null,
     loadScale,
-    scales: scalesOf(pieces, member.spans, loadScale + reactions.reduce((sum, r) => sum + Math.abs(r.force), 0)),
+    scales,
     displacements: Array.from(d),
   };
 }

@@ -68,6 +68,7 @@ function validateStiffness(member: Member): void {
   }
   stiffness.forEach((ei, i) => {
     if (!isFiniteNumber(ei) || ei <= 0) throw invalid(`EI of span ${i + 1}: must be a positive number, got ${show(ei)}`);
+    if (!Number.isFinite(1 / ei)) throw invalid(`EI of span ${i + 1}: ${show(ei)} is too small to compute with; check its units`);
   });
 }
 
