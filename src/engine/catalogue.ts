@@ -21,7 +21,14 @@ export type SpanExport =
   | "peaks"
   | "influence"
   | "moving"
-  | "combos";
+  | "combos"
+  | "section"
+  | "stress"
+  | "shearStress"
+  | "deflectionCheck"
+  | "utilisation"
+  | "convertUnits"
+  | "stiffness";
 
 /** The function table the engine calls: the real exports, or a stand-in in tests. */
 export type SpanFunctions = Record<SpanExport, SheetFunction>;
@@ -83,6 +90,21 @@ const STUDIES: SpanFunctionEntry[] = [
 ];
 
 
+/** Sections, stress and serviceability checks, units: sizes are learned from a first evaluation. */
+const CHECKS: SpanFunctionEntry[] = [
+  { sheetName: "SPAN.SECTION", exportName: "section", arguments: [value("shape"), block("dimensions"), value("unit", true), value("resultUnit", true)], sizeRule: "learned" },
+  ...(["stress", "shearStress"] as const).map((exportName) => ({
+    sheetName: `SPAN.${exportName.toUpperCase()}`,
+    exportName,
+    arguments: [...member, block("section"), ...tail, block("units", true)],
+    sizeRule: "learned" as const,
+  })),
+  { sheetName: "SPAN.DEFLECTIONCHECK", exportName: "deflectionCheck", arguments: [...member, block("limit"), ...tail, block("units", true)], sizeRule: "learned" },
+  { sheetName: "SPAN.UTILISATION", exportName: "utilisation", arguments: [block("demand"), block("capacity"), value("demandUnit", true), value("capacityUnit", true)], sizeRule: "learned" },
+  { sheetName: "SPAN.CONVERT", exportName: "convertUnits", arguments: [block("value"), value("from"), value("to")], sizeRule: "learned" },
+  { sheetName: "SPAN.STIFFNESS", exportName: "stiffness", arguments: [block("E"), block("I"), value("EUnit", true), value("IUnit", true), value("resultUnit", true)], sizeRule: "learned" },
+];
+
 export const SPAN_FUNCTIONS: readonly SpanFunctionEntry[] = [
   { sheetName: "SPAN.REACTIONS", exportName: "reactions", arguments: [...member, ...tail], sizeRule: "perNode" },
   { sheetName: "SPAN.SHEAR", exportName: "shear", arguments: atX, sizeRule: "shapeOfX" },
@@ -98,6 +120,7 @@ export const SPAN_FUNCTIONS: readonly SpanFunctionEntry[] = [
     sizeRule: "diagram",
   },
   ...STUDIES,
+  ...CHECKS,
 ];
 
 export function entryFor(sheetName: string): SpanFunctionEntry | undefined {

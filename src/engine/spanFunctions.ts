@@ -1,5 +1,26 @@
 /** The real worksheet functions (functions/functions.ts) as the engine's function table. */
-import { combos, deflection, diagram, envelope, extremes, influence, maxMoment, moment, moving, peaks, reactions, shear, slope } from "../../functions/functions";
+import {
+  combos,
+  convertUnits,
+  deflection,
+  deflectionCheck,
+  diagram,
+  envelope,
+  extremes,
+  influence,
+  maxMoment,
+  moment,
+  moving,
+  peaks,
+  reactions,
+  section,
+  shear,
+  shearStress,
+  slope,
+  stiffness,
+  stress,
+  utilisation,
+} from "../../functions/functions";
 import type { SpanFunctions } from "./catalogue";
 
 export const SPAN_EXPORTS: SpanFunctions = {
@@ -16,4 +37,11 @@ export const SPAN_EXPORTS: SpanFunctions = {
   influence,
   moving,
   combos,
+  section,
+  stress,
+  shearStress,
+  deflectionCheck,
+  utilisation,
+  convertUnits,
+  stiffness,
 };
