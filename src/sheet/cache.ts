@@ -68,6 +68,10 @@ export function sameCells(a: unknown, b: unknown): boolean {
   return true;
 }
 
+function sameArgs(a: MemberArgs, b: MemberArgs): boolean {
+  return sameCells(a.spans, b.spans) && sameCells(a.loads, b.loads) && sameCells(a.supports, b.supports) && sameCells(a.EI, b.EI) && sameCells(a.combo, b.combo);
+}
+
 /** A copy of an argument's cells (arrays copied, cell values are primitives). */
 function snapshot(arg: unknown): unknown {
   return Array.isArray(arg) ? arg.map(snapshot) : arg;
@@ -121,19 +125,22 @@ export class MemberCache {
     return this.entries.size;
   }
 
+  /**
+   * The solution of the last member used, when these arguments hold the same cells: the
+   * common case of many x-cells of one member, answered without even hashing.
+   */
+  getLast(args: MemberArgs): Solution | undefined {
+    const entry = this.lastEntry;
+    return entry !== undefined && sameArgs(entry.args, args) ? entry.solution : undefined;
+  }
+
   /** The solution cached for exactly these arguments, if any. */
   get(args: MemberArgs, hash: number): Solution | undefined {
     const entry = hash === this.lastHash ? this.lastEntry : this.entries.get(hash);
     if (entry === undefined) return undefined;
     this.lastHash = hash;
     this.lastEntry = entry;
-    const same =
-      sameCells(entry.args.spans, args.spans) &&
-      sameCells(entry.args.loads, args.loads) &&
-      sameCells(entry.args.supports, args.supports) &&
-      sameCells(entry.args.EI, args.EI) &&
-      sameCells(entry.args.combo, args.combo);
-    return same ? entry.solution : undefined;
+    return sameArgs(entry.args, args) ? entry.solution : undefined;
   }
 
   set(args: MemberArgs, hash: number, solution: Solution): void {

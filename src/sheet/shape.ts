@@ -17,8 +17,18 @@ export function finite(value: number, what: string): number {
   return value;
 }
 
+function valueAtPosition(at: (position: number) => number, position: number): number {
+  const value = at(position);
+  if (!Number.isFinite(value)) throw invalid(`the value at x = ${position} is not a finite number; check the member's data`);
+  return value;
+}
+
 /** Evaluates `at` for every non-empty x cell, keeping the shape of x. */
 export function mapPositions(x: unknown, at: (position: number) => number): (number | string)[][] {
+  if (Array.isArray(x) && x.length === 1 && Array.isArray(x[0]) && x[0].length === 1 && typeof x[0][0] === "number") {
+    const position = x[0][0];
+    if (Number.isFinite(position)) return [[valueAtPosition(at, position)]];
+  }
   const rows = rowsOf(x);
   if (rows.length === 0) throw invalid("x: give a cell or a range of positions");
   const width = rows.reduce((w, row) => Math.max(w, Array.isArray(row) ? row.length : 1), 0);
@@ -33,7 +43,7 @@ export function mapPositions(x: unknown, at: (position: number) => number): (num
         continue;
       }
       const position = readNumber(cell, () => xPlace(rows, r, c));
-      out[c] = finite(at(position), `the value at x = ${position}`);
+      out[c] = valueAtPosition(at, position);
     }
     result[r] = out;
   }

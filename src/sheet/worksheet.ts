@@ -18,6 +18,8 @@ export const MAX_POINTS = 10001;
 
 /** The solution for the member arguments, from the cache when the same arguments were solved before. */
 export function solvedMember(args: MemberArgs): Solution {
+  const last = solvedMembers.getLast(args);
+  if (last !== undefined) return last;
   const hash = memberHash(args);
   if (hash !== null) {
     const cached = solvedMembers.get(args, hash);

@@ -92,6 +92,22 @@ describe("solvedMember", () => {
     }
   });
 
+  test("alternating members (two diagrams on one sheet) each solve once", () => {
+    const spy = jest.spyOn(core, "solve");
+    try {
+      const a = solvedMember(args());
+      const b = solvedMember(args({ combo: "D" }));
+      expect(b).not.toBe(a);
+      for (let i = 0; i < 20; i++) {
+        expect(solvedMember(args())).toBe(a);
+        expect(solvedMember(args({ combo: "D" }))).toBe(b);
+      }
+      expect(spy).toHaveBeenCalledTimes(2);
+    } finally {
+      spy.mockRestore();
+    }
+  });
+
   test("the cache is bounded", () => {
     for (let i = 0; i < solvedMembers.capacity + 20; i++) solvedMember(args({ spans: [[6, 8 + i]] }));
     expect(solvedMembers.size).toBe(solvedMembers.capacity);
