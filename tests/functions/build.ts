@@ -20,7 +20,7 @@ function inputs(): string[] {
       else files.push(rel);
     }
   };
-  for (const dir of ["functions", "src/sheet", "src/core", "assets"]) walk(dir);
+  for (const dir of ["functions", "src", "assets"]) walk(dir);
   files.push("manifest.xml", "webpack.config.js", "package-lock.json");
   return files.sort();
 }

@@ -5,6 +5,7 @@
 import { generateCustomFunctionsMetadata } from "custom-functions-metadata";
 import * as fs from "fs";
 import * as path from "path";
+import * as vm from "vm";
 import * as fx from "../../functions/functions";
 import { buildAddin } from "./build";
 import { CATALOGUE, catalogueMismatches, type MetadataFunction } from "./catalogue";
@@ -68,5 +69,36 @@ describe("webpack production build", () => {
     for (const file of ["office.js", "custom-functions-runtime.js"]) {
       expect(fs.readFileSync(path.join(out, "office-js", file)).equals(fs.readFileSync(path.join(officeDist, file)))).toBe(true);
     }
+  });
+
+  test("the built bundle runs as the host runs it: associated functions answer, errors use the runtime's class", () => {
+    class RuntimeError {
+      constructor(
+        readonly code: string,
+        readonly message?: string,
+      ) {}
+    }
+    const associated = new Map<string, (...args: unknown[]) => unknown>();
+    const CustomFunctions = {
+      associate: (id: string, fn: (...args: unknown[]) => unknown) => associated.set(id, fn),
+      Error: RuntimeError,
+      ErrorCode: { invalidValue: "#VALUE!", notAvailable: "#N/A" },
+    };
+    const context = vm.createContext({ CustomFunctions, console, self: {}, window: undefined });
+    (context as { self: unknown }).self = context;
+    vm.runInContext(fs.readFileSync(path.join(out, "functions.js"), "utf8"), context);
+    for (const c of CATALOGUE) expect(associated.has(c.id)).toBe(true);
+    const args = [[["4 6"]], [["udl 2 D; point 10 at 3 L"]], [[1, "", 7.5]], null, null, "1.2D+1.6L"];
+    const built = associated.get("MOMENT")?.(...args);
+    expect(built).toEqual(fx.moment(...(args as Parameters<typeof fx.moment>)));
+    let thrown: unknown;
+    try {
+      associated.get("SLOPE")?.([[6]], [["udl 2"]], [[1]], null, null, null);
+    } catch (e) {
+      thrown = e;
+    }
+    expect(thrown).toBeInstanceOf(RuntimeError);
+    expect((thrown as RuntimeError).code).toBe("#N/A");
+    expect((thrown as RuntimeError).message).toMatch(/slope needs EI/);
   });
 });
