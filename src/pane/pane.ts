@@ -13,7 +13,8 @@ import { readoutAt, readoutText, xAtPixel } from "./draw/readout";
 import { MEMBER_ARGUMENTS, classifyArgument, type MemberArgument } from "./formulaRefs";
 import { qualify, type SheetHost } from "./host";
 import { findMember, resolveSources, solveMember, type MemberSources, type ResolvedMember, type Solved } from "./memberFromSheet";
-import { chartRequests, planTable, writeTable } from "./writeBack";
+import { blockText } from "./addresses";
+import { chartRequests, planTable, tableInPlace, writeTable } from "./writeBack";
 import { DEFAULT_POINTS } from "../sheet";
 
 export const CAUTION = "Results are an aid to a qualified engineer, who checks them; local codes and licensed practice govern.";
@@ -22,7 +23,7 @@ export interface PaneElements {
   root: HTMLElement;
 }
 
-const FORMULA_COMBO = "\u0000formula";
+const FORMULA_COMBO = "(formula)";
 
 function el<T extends HTMLElement>(root: HTMLElement, selector: string): T {
   const found = root.querySelector(selector);
@@ -107,6 +108,14 @@ export class Pane {
   /** Reads the selection and, when it holds a SPAN formula, finds, solves and draws its member. */
   async refresh(): Promise<void> {
     const generation = ++this.generation;
+    try {
+      await this.lookUp(generation);
+    } finally {
+      if (generation === this.generation) this.root.dataset.refreshed = String(generation);
+    }
+  }
+
+  private async lookUp(generation: number): Promise<void> {
     try {
       const selection = await this.host.getSelection();
       if (generation !== this.generation) return;
@@ -268,7 +277,9 @@ export class Pane {
     const rows = diagram(solved.solution, DEFAULT_POINTS).length;
     const spill = await this.host.spillRange(qualify(member.sheet, member.cell)).catch(() => undefined);
     const plan = planTable(member, spill, rows, DEFAULT_POINTS, this.chosenCombo());
-    const outcome = await writeTable(this.host, plan, (q) => this.ask(q));
+    const outcome = (await tableInPlace(this.host, plan))
+      ? ({ written: true, address: qualify(plan.sheet, blockText(plan.block)) } as const)
+      : await writeTable(this.host, plan, (q) => this.ask(q));
     if (!outcome.written) {
       this.message(`${outcome.reason}; the charts need the table`);
       return 0;

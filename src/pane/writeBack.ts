@@ -89,6 +89,13 @@ export async function writeTable(host: SheetHost, plan: TablePlan, confirm: Conf
   return { written: true, address: target };
 }
 
+/** True when the planned table is already there: its header as planned and x starting at 0 under it. */
+export async function tableInPlace(host: SheetHost, plan: TablePlan): Promise<boolean> {
+  const top = blockAt(plan.block.from, 2, TABLE_COLUMNS);
+  const values = await host.getValues(qualify(plan.sheet, blockText(top)));
+  return plan.header.every((text, i) => values[0]?.[i] === text) && values[1]?.[0] === 0;
+}
+
 /** Scatter-line charts of V, M and (with EI) deflection over the table's columns, right of the table. */
 export function chartRequests(plan: TablePlan, withDeflection: boolean, units: Units): ChartRequest[] {
   const u = quantityUnits(units);

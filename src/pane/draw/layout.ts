@@ -32,7 +32,7 @@ export function layoutFor(width: number, length: number, quantities: readonly Pa
   const w = Math.max(MIN_WIDTH, Math.floor(width));
   const left = w < 400 ? 46 : 56;
   const right = w - 14;
-  const sketch = { top: 18, bottom: 18 + SKETCH_HEIGHT, beamY: 18 + 84 };
+  const sketch = { top: 26, bottom: 26 + SKETCH_HEIGHT, beamY: 26 + 84 };
   const panels: PanelBox[] = [];
   let y = sketch.bottom + PANEL_GAP;
   for (const quantity of quantities) {
