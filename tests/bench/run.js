@@ -8,17 +8,7 @@
  */
 const fs = require("fs");
 const path = require("path");
-const Module = require("module");
-const ts = require("typescript");
-
-Module._extensions[".ts"] = function compileTypeScript(module, filename) {
-  const source = fs.readFileSync(filename, "utf8");
-  const { outputText } = ts.transpileModule(source, {
-    fileName: filename,
-    compilerOptions: { module: ts.ModuleKind.CommonJS, target: ts.ScriptTarget.ES2020, esModuleInterop: true, sourceMap: false },
-  });
-  module._compile(outputText, filename);
-};
+require("../../src/cli/bin/tsHook");
 
 async function main() {
   const filter = process.argv[2] || "";

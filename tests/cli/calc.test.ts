@@ -15,7 +15,7 @@ import { direct } from "../engine/support/direct";
 import type { CellResult } from "../../src/engine";
 
 const ROOT = path.resolve(__dirname, "..", "..");
-const BIN = path.join(ROOT, "bin", "spanwise.js");
+const BIN = path.join(ROOT, "src", "cli", "bin", "spanwise.js");
 const DEMO = path.join(ROOT, "assets", "spanwise-demo.xlsx");
 
 function run(args: string[]): { status: number | null; stdout: string; stderr: string } {

@@ -1,7 +1,7 @@
 /**
  * Lets Node run the project's TypeScript sources directly: each .ts file is transpiled on
  * load with the TypeScript compiler (types are checked by `npm run typecheck`, not here).
- * Used by bin/spanwise.js so `npx spanwise ...` works right after `npm ci`, without a build.
+ * Used by src/cli/bin/spanwise.js and tests/bench/run.js so `npx spanwise ...` works right after `npm ci`, without a build.
  */
 "use strict";
 const fs = require("fs");

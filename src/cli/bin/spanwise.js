@@ -2,7 +2,7 @@
 /** Command-line entry: `spanwise calc <book.xlsx> ...`, `spanwise start`. See src/cli/main.ts. */
 "use strict";
 require("./tsHook");
-require("../src/cli/main.ts")
+require("../main.ts")
   .main(process.argv.slice(2))
   .then((code) => {
     process.exitCode = code;
