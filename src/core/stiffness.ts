@@ -33,8 +33,14 @@ export interface Assembly {
 function halfBandwidthOf(layout: Layout, spanCount: number): number {
   let width = 0;
   for (let e = 0; e < spanCount; e++) {
-    const dofs = elementDofs(layout, e).filter((d) => d >= 0);
-    if (dofs.length > 1) width = Math.max(width, Math.max(...dofs) - Math.min(...dofs));
+    let low = Infinity;
+    let high = -Infinity;
+    for (const d of elementDofs(layout, e)) {
+      if (d < 0) continue;
+      if (d < low) low = d;
+      if (d > high) high = d;
+    }
+    if (high > low) width = Math.max(width, high - low);
   }
   return width;
 }

@@ -37,20 +37,20 @@ function validateSupports(member: Member, length: number): void {
   }
   let x = 0;
   supports.forEach((support, i) => {
-    const where = `support ${i + 1} (x = ${x})`;
+    const where = (): string => `support ${i + 1} (x = ${x})`;
     if (!support || !SUPPORT_KINDS.has(support.kind)) {
-      throw invalid(`${where}: unknown support ${show(support && support.kind)}; use pin, fixed, free, hinge or a spring stiffness`);
+      throw invalid(`${where()}: unknown support ${show(support && support.kind)}; use pin, fixed, free, hinge or a spring stiffness`);
     }
     if (support.kind === "spring") {
       if (!isFiniteNumber(support.stiffness) || support.stiffness <= 0) {
-        throw invalid(`${where}: spring stiffness must be a positive number, got ${show(support.stiffness)}`);
+        throw invalid(`${where()}: spring stiffness must be a positive number, got ${show(support.stiffness)}`);
       }
       if (member.stiffness === null) {
-        throw invalid(`${where}: a spring support needs EI, since the result depends on EI relative to the spring`);
+        throw invalid(`${where()}: a spring support needs EI, since the result depends on EI relative to the spring`);
       }
     }
     if (support.kind === "hinge" && (i === 0 || i === spans.length)) {
-      throw invalid(`${where}: a hinge joins two spans, so it belongs at an interior node, not at a member end`);
+      throw invalid(`${where()}: a hinge joins two spans, so it belongs at an interior node, not at a member end`);
     }
     x = i < spans.length ? roundPosition(x + spans[i], length) : x;
   });
@@ -72,7 +72,18 @@ function validateStiffness(member: Member): void {
   });
 }
 
+/** The common case, checked without building any message. */
+function isPlainLoad(load: Load, length: number): boolean {
+  const end = length * (1 + POSITION_TOLERANCE);
+  if (!LOAD_KINDS.has(load.kind) || !isFiniteNumber(load.magnitude) || !isFiniteNumber(load.xStart)) return false;
+  if (load.xStart < 0 || load.xStart > end) return false;
+  if (load.kind === "point" || load.kind === "moment") return true;
+  if (!isFiniteNumber(load.xEnd) || load.xEnd > end || load.xEnd <= load.xStart) return false;
+  return load.kind !== "linear" || isFiniteNumber(load.magnitudeEnd);
+}
+
 function validateLoad(load: Load, length: number): void {
+  if (isPlainLoad(load, length)) return;
   const where = `load row ${load.row}`;
   const end = length * (1 + POSITION_TOLERANCE);
   if (!LOAD_KINDS.has(load.kind)) {
