@@ -29,14 +29,17 @@ export interface Drawing {
   rows: DiagramRow[];
 }
 
-/** Stations for drawing: enough for smooth curves, more on longer members. */
-export function drawingPoints(spanCount: number): number {
-  return Math.min(801, Math.max(121, 40 * spanCount + 1));
+/**
+ * Evenly spaced stations for drawing: about one per pixel of plot width (at least 12 per span),
+ * on top of which the diagram adds every support, load point, jump and extreme exactly.
+ */
+export function drawingPoints(spanCount: number, plotWidth = 360): number {
+  return Math.min(801, Math.max(121, Math.round(plotWidth), 12 * spanCount + 1));
 }
 
 const QUANTITY: Record<PanelQuantity, Quantity> = { shear: "shear", moment: "moment", deflection: "deflection" };
 
-export function drawDiagrams(input: DrawInput, rows = diagram(input.solution, drawingPoints(input.member.spans.length))): Drawing {
+export function drawDiagrams(input: DrawInput, rows = diagram(input.solution, drawingPoints(input.member.spans.length, input.width - 70))): Drawing {
   const { member, solution } = input;
   const c = palette(input.theme);
   const u = quantityUnits(input.units);
