@@ -10,7 +10,8 @@ class SummaryReporter {
     const failed = results.numFailedTests + brokenSuites;
     const skipped = results.numPendingTests + results.numTodoTests;
     const tail = skipped > 0 ? `, ${skipped} skipped` : "";
-    process.stdout.write(`\n${passed} passed, ${failed} failed${tail}\n`);
+    // stderr, like jest's own summary, so that this line comes last in the combined output.
+    process.stderr.write(`\n${passed} passed, ${failed} failed${tail}\n`);
   }
 }
 module.exports = SummaryReporter;
