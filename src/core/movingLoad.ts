@@ -100,8 +100,11 @@ export function movingLoad(member: Member, train: Train, effect: MovingEffect): 
   const probes = (solution: Solution, leadX: number, direction: Direction): Probe[] => {
     if (effect.kind !== "absolute-moment") return [{ x: "x" in effect ? effect.x : nodeX[effect.node - 1], value: measure(solution, effect) }];
     const list: Probe[] = nodeX.map((x) => ({ x, value: valueAt(solution, "moment", x) }));
-    for (const x of axlePositions(train, leadX, direction)) {
-      if (x >= 0 && x <= length) list.push({ x, value: valueAt(solution, "moment", x) });
+    // One probe per axle whatever the train position (an axle off the member is probed at
+    // the member end), so every sample of a segment has the same probes to fit.
+    for (const axle of axlePositions(train, leadX, direction)) {
+      const x = Math.min(Math.max(axle, 0), length);
+      list.push({ x, value: valueAt(solution, "moment", x) });
     }
     return list;
   };
