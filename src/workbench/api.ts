@@ -33,6 +33,8 @@ export interface WorkbenchApi {
   onChange(listener: () => void): () => void;
   /** Draws a line chart under the grid; returns its element id. */
   addChart(spec: ChartSpec): string;
+  /** The range a formula cell's result spills over ("B3:F12"), or undefined when it does not spill. */
+  spillRange(address: string): string | undefined;
 }
 
 export function createApi(bench: Workbench, charts: HTMLElement): WorkbenchApi {
@@ -91,6 +93,14 @@ export function createApi(bench: Workbench, charts: HTMLElement): WorkbenchApi {
     },
     onChange: (listener) => bench.onChange(listener),
     addChart: (spec) => drawChart(charts, spec),
+    spillRange(address) {
+      const ref = parseRange(address);
+      const sheet = sheetOf(ref);
+      const size = bench.book.spillSize(bench.book.sheetId(sheet), ref.from.row, ref.from.col);
+      if (!size) return undefined;
+      const to = { row: ref.from.row + size.rows - 1, col: ref.from.col + size.cols - 1 };
+      return `${ref.sheet ? `${ref.sheet}!` : ""}${rangeText(ref.from, to)}`;
+    },
   };
   return api;
 }
