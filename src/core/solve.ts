@@ -1,8 +1,8 @@
-import { solveBanded } from "./banded";
 import { elementDofs } from "./layout";
 import type { Member, Piece, Quantity, Reaction, Solution } from "./model";
 import { pieceValue } from "./polynomial";
-import { cleanZero } from "./tolerance";
+import { cleanZero, EQUILIBRIUM_TOLERANCE } from "./tolerance";
+import { endForce, solveRefined, staticsResidual } from "./refine";
 import { invalid } from "./errors";
 import { integrateSpan } from "./pieces";
 import { checkStability } from "./stability";
@@ -61,6 +61,20 @@ function requireFinite(d: Float64Array, pieces: Piece[], reactions: Reaction[], 
 }
 
 /**
+ * The reactions must balance the loads (to EQUILIBRIUM_TOLERANCE of the load scale) before
+ * anything is reported: when extreme stiffness ratios leave them out of balance even after
+ * refinement, the member is refused rather than answered with untrustworthy numbers.
+ */
+function requireEquilibrium(member: Member, reactions: Reaction[], loadScale: number, length: number): void {
+  if (!(loadScale > 0)) return;
+  const { force, moment } = staticsResidual(member.loads, reactions);
+  if (force <= EQUILIBRIUM_TOLERANCE * loadScale && moment <= EQUILIBRIUM_TOLERANCE * loadScale * length) return;
+  throw invalid(
+    "the reactions do not balance the loads to rounding (extreme ratios of span, EI or spring stiffness make the stiffness system ill-conditioned); results would not be trustworthy",
+  );
+}
+
+/**
  * Solves a member exactly: validates it, checks it cannot move as a mechanism, assembles
  * the banded stiffness system with exact equivalent nodal loads, solves it, and integrates
  * every span from its solved end forces into exact polynomial pieces.
@@ -70,7 +84,7 @@ export function solve(member: Member): Solution {
   validateMember(member);
   checkStability(member);
   const { layout, system, spanLoads, nodalLoads } = assembleMember(member);
-  const d = system.size > 0 ? solveBanded(system) : new Float64Array(0);
+  const d = system.size > 0 ? solveRefined(system) : new Float64Array(0);
   const value = (dof: number): number => (dof >= 0 ? d[dof] : 0);
   const nodeCount = layout.nodeX.length;
   const nodeForce = new Array<number>(nodeCount).fill(0);
@@ -83,11 +97,7 @@ export function solve(member: Member): Solution {
     const dofs = elementDofs(layout, e);
     const local = dofs.map(value);
     const end = [0, 0, 0, 0];
-    for (let r = 0; r < 4; r++) {
-      let sum = -nodalLoads[e][r];
-      for (let c = 0; c < 4; c++) sum += k[r * 4 + c] * local[c];
-      end[r] = sum;
-    }
+    for (let r = 0; r < 4; r++) end[r] = endForce(k, r, local, nodalLoads[e][r]);
     nodeForce[e] += end[0];
     nodeMoment[e] += end[1];
     nodeForce[e + 1] += end[2];
@@ -113,6 +123,7 @@ export function solve(member: Member): Solution {
   });
   const scales = scalesOf(pieces, member.spans, loadScale + reactions.reduce((sum, r) => sum + Math.abs(r.force), 0));
   requireFinite(d, pieces, reactions, scales);
+  requireEquilibrium(member, reactions, loadScale, layout.length);
   return {
     length: layout.length,
     nodeX: layout.nodeX,
