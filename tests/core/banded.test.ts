@@ -8,7 +8,8 @@ import { Matrix, solve as denseSolve } from "ml-matrix";
 import { solveBanded } from "../../src/core/banded";
 import { toDense, type StiffnessSystem } from "../../src/core/stiffness";
 import { HANDBOOK_TOLERANCE } from "../../src/core/tolerance";
-import { caught } from "./support/expectError";
+import { thrown } from "./kit/errors";
+import { runs } from "./kit/random";
 
 /** A banded, diagonally dominant SPD system (well conditioned, so forward errors stay at rounding). */
 function spdSystem(size: number, halfBandwidth: number, entries: number[], rhs: number[]): StiffnessSystem {
@@ -50,7 +51,7 @@ describe("solveBanded", () => {
           residual.forEach((v, i) => expect(Math.abs(v - system.rhs[i])).toBeLessThanOrEqual(HANDBOOK_TOLERANCE * rhsScale));
         },
       ),
-      { numRuns: 150 },
+      runs(150),
     );
   });
 
@@ -68,6 +69,6 @@ describe("solveBanded", () => {
     ["an indefinite system", { size: 2, halfBandwidth: 1, band: Float64Array.from([1, 2, 1, 0]), rhs: Float64Array.from([1, 1]) }],
     ["a zero diagonal", { size: 1, halfBandwidth: 0, band: Float64Array.from([0]), rhs: Float64Array.from([1]) }],
   ])("%s is #VALUE!, never NaN or Infinity", (_name, system) => {
-    expect(caught(() => solveBanded(system)).code).toBe("#VALUE!");
+    expect(thrown(() => solveBanded(system)).code).toBe("#VALUE!");
   });
 });

@@ -26,7 +26,7 @@ import {
   tolerance,
   utilisation,
 } from "../../src/core";
-import { member, udl } from "./support/build";
+import { member, udl } from "./kit/members";
 import { thrown } from "./kit/errors";
 
 const close = (a: number, b: number) => expect(tolerance.relDiff(a, b)).toBeLessThanOrEqual(tolerance.HANDBOOK_TOLERANCE);

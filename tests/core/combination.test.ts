@@ -1,124 +1,140 @@
+/** Load combinations: parsing, formatting (canonical text that parses back) and applying factors. */
 import fc from "fast-check";
-import { applyCombination, formatCombination, parseCombination } from "../../src/core/combination";
-import type { CombinationTerm } from "../../src/core/combination";
-import { linear, point, udl } from "./support/build";
-import { caught } from "./support/expectError";
+import { applyCombination, formatCombination, parseCombination, solve, tolerance, valueAt } from "../../src/core";
+import { thrown } from "./kit/errors";
+import { beam, linear, point, udl } from "./kit/members";
+import { runs } from "./kit/random";
+
+const terms = (text: string | null | undefined) => parseCombination(text as string).terms;
 
 describe("parseCombination", () => {
-  const cases: [string, string | null | undefined, CombinationTerm[]][] = [
-    ["a typical strength combination", "1.2D+1.6L+0.5S", [
-      { factor: 1.2, loadCase: "D" },
-      { factor: 1.6, loadCase: "L" },
-      { factor: 0.5, loadCase: "S" },
-    ]],
-    ["spaces, a star and a bare label", " 0.9 * D + W ", [
-      { factor: 0.9, loadCase: "D" },
-      { factor: 1, loadCase: "W" },
-    ]],
-    ["a minus term and labels with more than one letter", "1.2D - 1.0W + 0.5Lr", [
-      { factor: 1.2, loadCase: "D" },
-      { factor: -1, loadCase: "W" },
-      { factor: 0.5, loadCase: "Lr" },
-    ]],
-    ["a leading sign", "-D+.75L", [
-      { factor: -1, loadCase: "D" },
-      { factor: 0.75, loadCase: "L" },
-    ]],
-    ["labels are case-sensitive: L and Lr differ", "L+Lr", [
-      { factor: 1, loadCase: "L" },
-      { factor: 1, loadCase: "Lr" },
-    ]],
-    ["blank text", "   ", []],
-    ["null (a skipped argument)", null, []],
-    ["undefined", undefined, []],
-  ];
-  test.each(cases)("%s", (_name, text, terms) => {
-    expect(parseCombination(text).terms).toEqual(terms);
+  it.each([
+    ["1.2D+1.6L+0.5S", [[1.2, "D"], [1.6, "L"], [0.5, "S"]]],
+    ["  1.2 D  +  1.6 L ", [[1.2, "D"], [1.6, "L"]]],
+    ["1.2*D + 1.6 * L", [[1.2, "D"], [1.6, "L"]]],
+    [".5D + 2.W", [[0.5, "D"], [2, "W"]]],
+    ["D + L", [[1, "D"], [1, "L"]]],
+    ["0.9D - 1.0W", [[0.9, "D"], [-1, "W"]]],
+    ["-D", [[-1, "D"]]],
+    ["+1.4D", [[1.4, "D"]]],
+    ["1.2D + 1.6L + 0.5Lr", [[1.2, "D"], [1.6, "L"], [0.5, "Lr"]]],
+    ["1.2D + 1.0E1", [[1.2, "D"], [1, "E1"]]],
+  ])("%s", (text, expected) => {
+    expect(terms(text).map((t) => [t.factor, t.loadCase])).toEqual(expected);
   });
 
-  const bad: [string, string, RegExp][] = [
-    ["a trailing plus", "1.2D+", /character 5/],
-    ["two terms without a sign between", "1.2D 1.6L", /'\+' or '-'/],
-    ["a factor without a label", "1.2", /case label/],
-    ["a label starting with a digit after a factor's star", "1.2*3", /case label/],
-    ["a doubled sign", "1.2D++L", /character/],
-    ["a repeated case", "1.2D+1.6L+0.5D", /D appears more than once/],
-    ["a decimal comma", "1,2D", /character/],
-    ["a stray symbol", "1.2D+1.6L;", /character 10/],
-  ];
-  test.each(bad)("%s is #VALUE! naming the fault and where", (_name, text, message) => {
-    const error = caught(() => parseCombination(text));
+  it.each([[""], ["   "], [null], [undefined]])("blank (%p) means every load at factor 1: no terms", (text) => {
+    expect(terms(text)).toEqual([]);
+  });
+
+  it("keeps labels case-sensitive: L, Lr and l are three cases", () => {
+    expect(terms("L + Lr + l").map((t) => t.loadCase)).toEqual(["L", "Lr", "l"]);
+  });
+
+  it.each([
+    ["1.2D 1.6L", /expected '\+' or '-' before the next term at character 6, found "1\.6L"/],
+    ["1.2D +", /expected a factor and a case label|expected/],
+    ["1.2", /expected a factor and a case label at character 1/],
+    ["*D", /at character 1, found "\*D"/],
+    ["1.2D ++ L", /character/],
+    ["D, L", /found ", L"/],
+    ["2 * 3D", /character 1/],
+    ["1.2D + (L)", /at character 6, found "\+ \(L\)"/],
+    ["1.2D+1.6L;", /character 10/],
+  ])("malformed %p is #VALUE! naming the text and the fault", (text, fault) => {
+    const error = thrown(() => parseCombination(text));
     expect(error.code).toBe("#VALUE!");
-    expect(error.message).toContain(text.trim());
-    expect(error.message).toMatch(message);
+    expect(error.message.startsWith(`combination "${text.trim()}": `)).toBe(true);
+    expect(error.message).toMatch(fault);
   });
-});
 
-describe("formatCombination", () => {
-  test.each([
-    ["1.2D+1.6L+0.5S", "1.2D + 1.6L + 0.5S"],
+  it("rejects a repeated label", () => {
+    const error = thrown(() => parseCombination("D + 1.2L + 0.5D"));
+    expect([error.code, error.message]).toEqual(["#VALUE!", 'combination "D + 1.2L + 0.5D": case D appears more than once']);
+  });
+
+  it("formats canonically and round-trips", () => {
+    for (const text of ["1.2D+1.6L+0.5S", "0.9D - W", "-D + 2.5Lr", ".5 * D"]) {
+      const c = parseCombination(text);
+      expect(parseCombination(formatCombination(c)).terms).toEqual(c.terms);
+    }
+    expect(formatCombination(parseCombination("1.2D+1.6L-0.5S"))).toBe("1.2D + 1.6L - 0.5S");
+  });
+
+  it.each([
     ["D+L", "D + L"],
     ["-1.0W + 0.9D", "-W + 0.9D"],
     ["", ""],
-  ])("%s is written as %s", (text, canonical) => {
+  ])("%p is written as %p", (text, canonical) => {
     expect(formatCombination(parseCombination(text))).toBe(canonical);
   });
 
-  const factor = fc.oneof(
-    fc.integer({ min: 1, max: 4000 }).map((k) => k / 1000),
-    fc.integer({ min: 1, max: 100 }).map((k) => k / 4),
-    fc.constantFrom(1e-7, 2.5e-9, 1e21, 1 / 3),
-  );
-  const label = fc.stringMatching(/^[A-Z][a-z0-9]{0,2}$/);
-  test("the canonical text parses back to the same terms (factors of any size)", () => {
+  it("the canonical text parses back to the same terms, for factors of any size", () => {
+    const factor = fc.oneof(
+      fc.integer({ min: 1, max: 4000 }).map((k) => k / 1000),
+      fc.integer({ min: 1, max: 100 }).map((k) => k / 4),
+      fc.constantFrom(1e-7, 2.5e-9, 1e21, 1 / 3),
+    );
+    const label = fc.stringMatching(/^[A-Z][a-z0-9]{0,2}$/);
     fc.assert(
       fc.property(fc.uniqueArray(fc.tuple(label, factor, fc.boolean()), { minLength: 1, maxLength: 5, selector: ([l]) => l }), (raw) => {
         const terms = raw.map(([loadCase, size, negative]) => ({ loadCase, factor: negative ? -size : size }));
-        const text = formatCombination({ text: "", terms });
-        expect(parseCombination(text).terms).toEqual(terms);
+        expect(parseCombination(formatCombination({ text: "", terms })).terms).toEqual(terms);
       }),
+      runs(100),
     );
   });
 });
 
 describe("applyCombination", () => {
-  const loads = [point(10, 2, "D"), udl(3, 0, 4, "L"), linear(1, 0, 2, 4, "S"), point(5, 1, "W")];
+  const loads = [udl(2, 0, 6, "D"), point(10, 3, "L"), point(4, 2, "Lr"), udl(1, 1, 5, "S")].map((l, i) => ({ ...l, row: i + 1 }));
 
-  test("factors each load by its case's factor, both ends of a linear load included, and leaves out cases not named", () => {
-    const result = applyCombination(loads, parseCombination("1.2D+1.6L+0.5S"));
-    expect(result.map((l) => [l.loadCase, l.magnitude, l.magnitudeEnd])).toEqual([
-      ["D", 12, 0],
-      ["L", 1.6 * 3, 1.6 * 3],
-      ["S", 0.5, 1],
-    ]);
-    expect(result.map((l) => l.row)).toEqual(loads.slice(0, 3).map((l) => l.row));
-  });
-
-  test("does not change the loads it was given", () => {
-    const copy = JSON.parse(JSON.stringify(loads));
-    applyCombination(loads, parseCombination("2D+2L"));
-    expect(loads).toEqual(copy);
-  });
-
-  test("no combination, or a blank one, keeps every load at factor 1", () => {
-    expect(applyCombination(loads, null)).toEqual(loads);
+  it("blank or no combination keeps every load at factor 1", () => {
     expect(applyCombination(loads, parseCombination(""))).toEqual(loads);
+    expect(applyCombination(loads, null)).toEqual(loads);
   });
 
-  test("a load without a case under a combination is #VALUE! naming its row", () => {
-    const unlabelled = point(1, 1);
-    const error = caught(() => applyCombination([...loads, unlabelled], parseCombination("D")));
+  it("factors magnitudes of the named cases and drops the others, without touching the input", () => {
+    const before = JSON.stringify(loads);
+    const out = applyCombination(loads, parseCombination("1.2D + 1.6L"));
+    expect(out.map((l) => [l.row, l.magnitude, l.magnitudeEnd, l.xStart, l.xEnd])).toEqual([
+      [1, 2.4, 2.4, 0, 6],
+      [2, 16, 16, 3, 3],
+    ]);
+    expect(JSON.stringify(loads)).toBe(before);
+  });
+
+  it("factors both ends of a linear load", () => {
+    const out = applyCombination([{ ...linear(1, 2, 0, 4, "S"), row: 9 }], parseCombination("0.5S"));
+    expect(out.map((l) => [l.row, l.magnitude, l.magnitudeEnd])).toEqual([[9, 0.5, 1]]);
+  });
+
+  it("Lr is not L: each gets its own factor", () => {
+    const out = applyCombination(loads, parseCombination("0.5Lr + 1.6L"));
+    expect(out.map((l) => [l.loadCase, l.magnitude])).toEqual([
+      ["L", 16],
+      ["Lr", 2],
+    ]);
+  });
+
+  it("a label no load carries contributes nothing", () => {
+    expect(applyCombination(loads, parseCombination("1.0E"))).toEqual([]);
+    expect(applyCombination(loads, parseCombination("1.4D + 1.0E")).map((l) => l.row)).toEqual([1]);
+  });
+
+  it("a load without a case under a non-blank combination is #VALUE! naming its row", () => {
+    const error = thrown(() => applyCombination([...loads, { ...point(1, 1), row: 7 }], parseCombination("1.2D")));
     expect(error.code).toBe("#VALUE!");
-    expect(error.message).toContain(`load row ${unlabelled.row}`);
+    expect(error.message).toMatch(/^load row 7\b/);
   });
 
-  test("superposition: a combination equals the factored sum of the cases taken one at a time", () => {
-    const combo = parseCombination("1.2D+1.6L+0.5S-0.3W");
-    const total = (ls: typeof loads) => ls.reduce((s, l) => s + l.magnitude + l.magnitudeEnd, 0);
-    const byCase = combo.terms.reduce(
-      (s, t) => s + t.factor * total(loads.filter((l) => l.loadCase === t.loadCase)),
-      0,
-    );
-    expect(total(applyCombination(loads, combo))).toBeCloseTo(byCase, 12);
+  it("solving a combination equals the factored sum of the cases solved alone (linearity)", () => {
+    const geometry = beam([6], ["fixed", "pin"], []);
+    const only = (c: string) => solve({ ...geometry, loads: loads.filter((l) => l.loadCase === c) });
+    const combined = solve({ ...geometry, loads: applyCombination(loads, parseCombination("1.2D + 1.6L - 0.5S")) });
+    for (const x of [0, 1.7, 3, 4.4, 6]) {
+      const expected = 1.2 * valueAt(only("D"), "moment", x) + 1.6 * valueAt(only("L"), "moment", x) - 0.5 * valueAt(only("S"), "moment", x);
+      expect(tolerance.relClose(valueAt(combined, "moment", x), expected, tolerance.HANDBOOK_TOLERANCE, 100)).toBe(true);
+    }
   });
 });

@@ -1,13 +1,15 @@
+/**
+ * diagram(): evenly spaced stations plus load positions and peaks, two rows (left, then right)
+ * where something jumps and one elsewhere, NaN slope and deflection without EI, bad station
+ * counts, and every row against the independent force-method solution on random members.
+ */
 import fc from "fast-check";
-import { solve } from "../../src/core/solve";
-import { diagram } from "../../src/core/diagram";
-import { extremes } from "../../src/core/extremes";
-import type { DiagramRow, Member, Quantity } from "../../src/core/model";
+import { diagram, extremes, solve, tolerance, valueAt, type DiagramRow, type Member, type Quantity } from "../../src/core";
 import { HANDBOOK_TOLERANCE } from "../../src/core/tolerance";
-import { couple, member, memberLength, point, scales, udl } from "./support/build";
-import { loadedMember } from "./support/arbitraries";
-import { caught } from "./support/expectError";
-import { referenceSolve } from "./support/reference";
+import { thrown } from "./kit/errors";
+import { forceMethodSolve } from "./kit/forceMethod";
+import { beam, couple, lengthOf, member, point, scalesOf, udl } from "./kit/members";
+import { loadedMember, runs } from "./kit/random";
 
 const QUANTITIES: Quantity[] = ["shear", "moment", "slope", "deflection"];
 
@@ -51,8 +53,8 @@ describe("diagram on a hand-checked member", () => {
   test("every extreme's location is a row, with the extreme's value", () => {
     for (const q of QUANTITIES) {
       const e = extremes(s, q);
-      expect(rows.some((r) => r.x === e.xMax && Math.abs(r[q] - e.max) <= HANDBOOK_TOLERANCE * scales(m)[q])).toBe(true);
-      expect(rows.some((r) => r.x === e.xMin && Math.abs(r[q] - e.min) <= HANDBOOK_TOLERANCE * scales(m)[q])).toBe(true);
+      expect(rows.some((r) => r.x === e.xMax && Math.abs(r[q] - e.max) <= HANDBOOK_TOLERANCE * scalesOf(m)[q])).toBe(true);
+      expect(rows.some((r) => r.x === e.xMin && Math.abs(r[q] - e.min) <= HANDBOOK_TOLERANCE * scalesOf(m)[q])).toBe(true);
     }
   });
 
@@ -79,7 +81,7 @@ describe("diagram: slope jumps at a hinge", () => {
 describe("diagram: bad points", () => {
   const s = solve(member({ spans: [4], loads: [udl(1, 0, 4)] }));
   test.each([1, 0, -3, 2.5, NaN, Infinity])("points = %d is #VALUE! naming points", (n) => {
-    const error = caught(() => diagram(s, n));
+    const error = thrown(() => diagram(s, n));
     expect(error.code).toBe("#VALUE!");
     expect(error.message).toMatch(/points/);
   });
@@ -92,9 +94,9 @@ describe("diagram: bad points", () => {
 describe("diagram against the independent reference on random members", () => {
   function check(m: Member, points: number): void {
     const rows = diagram(solve(m), points);
-    const ref = referenceSolve(m);
-    const length = memberLength(m);
-    const scale = scales(m);
+    const ref = forceMethodSolve(m);
+    const length = lengthOf(m);
+    const scale = scalesOf(m);
     for (let i = 0; i < rows.length; i++) {
       const r = rows[i];
       const paired = (i + 1 < rows.length && rows[i + 1].x === r.x) || (i > 0 && rows[i - 1].x === r.x);
@@ -114,6 +116,70 @@ describe("diagram against the independent reference on random members", () => {
   }
 
   test("every row matches the reference on its side of any jump; the even stations are all there", () => {
-    fc.assert(fc.property(loadedMember, fc.integer({ min: 2, max: 41 }), check), { numRuns: 150 });
+    fc.assert(fc.property(loadedMember, fc.integer({ min: 2, max: 41 }), check), runs(120));
+  });
+});
+
+const xsOf = (rows: DiagramRow[]) => rows.map((r) => r.x);
+const has = (rows: DiagramRow[], x: number) => rows.some((r) => Math.abs(r.x - x) <= tolerance.POSITION_TOLERANCE * 10 * Math.max(1, x));
+
+describe("diagram stations with a partial load and a point load", () => {
+  // partial UDL: w = 4 on [2, 6] of a 10 span; peak M at 4.4 (steel construction manual, partial uniform load, from memory)
+  const m = beam([10], ["pin", "pin"], [udl(4, 2, 6), point(3, 8.3)], 2e3);
+  const sol = solve(m);
+  const rows = diagram(sol, 11);
+
+  it("includes load positions and the peak locations", () => {
+    for (const x of [2, 6, 8.3]) expect(has(rows, x)).toBe(true);
+    for (const q of ["moment", "deflection"] as const) {
+      const e = extremes(sol, q);
+      expect(has(rows, e.xMax)).toBe(true);
+      expect(has(rows, e.xMin)).toBe(true);
+    }
+  });
+
+  it("is sorted by x, and repeats an x only where something jumps (two rows: left, then right)", () => {
+    const xs = xsOf(rows);
+    for (let i = 1; i < xs.length; i++) expect(xs[i]).toBeGreaterThanOrEqual(xs[i - 1]);
+    const repeated = xs.filter((x, i) => i > 0 && xs[i - 1] === x);
+    expect(repeated).toEqual([8.3]);
+    const at = rows.filter((r) => r.x === 8.3);
+    expect(at.length).toBe(2);
+    expect(tolerance.relClose(at[0].shear - at[1].shear, 3, tolerance.HANDBOOK_TOLERANCE)).toBe(true);
+    expect(at[1].shear).toBe(valueAt(sol, "shear", 8.3));
+  });
+
+  it("every row agrees with valueAt (right-hand rows) at its x", () => {
+    const xs = xsOf(rows);
+    rows.forEach((r, i) => {
+      if (i + 1 < rows.length && xs[i + 1] === r.x) return; // the left row of a jump
+      for (const q of ["shear", "moment", "slope", "deflection"] as const) {
+        expect(tolerance.relClose(r[q], valueAt(sol, q, r.x), tolerance.HANDBOOK_TOLERANCE, 1e-12)).toBe(true);
+      }
+    });
+  });
+
+  it("N stations means N evenly spaced x, exactly, before extra points are added", () => {
+    const plain = diagram(solve(beam([6], ["pin", "pin"], [udl(1, 0, 6)])), 7);
+    expect(xsOf(plain)).toEqual([0, 1, 2, 3, 4, 5, 6]);
+  });
+});
+
+describe("doubled rows", () => {
+  it("at an interior support (shear), at a couple (moment) and at a hinge (slope)", () => {
+    const sol = solve(beam([4, 4, 3, 3], ["pin", "pin", "pin", "hinge", "fixed"], [udl(2, 0, 14), couple(5, 2)], 1e3));
+    const rows = diagram(sol, 5);
+    const pairs = (x: number) => rows.filter((r) => r.x === x);
+    expect(pairs(4).length).toBe(2);
+    expect(pairs(2).length).toBe(2);
+    expect(tolerance.relClose(pairs(2)[1].moment - pairs(2)[0].moment, 5, tolerance.HANDBOOK_TOLERANCE)).toBe(true);
+    expect(pairs(11).length).toBe(2);
+    expect(pairs(11)[0].slope).not.toBeCloseTo(pairs(11)[1].slope, 8);
+    expect(pairs(11)[0].deflection).toBeCloseTo(pairs(11)[1].deflection, 12);
+  });
+
+  it("not where nothing jumps (a free node joining two spans)", () => {
+    const rows = diagram(solve(beam([2, 3], ["fixed", "free", "free"], [udl(1, 0, 5)], [20, 10])), 3);
+    expect(rows.filter((r) => r.x === 2).length).toBe(1);
   });
 });

@@ -1,81 +1,88 @@
-import { solve } from "../../src/core/solve";
-import { valueAt, valuesAt } from "../../src/core/evaluate";
-import type { Quantity } from "../../src/core/model";
-import { HANDBOOK_TOLERANCE } from "../../src/core/tolerance";
-import { couple, member, point, udl } from "./support/build";
-import { caught } from "./support/expectError";
-import { expectClose } from "./support/expectClose";
+/** valueAt / valuesAt: jump semantics, the member ends, and the error paths. */
+import { solve, tolerance, valueAt, valuesAt } from "../../src/core";
+import { thrown } from "./kit/errors";
+import { beam, couple, point, udl } from "./kit/members";
 
-const L = 10;
-const P = 6;
-const w = 2;
+const near = (a: number, b: number) => tolerance.relClose(a, b, tolerance.HANDBOOK_TOLERANCE, 1);
 
-describe("valueAt: which side of a jump", () => {
-  // Simple beam, point load P at 4 (steel construction manual, beam diagrams and formulas, case 8, from memory):
-  // V = 0.6P left of the load, -0.4P right of it.
-  const s = solve(member({ spans: [L], EI: 100, loads: [point(P, 4)] }));
-  const cases: [string, Quantity, number, number][] = [
-    ["left end gives the value just right (the reaction's shear)", "shear", 0, 0.6 * P],
-    ["at the load, the value just right", "shear", 4, -0.4 * P],
-    ["right end gives the value just left", "shear", L, -0.4 * P],
-    ["moment at the load", "moment", 4, 0.24 * P * L],
-    ["moment is zero at the right end", "moment", L, 0],
-  ];
-  test.each(cases)("%s", (_name, q, x, expected) => {
-    expectClose(`${q} at ${x}`, valueAt(s, q, x), expected, HANDBOOK_TOLERANCE, P * L);
+describe("values at jumps: just right of x, and just left at the right end", () => {
+  // simple span L = 10, P = 6 at 4: R_A = 3.6, R_B = 2.4 (statics)
+  const sol = solve(beam([10], ["pin", "pin"], [point(6, 4)], 1e3));
+
+  it("shear at the left end is the left reaction (just right of 0)", () => expect(near(valueAt(sol, "shear", 0), 3.6)).toBe(true));
+  it("shear at a point load is the value past it", () => expect(near(valueAt(sol, "shear", 4), 3.6 - 6)).toBe(true));
+  it("shear just before a point load is the value before it", () => expect(near(valueAt(sol, "shear", 4 - 1e-9), 3.6)).toBe(true));
+  it("shear at the right end is the value just left of the reaction", () => expect(near(valueAt(sol, "shear", 10), -2.4)).toBe(true));
+  it("moment at the point load is R_A·a (steel construction manual, case 8, from memory)", () => expect(near(valueAt(sol, "moment", 4), 3.6 * 4)).toBe(true));
+  it("moment at the right end is zero", () => expect(near(valueAt(sol, "moment", 10), 0)).toBe(true));
+
+  it("a point load at a cantilever's free right end: the value just left ignores it, the reaction takes it", () => {
+    const s = solve(beam([10], ["fixed", "free"], [point(6, 10)], 100));
+    expect(near(valueAt(s, "shear", 10), 6)).toBe(true);
+    expect(near(s.reactions[0].force, 6)).toBe(true);
   });
 
-  test("a couple's moment jump: just right of it (formulas for stress and strain handbook, simply supported, intermediate couple, from memory)", () => {
-    const c = solve(member({ spans: [L], loads: [couple(20, 4)] }));
-    expectClose("M at 4", valueAt(c, "moment", 4), (20 * 6) / L, HANDBOOK_TOLERANCE, 20);
-    expectClose("M at 3.999", valueAt(c, "moment", 3.999), (-20 * 3.999) / L, HANDBOOK_TOLERANCE, 20);
+  it("moment at a couple is the value past it (a clockwise couple raises M)", () => {
+    const s = solve(beam([10], ["pin", "pin"], [couple(5, 4)]));
+    // R_A = -C/L = -0.5: M(4-) = -2, M(4+) = -2 + 5 = 3
+    expect(near(valueAt(s, "moment", 4), 3)).toBe(true);
+    expect(near(valueAt(s, "moment", 4 - 1e-9), -2)).toBe(true);
   });
 
-  test("an interior support's reaction jump: just right of it (two equal spans, uniform load, steel construction manual case 32, from memory)", () => {
-    const c = solve(member({ spans: [L, L], loads: [udl(w, 0, 2 * L)] }));
-    expectClose("V at the middle support", valueAt(c, "shear", L), (5 * w * L) / 8, HANDBOOK_TOLERANCE, w * L);
+  it("at an interior support the shear is the value right of the reaction", () => {
+    // two equal spans, UDL w = 2, L = 5: V(5-) = -5wL/8, V(5+) = +5wL/8 (coefficient tables, from memory)
+    const s = solve(beam([5, 5], ["pin", "pin", "pin"], [udl(2, 0, 10)]));
+    expect(near(valueAt(s, "shear", 5), 6.25)).toBe(true);
+    expect(near(valueAt(s, "shear", 5 - 1e-9), -6.25)).toBe(true);
   });
 
-  test("point load at the right end: the value just left ignores it, the reaction takes it", () => {
-    const c = solve(member({ spans: [L], supports: ["fixed", "free"], EI: 100, loads: [point(P, L)] }));
-    expectClose("V at the tip", valueAt(c, "shear", L), P, HANDBOOK_TOLERANCE, P);
-    expectClose("fixed end reaction", c.reactions[0].force, P, HANDBOOK_TOLERANCE, P);
+  it("at a hinge the slope is the value right of it", () => {
+    // two equal cantilevers w = 2, L = 3 joined by a hinge: slope left wL³/6EI, right -wL³/6EI (cantilever formula, from memory)
+    const s = solve(beam([3, 3], ["fixed", "hinge", "fixed"], [udl(2, 0, 6)], 100));
+    expect(near(valueAt(s, "slope", 3), -0.09)).toBe(true);
+    expect(near(valueAt(s, "slope", 3 - 1e-7), 0.09)).toBe(true);
+  });
+
+  it("positions within rounding of the ends are the ends", () => {
+    const s = solve(beam([0.7, 0.1], ["pin", "pin", "pin"], [point(1, 0.8), udl(1, 0, 0.8)]));
+    expect(valueAt(s, "shear", 0.8)).toBe(valueAt(s, "shear", 0.7 + 0.1));
+    expect(() => valueAt(s, "moment", -1e-17)).not.toThrow();
+    for (const x of [0, -0]) expect(Number.isFinite(valueAt(s, "moment", x))).toBe(true);
+  });
+
+  it("valuesAt is valueAt at each x, in order, for every quantity; no positions give no values", () => {
+    const xs = [0, 2.5, 4, 7.25, 10];
+    for (const q of ["shear", "moment", "slope", "deflection"] as const) expect(valuesAt(sol, q, xs)).toEqual(xs.map((x) => valueAt(sol, q, x)));
+    expect(valuesAt(sol, "moment", [])).toEqual([]);
   });
 });
 
-describe("valueAt: positions within rounding of the ends are on the member", () => {
-  const s = solve(member({ spans: [0.7, 0.1], EI: 100, loads: [udl(w, 0, 0.7)] }));
-  test.each([0.8, 0.7 + 0.1, 0, -0])("x = %d", (x) => {
-    expect(Number.isFinite(valueAt(s, "moment", x))).toBe(true);
-  });
-});
+describe("valueAt errors", () => {
+  const sol = solve(beam([4, 4], ["pin", "pin", "pin"], [udl(1, 0, 8)], 500));
+  const noEI = solve(beam([4, 4], ["pin", "pin", "pin"], [udl(1, 0, 8)]));
 
-describe("valueAt: errors", () => {
-  const s = solve(member({ spans: [L], loads: [point(P, 4)] }));
-  const withEI = solve(member({ spans: [L], EI: 1, loads: [point(P, 4)] }));
-  test.each([-0.5, L + 0.5, 1e9])("x = %d outside the member is #VALUE! naming x and the member's extent", (x) => {
-    const error = caught(() => valueAt(withEI, "moment", x));
+  it.each([[-0.5], [8.5], [1e9]])("x = %p outside the member is #VALUE! naming x and the member's extent", (x) => {
+    const error = thrown(() => valueAt(sol, "moment", x));
     expect(error.code).toBe("#VALUE!");
+    expect(error.message).toMatch(/^x/);
     expect(error.message).toContain(String(x));
-    expect(error.message).toContain(String(L));
+    expect(error.message).toContain("8");
   });
-  test.each([NaN, Infinity, -Infinity])("x = %d is #VALUE!", (x) => {
-    expect(caught(() => valueAt(withEI, "shear", x)).code).toBe("#VALUE!");
+
+  it.each([[NaN], [Infinity], [-Infinity]])("x = %p is #VALUE! naming x", (x) => {
+    const error = thrown(() => valueAt(sol, "shear", x));
+    expect(error.code).toBe("#VALUE!");
+    expect(error.message).toMatch(/^x/);
   });
-  test.each(["slope", "deflection"] as Quantity[])("%s without EI is #N/A and says EI is needed", (q) => {
-    const error = caught(() => valueAt(s, q, 2));
+
+  it.each(["slope", "deflection"] as const)("%s without EI is #N/A saying EI is needed", (q) => {
+    const error = thrown(() => valueAt(noEI, q, 2));
     expect(error.code).toBe("#N/A");
     expect(error.message).toMatch(/EI/);
   });
-});
 
-describe("valuesAt", () => {
-  test("is valueAt at each position, in order", () => {
-    const s = solve(member({ spans: [4, 6], supports: ["fixed", "pin", "free"], EI: 50, loads: [udl(w, 1, 9), point(P, 10)] }));
-    const xs = [0, 1, 2.5, 4, 7, 10];
-    for (const q of ["shear", "moment", "slope", "deflection"] as Quantity[]) {
-      expect(valuesAt(s, q, xs)).toEqual(xs.map((x) => valueAt(s, q, x)));
-    }
-    expect(valuesAt(s, "moment", [])).toEqual([]);
+  it("shear and moment need no EI, and agree with the member solved with EI", () => {
+    expect(near(valueAt(noEI, "moment", 4), valueAt(sol, "moment", 4))).toBe(true);
+    expect(near(valueAt(noEI, "moment", 4), -2)).toBe(true); // -wL²/8, two equal spans (coefficient tables, from memory)
   });
 });

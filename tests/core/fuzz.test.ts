@@ -9,8 +9,9 @@ import { extremes } from "../../src/core/extremes";
 import { diagram } from "../../src/core/diagram";
 import { isSpanError } from "../../src/core/errors";
 import type { Load, Member, Quantity, Support } from "../../src/core/model";
-import { member, point, udl } from "./support/build";
-import { caught } from "./support/expectError";
+import { member, point, udl } from "./kit/members";
+import { thrown } from "./kit/errors";
+import { runs } from "./kit/random";
 
 const wild = fc.oneof(
   { weight: 6, arbitrary: fc.double({ min: -1e3, max: 1e3, noNaN: true }).filter((v) => v === 0 || Math.abs(v) >= 1e-12) },
@@ -75,7 +76,7 @@ describe("fuzzed members", () => {
           }
         });
       }),
-      { numRuns: 1500 },
+      runs(800),
     );
   });
 });
@@ -89,6 +90,6 @@ describe("numbers too large or too small for floating point", () => {
     ["a point load of 1e300 (deflection overflows)", member({ spans: [1e3], EI: 1, loads: [point(1e300, 500)] }), "deflection", 500],
   ];
   test.each(cases)("%s: #VALUE!, since the true value does not fit in a double", (_name, m, q, x) => {
-    expect(caught(() => valueAt(solve(m), q, x)).code).toBe("#VALUE!");
+    expect(thrown(() => valueAt(solve(m), q, x)).code).toBe("#VALUE!");
   });
 });

@@ -15,6 +15,7 @@
 import fc from "fast-check";
 import { blockProperties, sectionProperties, tolerance, type Block, type SectionProperties, type SectionShape } from "../../src/core";
 import { thrown } from "./kit/errors";
+import { runs } from "./kit/random";
 
 const TOL = tolerance.HANDBOOK_TOLERANCE;
 
@@ -218,7 +219,7 @@ describe("invariants (fast-check, fixed seed)", () => {
         const q = sectionProperties(scaled as unknown as SectionShape);
         return tolerance.relClose(q.Ix, p.Ix * k ** 4, 1e-9) && tolerance.relClose(q.Zx, p.Zx * k ** 3, 1e-9) && tolerance.relClose(q.area, p.area * k * k, 1e-9);
       }),
-      { seed: 7, numRuns: 60 },
+      runs(60),
     );
   });
 

@@ -8,7 +8,7 @@ function uniform(): HandbookCase {
   const [L, w, EI] = [4, 5, 1.2e4];
   return {
     name: "cantilever, uniform load (fixed at the left end)",
-    source: `${SCM}: cantilever beam, uniformly distributed load (from memory)`,
+    source: `${SCM}, case 19: cantilever beam, uniformly distributed load (from memory)`,
     member: beam([L], ["fixed", "free"], [udl(w, 0, L)], EI),
     checks: [
       { reaction: 0, force: w * L, moment: (w * L * L) / 2 },
@@ -32,7 +32,7 @@ function tipPoint(): HandbookCase {
   const x = 1.25;
   return {
     name: "cantilever, point load at the free end",
-    source: `${SCM}: cantilever beam, concentrated load at free end (from memory)`,
+    source: `${SCM}, case 22: cantilever beam, concentrated load at free end (from memory)`,
     member: beam([L], ["fixed", "free"], [point(P, L)], EI),
     checks: [
       { reaction: 0, force: P, moment: P * L },
@@ -42,6 +42,23 @@ function tipPoint(): HandbookCase {
       { quantity: "deflection", at: L, value: (P * L ** 3) / (3 * EI) },
       { quantity: "slope", at: L, value: (P * L * L) / (2 * EI) },
       { quantity: "deflection", at: x, value: (P * x * x * (3 * L - x)) / (6 * EI) },
+    ],
+  };
+}
+
+function tipPointFixedRight(): HandbookCase {
+  const [L, P, EI] = [8, 10, 5000];
+  return {
+    name: "cantilever fixed at the right end, point load at the free left end",
+    source: `${SCM}, case 22: cantilever beam, concentrated load at free end, mirrored (from memory)`,
+    member: beam([L], ["free", "fixed"], [point(P, 0)], EI),
+    checks: [
+      { reaction: 0, force: 0, moment: 0 },
+      { reaction: 1, force: P, moment: -P * L },
+      { quantity: "shear", at: 0, value: -P },
+      { quantity: "moment", at: L, value: -P * L },
+      { quantity: "deflection", at: 0, value: (P * L ** 3) / (3 * EI) },
+      { quantity: "slope", at: 0, value: (-P * L * L) / (2 * EI) },
     ],
   };
 }
@@ -68,7 +85,7 @@ function triangleToFixedEnd(): HandbookCase {
   const W = (w0 * L) / 2;
   return {
     name: "cantilever, load increasing uniformly to the fixed end",
-    source: `${SCM}: cantilever beam, load increasing uniformly to fixed end (from memory)`,
+    source: `${SCM}, case 18: cantilever beam, load increasing uniformly to fixed end (from memory)`,
     member: beam([L], ["fixed", "free"], [linear(w0, 0, 0, L)], EI),
     checks: [
       { reaction: 0, force: W, moment: (W * L) / 3 },
@@ -118,12 +135,13 @@ function overhangTipPoint(): HandbookCase {
   const [L, a, P, EI] = [5, 1.5, 4, 1e4];
   return {
     name: "beam overhanging one support, point load at the end of the overhang",
-    source: `${SCM}: beam overhanging one support, concentrated load at end of overhang (from memory)`,
+    source: `${SCM}, case 26: beam overhanging one support, concentrated load at end of overhang (from memory)`,
     member: beam([L, a], ["pin", "pin", "free"], [point(P, L + a)], EI),
     checks: [
       { reaction: 0, force: (-P * a) / L },
       { reaction: 1, force: (P * (L + a)) / L },
       { quantity: "moment", at: L, value: -P * a },
+      { quantity: "shear", at: L + a, value: P },
       { peak: "min", quantity: "moment", value: -P * a, x: L },
       { quantity: "deflection", at: L + a, value: (P * a * a * (L + a)) / (3 * EI) },
       { peak: "max", quantity: "deflection", value: (P * a * a * (L + a)) / (3 * EI), x: L + a },
@@ -168,6 +186,7 @@ function steppedTipPoint(): HandbookCase {
 export const cantileverCases: HandbookCase[] = [
   uniform(),
   tipPoint(),
+  tipPointFixedRight(),
   tipCouple(),
   triangleToFixedEnd(),
   triangleToFreeEnd(),

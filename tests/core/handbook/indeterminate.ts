@@ -11,7 +11,7 @@ function proppedUniform(): HandbookCase {
   const xPeak = (L * (1 + sqrt(33))) / 16;
   return {
     name: "propped cantilever (pin left, fixed right), uniform load",
-    source: `${SCM}: beam fixed at one end, supported at other, uniformly distributed load (from memory)`,
+    source: `${SCM}, case 12: beam fixed at one end, supported at other, uniformly distributed load (from memory)`,
     member: beam([L], ["pin", "fixed"], [udl(w, 0, L)], EI),
     checks: [
       { reaction: 0, force: (3 * w * L) / 8, moment: 0 },
@@ -30,7 +30,7 @@ function proppedCentrePoint(): HandbookCase {
   const [L, P, EI] = [6, 16, 2e4];
   return {
     name: "propped cantilever (fixed left, pin right), point load at centre",
-    source: `${SCM}: beam fixed at one end, supported at other, concentrated load at center (from memory)`,
+    source: `${SCM}, case 13: beam fixed at one end, supported at other, concentrated load at center (from memory)`,
     member: beam([L], ["fixed", "pin"], [point(P, L / 2)], EI),
     checks: [
       { reaction: 0, force: (11 * P) / 16, moment: (3 * P * L) / 16 },
@@ -47,7 +47,7 @@ function fixedUniform(): HandbookCase {
   const [L, w, EI] = [6, 4, 2e4];
   return {
     name: "fixed at both ends, uniform load",
-    source: `${SCM}: beam fixed at both ends, uniformly distributed load (from memory)`,
+    source: `${SCM}, case 15: beam fixed at both ends, uniformly distributed load (from memory)`,
     member: beam([L], ["fixed", "fixed"], [udl(w, 0, L)], EI),
     checks: [
       { reaction: 0, force: (w * L) / 2, moment: (w * L * L) / 12 },
@@ -65,7 +65,7 @@ function fixedCentrePoint(): HandbookCase {
   const [L, P, EI] = [5, 8, 1e4];
   return {
     name: "fixed at both ends, point load at centre",
-    source: `${SCM}: beam fixed at both ends, concentrated load at center (from memory)`,
+    source: `${SCM}, case 16: beam fixed at both ends, concentrated load at center (from memory)`,
     member: beam([L], ["fixed", "fixed"], [point(P, L / 2)], EI),
     checks: [
       { reaction: 0, force: P / 2, moment: (P * L) / 8 },
@@ -81,7 +81,7 @@ function fixedOffCentrePoint(): HandbookCase {
   const b = L - a;
   return {
     name: "fixed at both ends, point load off centre",
-    source: `${SCM}: beam fixed at both ends, concentrated load at any point (from memory)`,
+    source: `${SCM}, case 17: beam fixed at both ends, concentrated load at any point (from memory)`,
     member: beam([L], ["fixed", "fixed"], [point(P, a)], EI),
     checks: [
       { reaction: 0, force: (P * b * b * (3 * a + b)) / L ** 3, moment: (P * a * b * b) / (L * L) },
@@ -97,7 +97,7 @@ function twoSpanUniform(): HandbookCase {
   const xPeak = (L * (1 + sqrt(33))) / 16;
   return {
     name: "two equal spans, uniform load on both",
-    source: `${COEFFICIENTS}: two equal spans, uniform load — reactions 3/8, 5/4, 3/8 wL, support moment -wL²/8 (from memory); deflection as the propped cantilever in ${SCM}`,
+    source: `${COEFFICIENTS}: two equal spans, uniform load — reactions 3/8, 5/4, 3/8 wL, support moment -wL²/8 (from memory), as in ${SCM}, case 32; deflection as the propped cantilever in ${SCM}, case 12`,
     member: beam([L, L], ["pin", "pin", "pin"], [udl(w, 0, 2 * L)], EI),
     checks: [
       { reaction: 0, force: (3 * w * L) / 8 },
@@ -111,6 +111,39 @@ function twoSpanUniform(): HandbookCase {
       { peak: "min", quantity: "shear", value: (-5 * w * L) / 8, x: L },
       { peak: "max", quantity: "deflection", value: proppedUniformDeflection(w, L, EI, xPeak), x: xPeak },
       { quantity: "slope", at: L, value: 0 },
+      { quantity: "deflection", at: L, value: 0 },
+    ],
+  };
+}
+
+function twoSpanUniformOnOne(): HandbookCase {
+  const [L, w] = [8, 3];
+  return {
+    name: "two equal spans, uniform load on one span",
+    source: `${SCM}, case 29: continuous beam, two equal spans, uniform load on one span (from memory)`,
+    member: beam([L, L], ["pin", "pin", "pin"], [udl(w, 0, L)], 5000),
+    checks: [
+      { reaction: 0, force: (7 * w * L) / 16 },
+      { reaction: 1, force: (5 * w * L) / 8 },
+      { reaction: 2, force: (-w * L) / 16 },
+      { quantity: "moment", at: L, value: (-w * L * L) / 16 },
+      { quantity: "moment", at: (7 * L) / 16, value: (49 * w * L * L) / 512 },
+    ],
+  };
+}
+
+function twoSpanPointOnOne(): HandbookCase {
+  const [L, P] = [8, 10];
+  return {
+    name: "two equal spans, point load at the centre of one span",
+    source: `${SCM}, case 30: continuous beam, two equal spans, concentrated load at center of one span (from memory)`,
+    member: beam([L, L], ["pin", "pin", "pin"], [point(P, L / 2)], 5000),
+    checks: [
+      { reaction: 0, force: (13 * P) / 32 },
+      { reaction: 1, force: (11 * P) / 16 },
+      { reaction: 2, force: (-3 * P) / 32 },
+      { quantity: "moment", at: L / 2, value: (13 * P * L) / 64 },
+      { quantity: "moment", at: L, value: (-3 * P * L) / 32 },
     ],
   };
 }
@@ -190,6 +223,24 @@ function unequalCantileversHingeLoad(): HandbookCase {
   };
 }
 
+function suspendedSpan(): HandbookCase {
+  const [a, L, w, EI] = [3, 8, 3, 5000];
+  return {
+    name: "cantilever carrying a suspended span through a hinge, uniform load on the suspended span",
+    source: "derived by statics: the hinge passes the suspended span's end shear wL/2 to the cantilever tip; tip deflection as the cantilever with an end load",
+    member: beam([a, L], ["fixed", "hinge", "pin"], [udl(w, a, a + L)], EI),
+    checks: [
+      { reaction: 0, force: (w * L) / 2, moment: ((w * L) / 2) * a },
+      { reaction: 1, force: 0, moment: 0 },
+      { reaction: 2, force: (w * L) / 2, moment: 0 },
+      { quantity: "moment", at: a, value: 0 },
+      { quantity: "moment", at: 0, value: ((-w * L) / 2) * a },
+      { quantity: "moment", at: a + L / 2, value: (w * L * L) / 8 },
+      { quantity: "deflection", at: a, value: (((w * L) / 2) * a ** 3) / (3 * EI) },
+    ],
+  };
+}
+
 function gerber(): HandbookCase {
   const w = 3;
   return {
@@ -218,9 +269,12 @@ export const indeterminateCases: HandbookCase[] = [
   fixedCentrePoint(),
   fixedOffCentrePoint(),
   twoSpanUniform(),
+  twoSpanUniformOnOne(),
+  twoSpanPointOnOne(),
   threeSpanUniform(),
   twoSpanCentrePoints(),
   cantileversJoinedByHinge(),
   unequalCantileversHingeLoad(),
+  suspendedSpan(),
   gerber(),
 ];

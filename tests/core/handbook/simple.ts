@@ -9,7 +9,7 @@ function uniform(): HandbookCase {
   const defl = (x: number) => (w * x * (L ** 3 - 2 * L * x * x + x ** 3)) / (24 * EI);
   return {
     name: "simple span, uniform load",
-    source: `${SCM}: simple beam, uniformly distributed load (from memory)`,
+    source: `${SCM}, case 1: simple beam, uniformly distributed load (from memory)`,
     member: beam([L], ["pin", "pin"], [udl(w, 0, L)], EI),
     checks: [
       { reaction: 0, force: (w * L) / 2, moment: 0 },
@@ -33,7 +33,7 @@ function centrePoint(): HandbookCase {
   const [L, P, EI] = [6, 10, 1.8e4];
   return {
     name: "simple span, point load at centre",
-    source: `${SCM}: simple beam, concentrated load at center (from memory)`,
+    source: `${SCM}, case 7: simple beam, concentrated load at center (from memory)`,
     member: beam([L], ["pin", "pin"], [point(P, L / 2)], EI),
     checks: [
       { reaction: 0, force: P / 2 },
@@ -56,7 +56,7 @@ function offCentrePoint(): HandbookCase {
   const xPeak = sqrt((a * (a + 2 * b)) / 3);
   return {
     name: "simple span, point load off centre (a > b)",
-    source: `${SCM}: simple beam, concentrated load at any point (from memory)`,
+    source: `${SCM}, case 8: simple beam, concentrated load at any point (from memory)`,
     member: beam([L], ["pin", "pin"], [point(P, a)], EI),
     checks: [
       { reaction: 0, force: (P * b) / L },
@@ -68,6 +68,7 @@ function offCentrePoint(): HandbookCase {
       { quantity: "slope", at: 0, value: (P * b * (L * L - b * b)) / (6 * EI * L) },
       { quantity: "slope", at: L, value: (-P * a * (L * L - a * a)) / (6 * EI * L) },
       { quantity: "slope", at: xPeak, value: 0 },
+      { quantity: "deflection", at: 1, value: ((P * b * 1) / (6 * EI * L)) * (L * L - b * b - 1) },
     ],
   };
 }
@@ -78,7 +79,7 @@ function partialUniform(): HandbookCase {
   const R1 = (w * b * (2 * c + b)) / (2 * L);
   return {
     name: "simple span, uniform load over part of the span",
-    source: `${SCM}: simple beam, uniform load partially distributed (from memory)`,
+    source: `${SCM}, case 4: simple beam, uniform load partially distributed (from memory)`,
     member: beam([L], ["pin", "pin"], [udl(w, a, a + b)]),
     checks: [
       { reaction: 0, force: R1 },
@@ -98,12 +99,13 @@ function triangular(): HandbookCase {
   const xPeak = L * sqrt(1 - sqrt(8 / 15));
   return {
     name: "simple span, load increasing uniformly to the right end",
-    source: `${SCM}: simple beam, load increasing uniformly to one end (from memory)`,
+    source: `${SCM}, case 2: simple beam, load increasing uniformly to one end (from memory)`,
     member: beam([L], ["pin", "pin"], [linear(0, w0, 0, L)], EI),
     checks: [
       { reaction: 0, force: W / 3 },
       { reaction: 1, force: (2 * W) / 3 },
       { quantity: "shear", at: L / 2, value: W / 3 - W / 4 },
+      { quantity: "moment", at: L / 3, value: (W * (L / 3) * (L * L - (L / 3) ** 2)) / (3 * L * L) },
       { peak: "max", quantity: "moment", value: (2 * W * L) / (9 * sqrt(3)), x: L / sqrt(3) },
       { quantity: "deflection", at: L / 3, value: defl(L / 3) },
       { peak: "max", quantity: "deflection", value: defl(xPeak), x: xPeak },
@@ -153,4 +155,52 @@ function coupleAtCentre(): HandbookCase {
   };
 }
 
-export const simpleCases: HandbookCase[] = [uniform(), centrePoint(), offCentrePoint(), partialUniform(), triangular(), coupleAtEnd(), coupleAtCentre()];
+function triangleToCentre(): HandbookCase {
+  const [L, w, EI] = [8, 3, 5000];
+  const W = (w * L) / 2;
+  return {
+    name: "simple span, load increasing uniformly to the centre",
+    source: `${SCM}, case 3: simple beam, load increasing uniformly to center (from memory)`,
+    member: beam([L], ["pin", "pin"], [linear(0, w, 0, L / 2), linear(w, 0, L / 2, L)], EI),
+    checks: [
+      { reaction: 0, force: W / 2 },
+      { reaction: 1, force: W / 2 },
+      { quantity: "moment", at: L / 2, value: (W * L) / 6 },
+      { quantity: "deflection", at: L / 2, value: (W * L ** 3) / (60 * EI) },
+    ],
+  };
+}
+
+function coupleOffCentre(): HandbookCase {
+  const [L, C, a] = [8, 12, 3];
+  return {
+    name: "simple span, clockwise couple off centre",
+    source: `${ROARK}: simply supported beam, intermediate couple (from memory)`,
+    member: beam([L], ["pin", "pin"], [couple(C, a)], 5000),
+    checks: [
+      { reaction: 0, force: -C / L },
+      { reaction: 1, force: C / L },
+      { quantity: "moment", at: a - 1, value: (-C * (a - 1)) / L },
+      { quantity: "moment", at: a, value: (C * (L - a)) / L },
+      { quantity: "shear", at: a, value: -C / L },
+    ],
+  };
+}
+
+function springSupport(): HandbookCase {
+  const [L, P, EI, k] = [8, 10, 5000, 400];
+  return {
+    name: "simple span on a pin and a spring, point load at centre",
+    source: "derived by hand: reactions by statics; centre deflection PL³/48EI plus half the spring's settlement (P/2)/k",
+    member: beam([L], ["pin", k], [point(P, L / 2)], EI),
+    checks: [
+      { reaction: 0, force: P / 2 },
+      { reaction: 1, force: P / 2 },
+      { quantity: "deflection", at: L, value: P / 2 / k },
+      { quantity: "deflection", at: L / 2, value: (P * L ** 3) / (48 * EI) + P / 2 / k / 2 },
+      { quantity: "moment", at: L / 2, value: (P * L) / 4 },
+    ],
+  };
+}
+
+export const simpleCases: HandbookCase[] = [uniform(), centrePoint(), offCentrePoint(), partialUniform(), triangular(), coupleAtEnd(), coupleAtCentre(), triangleToCentre(), coupleOffCentre(), springSupport()];

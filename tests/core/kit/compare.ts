@@ -3,6 +3,7 @@
  * the handbook tolerance. Collects every mismatch so a failing case shows all of them.
  */
 import { extremes, tolerance, valueAt, type Member, type Quantity, type Solution } from "../../../src/core";
+import { isClose } from "./close";
 import { lengthOf, scalesOf } from "./members";
 
 export type Check =
@@ -14,8 +15,7 @@ const scaleKey = { shear: "force", moment: "moment", slope: "slope", deflection:
 
 /** Relative agreement; an expected zero is compared against the member's own scale. */
 export function agrees(actual: number, expected: number, scale: number, rel = tolerance.HANDBOOK_TOLERANCE): boolean {
-  if (!Number.isFinite(actual)) return false;
-  return expected === 0 ? Math.abs(actual) <= rel * scale : tolerance.relClose(actual, expected, rel);
+  return expected === 0 ? isClose(actual, 0, rel, scale) : isClose(actual, expected, rel);
 }
 
 export function mismatches(member: Member, solution: Solution, checks: Check[]): string[] {

@@ -1,6 +1,8 @@
 /**
  * Builders for the core suite: members and loads written the way an engineer reads them.
- * Rows are numbered 1, 2, ... in the order loads are given to `beam`, unless set.
+ * `beam(spans, supports, loads, EI)` is the short positional form; `member({ ... })` the
+ * keyword form whose supports default to a pin at every node. Load rows are numbered 1, 2, ...
+ * in the order the loads are given, unless set.
  */
 import type { Load, Member, Support } from "../../../src/core";
 
@@ -43,6 +45,19 @@ export function beam(spans: number[], supports: SupportWord[], loads: Load[], EI
   };
 }
 
+export interface MemberSpec {
+  spans: number[];
+  supports?: SupportWord[];
+  EI?: number | number[] | null;
+  loads?: Load[];
+}
+
+/** Keyword form of `beam`: supports default to a pin at every node, EI to none. */
+export function member(spec: MemberSpec): Member {
+  const supports = spec.supports ?? spec.spans.concat([0]).map(() => "pin" as const);
+  return beam(spec.spans, supports, spec.loads ?? [], spec.EI ?? null);
+}
+
 export const lengthOf = (m: Member): number => m.spans.reduce((s, v) => s + v, 0);
 
 export function nodesOf(m: Member): number[] {
@@ -51,8 +66,16 @@ export function nodesOf(m: Member): number[] {
   return xs;
 }
 
-/** Force, moment, slope and deflection scales from the data alone (never from a solution). */
-export function scalesOf(m: Member): { force: number; moment: number; slope: number; deflection: number } {
+export interface Scales {
+  force: number;
+  shear: number;
+  moment: number;
+  slope: number;
+  deflection: number;
+}
+
+/** Force (= shear), moment, slope and deflection scales from the data alone (never from a solution). */
+export function scalesOf(m: Member): Scales {
   const L = lengthOf(m);
   let force = 0;
   for (const l of m.loads) {
@@ -63,7 +86,7 @@ export function scalesOf(m: Member): { force: number; moment: number; slope: num
   const ei = m.stiffness ? Math.min(...m.stiffness) : 1;
   const springs = m.supports.flatMap((s) => (s.kind === "spring" ? [s.stiffness] : []));
   const soft = springs.length ? force / Math.min(...springs) : 0;
-  return { force, moment: force * L, slope: (force * L * L) / ei + soft / L, deflection: (force * L ** 3) / ei + soft };
+  return { force, shear: force, moment: force * L, slope: (force * L * L) / ei + soft / L, deflection: (force * L ** 3) / ei + soft };
 }
 
 /** Mirror image about the member's centre: x -> L - x, couples change sense. */

@@ -5,12 +5,13 @@
  * hinge has rotation-left then rotation-right), springs on the w diagonal, and nodal loads as
  * the work of each load on the shape functions (distributed loads by 4-point Gauss quadrature, exact for these degrees).
  * Reactions come from the residual f - K u at restrained DOFs (force up +, moment
- * counter-clockwise +), springs from k w. Also: statics along the member from reactions, by Simpson integration of each load over its own (smooth) extent.
+ * counter-clockwise +), springs from k w.
  */
 import { EigenvalueDecomposition, Matrix, solve } from "ml-matrix";
-import type { Load, Member, Reaction } from "../../../src/core";
+import type { Member, Reaction } from "../../../src/core";
 import { nodesOf } from "./members";
-import { gauss, integrate } from "./quadrature";
+import { gauss } from "./quadrature";
+import { intensity } from "./statics";
 
 export interface DenseSystem {
   K: number[][];
@@ -25,13 +26,6 @@ const hermiteSlope = (l: number, s: number): number[] => {
   const t = s / l;
   return [(-6 * t + 6 * t * t) / l, 1 - 4 * t + 3 * t * t, (6 * t - 6 * t * t) / l, -2 * t + 3 * t * t];
 };
-
-/** Load intensity of a distributed load at x (0 outside it). */
-export function intensity(load: Load, x: number): number {
-  if (load.kind === "point" || load.kind === "moment" || x < load.xStart || x > load.xEnd) return 0;
-  const end = load.kind === "udl" ? load.magnitude : load.magnitudeEnd;
-  return load.magnitude + ((end - load.magnitude) * (x - load.xStart)) / (load.xEnd - load.xStart);
-}
 
 interface Numbering {
   /** Per element: global index of [w_i, θ_i (right side), w_j, θ_j (left side)]. */
@@ -103,7 +97,7 @@ export function denseSystem(member: Member): DenseSystem {
   return { K: keep.map((i) => keep.map((j) => full.K[i][j])), f: keep.map((i) => full.f[i]) };
 }
 
-export interface ReferenceSolution {
+export interface DenseStiffnessSolution {
   displacements: number[];
   deflection: number[];
   slopeLeft: number[];
@@ -112,7 +106,7 @@ export interface ReferenceSolution {
 }
 
 /** Solves the free system with ml-matrix and recovers reactions as f - K u at restrained DOFs. */
-export function referenceSolve(member: Member): ReferenceSolution {
+export function denseStiffnessSolve(member: Member): DenseStiffnessSolution {
   const full = fullSystem(member);
   const keep = full.free.flatMap((isFree, i) => (isFree ? [i] : []));
   const Kff = new Matrix(keep.map((i) => keep.map((j) => full.K[i][j])));
@@ -144,33 +138,4 @@ export function stiffnessConditionRatio(member: Member): number {
   const values = new EigenvalueDecomposition(new Matrix(K), { assumeSymmetric: true }).realEigenvalues;
   const largest = Math.max(...values.map(Math.abs));
   return Math.min(...values) / largest;
-}
-
-/**
- * Shear and moment just right of x (just left at the member end) by statics of the part to
- * the left of x: reactions and point loads at or left of x, couples, and the integral of the
- * distributed load. Reaction moments are counter-clockwise +, so they enter M with a minus.
- */
-export function statics(member: Member, reactions: Reaction[], x: number, atEnd: boolean): { shear: number; moment: number } {
-  const left = (p: number) => (atEnd ? p < x : p <= x);
-  let shear = 0;
-  let moment = 0;
-  for (const r of reactions) {
-    if (!left(r.x)) continue;
-    shear += r.force;
-    moment += r.force * (x - r.x) - r.moment;
-  }
-  for (const load of member.loads) {
-    if (load.kind === "point" && left(load.xStart)) {
-      shear -= load.magnitude;
-      moment -= load.magnitude * (x - load.xStart);
-    } else if (load.kind === "moment" && left(load.xStart)) {
-      moment += load.magnitude;
-    } else if (load.kind === "udl" || load.kind === "linear") {
-      const end = Math.min(x, load.xEnd);
-      shear -= integrate((s) => intensity(load, s), load.xStart, end);
-      moment -= integrate((s) => intensity(load, s) * (x - s), load.xStart, end);
-    }
-  }
-  return { shear, moment };
 }

@@ -9,7 +9,7 @@
  * unknowns, integrated exactly span by span (EI is constant within a span).
  */
 import { Matrix, SingularValueDecomposition } from "ml-matrix";
-import type { Member, Quantity, Support } from "../../../src/core/model";
+import type { Member, Quantity, Support } from "../../../src/core";
 
 type Affine = number[];
 
@@ -19,16 +19,16 @@ interface Term {
   coefficient: Affine;
 }
 
-export interface ReferenceReaction {
+export interface ForceMethodReaction {
   x: number;
   force: number;
   moment: number;
 }
 
-export interface ReferenceSolution {
+export interface ForceMethodSolution {
   length: number;
   nodeX: number[];
-  reactions: ReferenceReaction[];
+  reactions: ForceMethodReaction[];
   /** Value just right of x (just left at the member's right end), like the core's convention. */
   at(quantity: Quantity, x: number, side?: "left" | "right"): number;
 }
@@ -57,7 +57,7 @@ function integral2(s: number, x: number, at: number, power: number): number {
   return f(u1) - f(u0);
 }
 
-export function referenceSolve(member: Member): ReferenceSolution {
+export function forceMethodSolve(member: Member): ForceMethodSolution {
   const nodeX = [0];
   for (const span of member.spans) nodeX.push(nodeX[nodeX.length - 1] + span);
   const length = nodeX[nodeX.length - 1];
@@ -178,7 +178,7 @@ export function referenceSolve(member: Member): ReferenceSolution {
     }
     if (hingeIndex[i] !== null) equations.push(momentAt(x, false));
   });
-  if (equations.length !== size) throw new Error(`reference: ${equations.length} equations for ${size} unknowns`);
+  if (equations.length !== size) throw new Error(`force method: ${equations.length} equations for ${size} unknowns`);
 
   const a = new Matrix(equations.map((row) => row.slice(0, size)));
   const b = Matrix.columnVector(equations.map((row) => -row[size]));
@@ -189,7 +189,7 @@ export function referenceSolve(member: Member): ReferenceSolution {
   const scaled = a.clone();
   for (let j = 0; j < size; j++) for (let i = 0; i < size; i++) scaled.set(i, j, a.get(i, j) * columnScale[j]);
   const svd = new SingularValueDecomposition(scaled, { autoTranspose: true });
-  if (svd.condition > 1e11 || !Number.isFinite(svd.condition)) throw new ReferenceMechanism("reference: mechanism");
+  if (svd.condition > 1e11 || !Number.isFinite(svd.condition)) throw new ReferenceMechanism("force method: mechanism");
   const scaledSolution = svd.solve(b);
   const solution = Array.from({ length: size }, (_, j) => scaledSolution.get(j, 0) * columnScale[j]);
   const value = (v: Affine): number => v.slice(0, size).reduce((s, c, j) => s + c * solution[j], v[size]);
