@@ -42,7 +42,7 @@ function common(env, argv) {
   const production = (argv && argv.mode) === "production";
   return {
     mode: production ? "production" : "development",
-    devtool: production ? "source-map" : "eval-cheap-module-source-map",
+    devtool: production ? "source-map" : "cheap-module-source-map", // never eval: the pages forbid it (Content-Security-Policy)
     resolve: { extensions: [".ts", ".js"] },
     module: {
       rules: [
