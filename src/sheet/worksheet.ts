@@ -26,7 +26,7 @@ export function solvedMember(args: MemberArgs): Solution {
     if (cached !== undefined) return cached;
   }
   const solution = solve(readMember(args));
-  if (hash !== null) solvedMembers.set(args, hash, solution);
+  if (hash !== null) solvedMembers.remember(args, hash, solution);
   return solution;
 }
 

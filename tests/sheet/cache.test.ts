@@ -92,9 +92,11 @@ describe("solvedMember", () => {
     }
   });
 
-  test("alternating members (two diagrams on one sheet) each solve once", () => {
+  test("alternating members (two diagrams on one sheet) solve at most twice each: on first sight and when admitted", () => {
     const spy = jest.spyOn(core, "solve");
     try {
+      solvedMember(args());
+      solvedMember(args({ combo: "D" }));
       const a = solvedMember(args());
       const b = solvedMember(args({ combo: "D" }));
       expect(b).not.toBe(a);
@@ -102,14 +104,21 @@ describe("solvedMember", () => {
         expect(solvedMember(args())).toBe(a);
         expect(solvedMember(args({ combo: "D" }))).toBe(b);
       }
-      expect(spy).toHaveBeenCalledTimes(2);
+      expect(spy).toHaveBeenCalledTimes(4);
     } finally {
       spy.mockRestore();
     }
   });
 
+  test("a schedule of distinct members keeps nothing (admission on second sight)", () => {
+    for (let i = 0; i < 50; i++) solvedMember(args({ spans: [[6, 8 + i]] }));
+    expect(solvedMembers.size).toBe(0);
+  });
+
   test("the cache is bounded", () => {
-    for (let i = 0; i < solvedMembers.capacity + 20; i++) solvedMember(args({ spans: [[6, 8 + i]] }));
+    for (let pass = 0; pass < 2; pass++) {
+      for (let i = 0; i < solvedMembers.capacity + 20; i++) solvedMember(args({ spans: [[6, 8 + i]] }));
+    }
     expect(solvedMembers.size).toBe(solvedMembers.capacity);
   });
 
