@@ -2,7 +2,7 @@
 export type { Member, Support, Load, LoadKind, Quantity, Reaction, Piece, Solution, Extreme, DiagramRow } from "./model";
 export { SpanError, invalid, unavailable, isSpanError } from "./errors";
 export type { ErrorCode } from "./errors";
-export { validateMember } from "./validate";
+export { validateMember, MAX_LOADS } from "./validate";
 export { checkStability } from "./stability";
 export { assemble, toDense } from "./stiffness";
 export type { StiffnessSystem } from "./stiffness";

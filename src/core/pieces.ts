@@ -21,11 +21,23 @@ function breakpoints(loads: SpanLoad[], span: number): number[] {
   return unique;
 }
 
+function indexOf(points: number[], t: number): number {
+  let lo = 0;
+  let hi = points.length - 1;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (points[mid] < t) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+
 /**
  * Integrates one span exactly by the area method: from the values at its left node, V
  * falls by the area under the load and by each point force, M rises by the area under V and
  * by each clockwise couple, slope falls by the area under M/EI and deflection rises by the
- * area under the slope. Appends the span's pieces to `out`.
+ * area under the slope. Appends the span's pieces to `out`. The loads are swept once in
+ * order of position, so the cost grows as n log n in the number of loads.
  */
 export function integrateSpan(
   start: SpanStart,
@@ -36,29 +48,49 @@ export function integrateSpan(
   out: Piece[],
 ): void {
   const points = breakpoints(loads, span);
+  const count = points.length;
+  const force = new Float64Array(count);
+  const couple = new Float64Array(count);
+  const intensity = new Float64Array(count);
+  const rate = new Float64Array(count);
+  const opened = new Int32Array(count);
+  for (const load of loads) {
+    if (load.kind === "force") force[indexOf(points, load.at)] += load.value;
+    else if (load.kind === "couple") couple[indexOf(points, load.at)] += load.value;
+    else {
+      const slope = (load.q1 - load.q0) / (load.to - load.from);
+      const from = indexOf(points, load.from);
+      const to = indexOf(points, load.to);
+      intensity[from] += load.q0;
+      rate[from] += slope;
+      intensity[to] -= load.q1;
+      rate[to] -= slope;
+      opened[from] += 1;
+      opened[to] -= 1;
+    }
+  }
   let shear = start.shear;
   let moment = start.moment;
   let slope = start.slope;
   let deflection = start.deflection;
-  for (let k = 0; k + 1 < points.length; k++) {
+  let q0 = 0;
+  let q1 = 0;
+  let active = 0;
+  for (let k = 0; k + 1 < count; k++) {
     const t0 = points[k];
     const t1 = points[k + 1];
-    let q0 = 0;
-    let q1 = 0;
-    for (const load of loads) {
-      if (load.kind === "force") {
-        if (load.at === t0) shear -= load.value;
-      } else if (load.kind === "couple") {
-        if (load.at === t0) moment += load.value;
-      } else if (load.from <= t0 && load.to >= t1) {
-        const rate = (load.q1 - load.q0) / (load.to - load.from);
-        q0 += load.q0 + rate * (t0 - load.from);
-        q1 += rate;
-      }
+    shear -= force[k];
+    moment += couple[k];
+    q0 += intensity[k];
+    q1 += rate[k];
+    active += opened[k];
+    if (active === 0) {
+      q0 = 0;
+      q1 = 0;
     }
     const piece: Piece = {
       x0: offset + t0,
-      x1: k + 2 === points.length ? offset + span : offset + t1,
+      x1: k + 2 === count ? offset + span : offset + t1,
       shear0: shear,
       moment0: moment,
       slope0: slope,
@@ -69,11 +101,11 @@ export function integrateSpan(
     };
     out.push(piece);
     const s = t1 - t0;
-    const nextShear = shear - q0 * s - (q1 * s * s) / 2;
-    const nextMoment = moment + shear * s - (q0 * s * s) / 2 - (q1 * s * s * s) / 6;
     const s2 = s * s;
     const s3 = s2 * s;
     const s4 = s3 * s;
+    const nextShear = shear - q0 * s - (q1 * s2) / 2;
+    const nextMoment = moment + shear * s - (q0 * s2) / 2 - (q1 * s3) / 6;
     const nextSlope = slope - flexibility * (moment * s + (shear * s2) / 2 - (q0 * s3) / 6 - (q1 * s4) / 24);
     const nextDeflection =
       deflection + slope * s - flexibility * ((moment * s2) / 2 + (shear * s3) / 6 - (q0 * s4) / 24 - (q1 * s4 * s) / 120);
@@ -81,5 +113,7 @@ export function integrateSpan(
     moment = nextMoment;
     slope = nextSlope;
     deflection = nextDeflection;
+    // The running intensity is carried to the next piece's start along its own slope.
+    q0 += q1 * s;
   }
 }

@@ -11,7 +11,7 @@
  * name it). Every load-table row has exactly one text form (formatLoad): `from` is written
  * only when x start is not 0 and `to` only when x end is not the member end.
  */
-import { invalid, type LoadKind } from "../core";
+import { invalid, MAX_LOADS, type LoadKind } from "../core";
 import { numberFromText } from "./cells";
 import { isCaseLabel, type LoadRow } from "./loadRow";
 
@@ -101,7 +101,9 @@ export function parseLoadNotation(text: string): LoadRow[] {
   const rows: LoadRow[] = [];
   for (const piece of text.split(";")) {
     const trimmed = piece.trim();
-    if (trimmed !== "") rows.push(parseOne(trimmed, rows.length + 1));
+    if (trimmed === "") continue;
+    if (rows.length === MAX_LOADS) throw invalid(`loads text: more than ${MAX_LOADS} loads on one member; combine loads that act together`);
+    rows.push(parseOne(trimmed, rows.length + 1));
   }
   return rows;
 }

@@ -3,7 +3,7 @@
  * end, case. Fewer than six columns = the missing ones blank. Wholly blank rows (every cell
  * "", null or 0) are skipped. Row numbers in messages are 1-based rows of the given range.
  */
-import { invalid, type LoadKind } from "../core";
+import { invalid, MAX_LOADS, type LoadKind } from "../core";
 import { errorCodeOf, isBlank, isEmpty, readNumber, readText, show } from "./cells";
 import { COLUMNS, isCaseLabel, placeOf, type ColumnName, type LoadRow } from "./loadRow";
 
@@ -73,6 +73,9 @@ export function readLoadTable(rows: unknown[][]): LoadRow[] {
   for (let r = 0; r < rows.length; r++) {
     const cells = Array.isArray(rows[r]) ? rows[r] : [rows[r]];
     if (isBlankRow(cells)) continue;
+    if (loads.length === MAX_LOADS) {
+      throw invalid(`load row ${r + 1}: more than ${MAX_LOADS} loads on one member; combine loads that act together`);
+    }
     loads.push(readLoadRow(cells, r + 1));
   }
   return loads;

@@ -4,7 +4,7 @@
  * Messages must name the span, support (with its x) or load row at fault. And a table of
  * members at the edges of what is allowed, which must pass.
  */
-import { solve, validateMember, type Load, type Member } from "../../src/core";
+import { MAX_LOADS, solve, validateMember, type Load, type Member } from "../../src/core";
 import { beam, couple, linear, point, udl } from "./kit/members";
 import { thrown } from "./kit/errors";
 
@@ -37,6 +37,11 @@ const cases: [string, () => Member, string][] = [
   ["hinge at the left end", () => withSupport(0, { kind: "hinge" }), "support 1 (x = 0): a hinge joins two spans, so it belongs at an interior node, not at a member end"],
   ["hinge at the right end", () => withSupport(3, { kind: "hinge" }), "support 4 (x = 12): a hinge joins two spans, so it belongs at an interior node, not at a member end"],
   ["EI count", () => ({ ...base(), stiffness: [1, 2] }), "EI: give one value for the member or one per span (3), got 2"],
+  [
+    "more loads than a member takes",
+    () => ({ ...base(), loads: Array.from({ length: MAX_LOADS + 1 }, (_, i) => ({ ...point(1, (i % 12) + 0.5), row: i + 1 })) }),
+    `loads: ${MAX_LOADS + 1} loads on one member; at most ${MAX_LOADS} are taken (combine loads that act together)`,
+  ],
   ["zero EI", () => ({ ...base(), stiffness: [1, 0, 1] }), "EI of span 2: must be a positive number, got 0"],
   ["infinite EI", () => ({ ...base(), stiffness: [1, 1, Infinity] }), "EI of span 3: must be a positive number, got Infinity"],
   ["unknown load kind", () => withLoad(3, { ...point(1, 2), kind: "torque" as Load["kind"] }), 'load row 3: unknown load type "torque"; use point, moment, udl or linear'],
@@ -66,7 +71,7 @@ describe("validateMember: every rejection has code #VALUE! and a message naming 
   it.each(cases)("%s", (_name, make, message) => {
     const error = thrown(() => validateMember(make()));
     expect([error.code, error.message]).toEqual(["#VALUE!", message]);
-    expect(error.message).toMatch(/^(spans?|span \d+|supports|support \d+ \(x = [\d.]+\)|EI|EI of span \d+|load row \d+)[:]/);
+    expect(error.message).toMatch(/^(spans?|span \d+|supports|support \d+ \(x = [\d.]+\)|EI|EI of span \d+|load row \d+|loads)[:]/);
   });
 
   it.each(cases)("solve rejects the same member the same way: %s", (_name, make, message) => {

@@ -37,6 +37,11 @@ describe("readLoadTable: rows as the host delivers them", () => {
 describe("readLoadTable: errors name the row and column", () => {
   test.each([
     ["unknown type", [["", "", ""], ["pont", 10, 3]], /^load row 2, column 1 \(type\): "pont" is not a load type; use point, moment, udl or linear$/],
+    [
+      "more than 10,000 loads (blank rows do not count)",
+      [["", "", ""], ...Array.from({ length: 10001 }, () => ["point", 1, 2])],
+      /^load row 10002: more than 10000 loads on one member; combine loads that act together$/,
+    ],
     ["blank type with data (zeros count as data only with a type)", [["", 10, 3]], /^load row 1, column 1 \(type\): the load type is blank/],
     ["numeric type", [[5, 10, 3]], /load row 1, column 1 \(type\): 5 is not a load type/],
     ["error in type", [[{ code: "#N/A" }, 10, 3]], /load row 1, column 1 \(type\): the cell holds the error #N\/A/],
