@@ -85,34 +85,64 @@ export function envelope(member: Member, combinations: Combination[], xs: number
   const all = scenarios(member, combinations, options);
   const quantities = ENVELOPE_QUANTITIES.filter((q) => q !== "deflection" || member.stiffness !== null);
   const arrangements = arrangementsFor(pattern, member.spans.length);
+  const liveParts = all.find((scenario) => scenario.live)?.live?.parts ?? [];
+  const n = liveParts.length;
+  const parts = new Float64Array(n);
+  const sums = new Float64Array(arrangements.length);
   return xs.map((x) => {
     const max: Record<Quantity, Bound | null> = { shear: null, moment: null, slope: null, deflection: null };
     const min: Record<Quantity, Bound | null> = { shear: null, moment: null, slope: null, deflection: null };
-    for (const scenario of all) {
-      for (const q of quantities) {
+    for (const q of quantities) {
+      // The live parts do not depend on the combination: evaluate them once per station.
+      for (let i = 0; i < n; i++) parts[i] = valueAt(liveParts[i], q, x);
+      for (let a = 0; a < arrangements.length; a++) {
+        let sum = 0;
+        for (const i of arrangements[a]) sum += parts[i];
+        sums[a] = sum;
+      }
+      let high = -Infinity;
+      let low = Infinity;
+      let highAt: Bound | null = null;
+      let lowAt: Bound | null = null;
+      for (const scenario of all) {
         const base = valueAt(scenario.fixed, q, x);
-        const offer = (value: number, arrangement: string): void => {
-          const bound = { value, x, combination: scenario.combination, arrangement };
-          if (max[q] === null || value > max[q]!.value) max[q] = bound;
-          if (min[q] === null || value < min[q]!.value) min[q] = bound;
-        };
-        if (!scenario.live) {
-          offer(base, "");
+        const live = scenario.live;
+        if (!live) {
+          if (base > high) [high, highAt] = [base, { value: base, x, combination: scenario.combination, arrangement: "" }];
+          if (base < low) [low, lowAt] = [base, { value: base, x, combination: scenario.combination, arrangement: "" }];
           continue;
         }
-        const parts = scenario.live.parts.map((p) => scenario.live!.factor * valueAt(p, q, x));
+        const f = live.factor;
         if (pattern === "full") {
-          const up = parts.map((v, i) => (v > 0 ? i : -1)).filter((i) => i >= 0);
-          const down = parts.map((v, i) => (v < 0 ? i : -1)).filter((i) => i >= 0);
-          offer(base + up.reduce((s, i) => s + parts[i], 0), describeArrangement(up));
-          offer(base + down.reduce((s, i) => s + parts[i], 0), describeArrangement(down));
-        } else {
-          for (const spans of arrangements) offer(base + spans.reduce((s, i) => s + parts[i], 0), describeArrangement(spans));
+          let up = base;
+          let down = base;
+          for (let i = 0; i < n; i++) {
+            const v = f * parts[i];
+            if (v > 0) up += v;
+            else if (v < 0) down += v;
+          }
+          if (up > high) [high, highAt] = [up, { value: up, x, combination: scenario.combination, arrangement: spansWhere(parts, f, 1) }];
+          if (down < low) [low, lowAt] = [down, { value: down, x, combination: scenario.combination, arrangement: spansWhere(parts, f, -1) }];
+          continue;
+        }
+        for (let a = 0; a < arrangements.length; a++) {
+          const value = base + f * sums[a];
+          if (value > high) [high, highAt] = [value, { value, x, combination: scenario.combination, arrangement: describeArrangement(arrangements[a]) }];
+          if (value < low) [low, lowAt] = [value, { value, x, combination: scenario.combination, arrangement: describeArrangement(arrangements[a]) }];
         }
       }
+      max[q] = highAt;
+      min[q] = lowAt;
     }
     return { x, max, min };
   });
+}
+
+/** The spans whose factored live part acts in the sense sought (sign +1 up, -1 down), described. */
+function spansWhere(parts: Float64Array, factor: number, sign: number): string {
+  const spans: number[] = [];
+  for (let i = 0; i < parts.length; i++) if (sign * factor * parts[i] > 0) spans.push(i);
+  return describeArrangement(spans);
 }
 
 export interface GoverningPeak {
