@@ -9,8 +9,25 @@
  * units are the user's, consistently. Results are an aid to a qualified engineer, who checks
  * them; local codes govern.
  */
-import { sheetDiagram, sheetExtremes, sheetMaxMoment, sheetReactions, sheetValuesAt } from "../src/sheet";
-import { sheetCombinationSet, sheetEnvelope, sheetInfluence, sheetMoving, sheetPeaks } from "../src/sheet/studies";
+import {
+  sheetCombinationSet,
+  sheetConvert,
+  sheetDeflectionCheck,
+  sheetDiagram,
+  sheetEnvelope,
+  sheetExtremes,
+  sheetInfluence,
+  sheetMaxMoment,
+  sheetMoving,
+  sheetPeaks,
+  sheetReactions,
+  sheetSection,
+  sheetShearStress,
+  sheetStiffness,
+  sheetStress,
+  sheetUtilisation,
+  sheetValuesAt,
+} from "../src/sheet";
 
 /**
  * Reactions at every node of a continuous beam: one row per node (span end) with x, the vertical reaction (up +) and the moment reaction (counter-clockwise +); unsupported nodes give 0, a spring gives its force. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.REACTIONS("6 8 6", "udl 2.5 D; point 10 at 3 L")
@@ -214,7 +231,6 @@ export function combos(set: any, psi0?: any, cases?: any[][]): any[][] {
 // numbers (section sizes, stated limits and capacities); they are not code design: the
 // governing code and a qualified engineer decide which limits and capacities apply.
 // ---------------------------------------------------------------------------------------
-import { sheetConvert, sheetDeflectionCheck, sheetSection, sheetShearStress, sheetStiffness, sheetStress, sheetUtilisation } from "../src/sheet";
 
 /**
  * Section properties of a rectangle, solid circle, box (hollow rectangle), tube (hollow circle), symmetric I, channel or tee, sharp-cornered: rows property, value, unit (area, Ix, Iy, Sx top, Sx bottom, Sy left, Sy right, Zx, Zy, rx, ry, Qx, width at axis, Q/t max, centroid x, centroid y). Axes: x horizontal (bending about x is the usual, strong-axis case), y vertical; centroid from the left and bottom edges; tee flange at the top, channel web at the left. S = I / (distance to that fibre); Z plastic (equal areas); Qx first moment of the area above the neutral axis. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.SECTION("I", "400 180 13.5 8.6", "mm")
