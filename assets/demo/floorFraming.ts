@@ -156,4 +156,67 @@ function study(): SheetInput {
   return { name: "Study", cells: rows };
 }
 
-export const DEMO_SHEETS: readonly SheetInput[] = [schedule(), member(), study()];
+const STATIONS = [0, 2.5, 5, 7.5, 10, 12.5, 15, 17.5, 20];
+
+/** Beam B-250 under the live load arranged span by span: combinations, envelope, peaks, influence line, a moving truck. */
+function arrangements(): SheetInput {
+  const rows: (string | number | null)[][] = [
+    ["Beam B-250: four equal spans over the bench room, live load patterned span by span"],
+    [CAUTION],
+    ["Spans (m)", "5 5 5 5", null, "Loads", "udl 5.2 D; udl 7.9 L"],
+    ["Supports", "pin pin pin pin pin", null, "EI (kN·m²)", 27500],
+    ["Combination set", "ASCE7-2.3.1", null, "Pattern", "full L"],
+    [],
+    ["Individual combinations", null, "x (m)", "Moment envelope: largest (kN·m)", "governed by", "smallest (kN·m)", "governed by"],
+  ];
+  for (let i = 0; i < 14; i++) {
+    rows.push([
+      i === 0 ? "=SPAN.COMBOS(B5)" : null,
+      null,
+      i < STATIONS.length ? STATIONS[i] : null,
+      i === 0 ? '=SPAN.ENVELOPE(B3,E3,C8:C16,B5,B4,E4,"moment",E5)' : null,
+    ]);
+  }
+  rows.push([]);
+  rows.push(["Governing peaks, classical arrangements (label, max, x, governed by, min, x, governed by)"]);
+  rows.push(['=SPAN.PEAKS(B3,E3,B5,B4,E4,"standard L")']);
+  rows.push([], [], [], []);
+  rows.push([null, null, "Unit load at x (m)", "Influence line: moment at the second support (x = 5)"]);
+  STATIONS.forEach((x, i) => rows.push([null, null, x, i === 0 ? '=SPAN.INFLUENCE(B3,"moment at 5",C30:C38,B4,E4)' : null]));
+  rows.push([]);
+  rows.push(["Moving load: pallet truck, axles 12 kN and 18 kN, 1.2 m apart (label, kN·m, x of first axle, direction, x)"]);
+  rows.push(['=SPAN.MOVING(B3,"12 18","1.2","absolute moment",B4,E4)']);
+  return { name: "Arrangements", cells: rows };
+}
+
+/** Beam B-213 checked as a steel I section: properties, stresses, a live-load deflection limit, utilisation. */
+function checks(): SheetInput {
+  const units = "length=m, force=kN, section=mm, stress=MPa";
+  return {
+    name: "Checks",
+    cells: [
+      ["Beam B-213 checks: steel I section, fixed at the wall, pinned at the column"],
+      [CAUTION],
+      ["Spans (m)", 7.2, null, "Supports", "fixed pin"],
+      ["Loads", "udl 7 D; udl 6.2 L; point 22 at 3 L"],
+      ["Section", "I", "d bf tf tw (mm)", "360 170 12.7 8", "E (GPa)", 200],
+      ["EI (kN·m²)", '=SPAN.STIFFNESS(F5,D6,"GPa","mm^4","kN*m^2")', "Ix (mm^4)", "=INDEX(A9:C24,2,2)"],
+      [],
+      ["Section properties (property, value, unit)", null, null, null, "Bending stress, 1.2D+1.6L (fibre, largest MPa, x, smallest MPa, x)"],
+      ['=SPAN.SECTION(B5,D5,"mm")', null, null, null, `=SPAN.STRESS(B3,B4,A9:C24,E3,B6,"1.2D+1.6L","${units}")`],
+      [],
+      [],
+      [null, null, null, null, "Shear stress, 1.2D+1.6L (label, MPa, x)"],
+      [null, null, null, null, `=SPAN.SHEARSTRESS(B3,B4,A9:C24,E3,B6,"1.2D+1.6L","${units}")`],
+      [],
+      [],
+      [null, null, null, null, "Deflection check, live load, stated limit L/360 (span, length, deflection mm, x, span/deflection, limit, result)"],
+      [null, null, null, null, '=SPAN.DEFLECTIONCHECK(B3,B4,"L/360",E3,B6,"L","length=m, force=kN, EI=kN*m^2, deflection=mm")'],
+      [],
+      [null, null, null, null, "Largest moment, 1.2D+1.6L (kN·m)", '=INDEX(SPAN.MAXMOMENT(B3,B4,E3,B6,"1.2D+1.6L"),1,1)', "Stated capacity (kN·m), the engineer's figure", 180],
+      [null, null, null, null, "Utilisation", "=SPAN.UTILISATION(F19,H19)"],
+    ],
+  };
+}
+
+export const DEMO_SHEETS: readonly SheetInput[] = [schedule(), member(), study(), arrangements(), checks()];

@@ -80,7 +80,7 @@ describe("workbench page", () => {
   it("opens with the demo schedule and the caution line", async () => {
     expect(await page.textContent("#caution")).toMatch(/qualified engineer/);
     const api = await page.evaluate(() => window.spanwiseWorkbench.sheets());
-    expect(api).toEqual(["Schedule", "Member", "Study"]);
+    expect(api).toEqual(["Schedule", "Member", "Study", "Arrangements", "Checks"]);
     expect(await page.textContent('td[data-address="A6"]')).toBe("J-201");
   });
 
