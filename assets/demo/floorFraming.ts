@@ -213,8 +213,9 @@ function checks(): SheetInput {
       [null, null, null, null, "Deflection check, live load, stated limit L/360 (span, length, deflection mm, x, span/deflection, limit, result)"],
       [null, null, null, null, '=SPAN.DEFLECTIONCHECK(B3,B4,"L/360",E3,B6,"L","length=m, force=kN, EI=kN*m^2, deflection=mm")'],
       [],
-      [null, null, null, null, "Largest moment, 1.2D+1.6L (kN·m)", '=INDEX(SPAN.MAXMOMENT(B3,B4,E3,B6,"1.2D+1.6L"),1,1)', "Stated capacity (kN·m), the engineer's figure", 180],
-      [null, null, null, null, "Utilisation", "=SPAN.UTILISATION(F19,H19)"],
+      [null, null, null, null, "Largest sagging moment, 1.2D+1.6L (kN·m)", '=INDEX(SPAN.MAXMOMENT(B3,B4,E3,B6,"1.2D+1.6L"),1,1)', "Stated capacity (kN·m), the engineer's figure", 180],
+      [null, null, null, null, "Largest hogging moment, 1.2D+1.6L (kN·m)", '=INDEX(SPAN.MAXMOMENT(B3,B4,E3,B6,"1.2D+1.6L"),2,1)'],
+      [null, null, null, null, "Utilisation (sagging, hogging)", "=SPAN.UTILISATION(F19:F20,H19)"],
     ],
   };
 }
