@@ -1,16 +1,18 @@
 /**
  * `npm start` (= `spanwise start`): makes a development certificate in the project-local,
  * git-ignored .certs/ (never installed into a system store), builds every page with webpack
- * in watch mode, and serves dist/ over HTTPS on localhost. Sideloading into the desktop
- * spreadsheet host needs office-addin-debugging, which is not part of the install; where such
- * a host may exist, the steps are printed, and on every machine the workbench address is.
+ * in watch mode, and serves dist/ over HTTPS on localhost. Where the desktop spreadsheet host
+ * is installed (Windows, macOS) the add-in is sideloaded (sideload.ts); on every machine the
+ * workbench address is printed.
  */
 import fs from "fs";
+import os from "os";
 import path from "path";
 import { generateCertificates } from "office-addin-dev-certs";
 import webpack from "webpack";
 import type { Io } from "./io";
 import { UsageError } from "./io";
+import { applySideload, sideloadPlan } from "./sideload";
 import { createStaticServer, listen } from "./staticServer";
 
 const ROOT = path.resolve(__dirname, "..", "..");
@@ -54,15 +56,16 @@ function build(io: Io): Promise<unknown> {
 }
 
 function hostNote(): string {
-  if (process.platform === "win32" || process.platform === "darwin") {
-    return [
-      "To sideload the add-in into the desktop spreadsheet host on this machine:",
-      "  npx office-addin-debugging start manifest.xml desktop   (installs office-addin-debugging on first use)",
-      "or add manifest.xml through the host's add-in dialog (shared folder catalog / upload).",
-      "The host must trust .certs/ca.crt for https://localhost (npx office-addin-dev-certs install).",
-    ].join("\n");
+  const manifest = path.join(ROOT, "manifest.xml");
+  let line: string;
+  try {
+    const plan = sideloadPlan(process.platform, os.homedir(), manifest, fs.readFileSync(manifest, "utf8"), fs.existsSync);
+    line = applySideload(plan);
+  } catch (error) {
+    line = `Could not sideload (${error instanceof Error ? error.message : String(error)}): add manifest.xml through the host's add-in dialog.`;
   }
-  return `No desktop spreadsheet host on ${process.platform}: open the workbench instead.`;
+  if (process.platform !== "win32" && process.platform !== "darwin") return line;
+  return `${line}\nThe host must trust .certs/ca.crt for https://localhost (install it in the user's certificate store).`;
 }
 
 export async function start(options: StartOptions, io: Io): Promise<number> {
