@@ -37,10 +37,11 @@ import {
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
  * @returns One row per node: x, vertical reaction, moment reaction.
  */
-export function reactions(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any): any[][] {
-  return sheetReactions(spans, loads, supports, EI, combo);
+export function reactions(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
+  return sheetReactions(spans, loads, supports, EI, combo, units);
 }
 
 /**
@@ -52,10 +53,11 @@ export function reactions(spans: any[][], loads: any[][], supports?: any[][], EI
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
  * @returns Shear at each x, in the shape of x.
  */
-export function shear(spans: any[][], loads: any[][], x: any[][], supports?: any[][], EI?: any[][], combo?: any): any[][] {
-  return sheetValuesAt("shear", spans, loads, x, supports, EI, combo);
+export function shear(spans: any[][], loads: any[][], x: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
+  return sheetValuesAt("shear", spans, loads, x, supports, EI, combo, units);
 }
 
 /**
@@ -67,10 +69,11 @@ export function shear(spans: any[][], loads: any[][], x: any[][], supports?: any
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
  * @returns Moment at each x, in the shape of x.
  */
-export function moment(spans: any[][], loads: any[][], x: any[][], supports?: any[][], EI?: any[][], combo?: any): any[][] {
-  return sheetValuesAt("moment", spans, loads, x, supports, EI, combo);
+export function moment(spans: any[][], loads: any[][], x: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
+  return sheetValuesAt("moment", spans, loads, x, supports, EI, combo, units);
 }
 
 /**
@@ -82,10 +85,11 @@ export function moment(spans: any[][], loads: any[][], x: any[][], supports?: an
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Required here.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
  * @returns Slope at each x, in the shape of x.
  */
-export function slope(spans: any[][], loads: any[][], x: any[][], supports?: any[][], EI?: any[][], combo?: any): any[][] {
-  return sheetValuesAt("slope", spans, loads, x, supports, EI, combo);
+export function slope(spans: any[][], loads: any[][], x: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
+  return sheetValuesAt("slope", spans, loads, x, supports, EI, combo, units);
 }
 
 /**
@@ -97,10 +101,11 @@ export function slope(spans: any[][], loads: any[][], x: any[][], supports?: any
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Required here.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
  * @returns Deflection at each x, in the shape of x.
  */
-export function deflection(spans: any[][], loads: any[][], x: any[][], supports?: any[][], EI?: any[][], combo?: any): any[][] {
-  return sheetValuesAt("deflection", spans, loads, x, supports, EI, combo);
+export function deflection(spans: any[][], loads: any[][], x: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
+  return sheetValuesAt("deflection", spans, loads, x, supports, EI, combo, units);
 }
 
 /**
@@ -111,10 +116,11 @@ export function deflection(spans: any[][], loads: any[][], x: any[][], supports?
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
  * @returns Two rows: largest moment and its x; smallest moment and its x.
  */
-export function maxMoment(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any): any[][] {
-  return sheetMaxMoment(spans, loads, supports, EI, combo);
+export function maxMoment(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
+  return sheetMaxMoment(spans, loads, supports, EI, combo, units);
 }
 
 /**
@@ -125,10 +131,11 @@ export function maxMoment(spans: any[][], loads: any[][], supports?: any[][], EI
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Adds the slope and deflection rows; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
  * @returns Rows shear, moment (then slope, deflection with EI): label, max, x at max, min, x at min.
  */
-export function extremes(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any): any[][] {
-  return sheetExtremes(spans, loads, supports, EI, combo);
+export function extremes(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
+  return sheetExtremes(spans, loads, supports, EI, combo, units);
 }
 
 /**
@@ -140,10 +147,11 @@ export function extremes(spans: any[][], loads: any[][], supports?: any[][], EI?
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Fills the slope and deflection columns; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
  * @returns Rows x, shear, moment, slope, deflection.
  */
-export function diagram(spans: any[][], loads: any[][], points?: any, supports?: any[][], EI?: any[][], combo?: any): any[][] {
-  return sheetDiagram(spans, loads, points, supports, EI, combo);
+export function diagram(spans: any[][], loads: any[][], points?: any, supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
+  return sheetDiagram(spans, loads, points, supports, EI, combo, units);
 }
 
 // ---------------------------------------------------------------------------------------

@@ -55,7 +55,8 @@ const tail = [
   { name: "EI", kind: "block", optional: true },
   { name: "combo", kind: "value", optional: true },
 ] as const;
-const atX = [...member, { name: "x", kind: "block", optional: false }, ...tail] as const;
+const withUnits = [...tail, { name: "units", kind: "block", optional: true }] as const;
+const atX = [...member, { name: "x", kind: "block", optional: false }, ...withUnits] as const;
 
 const block = (name: string, optional = false) => ({ name, kind: "block" as const, optional });
 const value = (name: string, optional = false) => ({ name, kind: "value" as const, optional });
@@ -106,17 +107,17 @@ const CHECKS: SpanFunctionEntry[] = [
 ];
 
 export const SPAN_FUNCTIONS: readonly SpanFunctionEntry[] = [
-  { sheetName: "SPAN.REACTIONS", exportName: "reactions", arguments: [...member, ...tail], sizeRule: "perNode" },
+  { sheetName: "SPAN.REACTIONS", exportName: "reactions", arguments: [...member, ...withUnits], sizeRule: "perNode" },
   { sheetName: "SPAN.SHEAR", exportName: "shear", arguments: atX, sizeRule: "shapeOfX" },
   { sheetName: "SPAN.MOMENT", exportName: "moment", arguments: atX, sizeRule: "shapeOfX" },
   { sheetName: "SPAN.SLOPE", exportName: "slope", arguments: atX, sizeRule: "shapeOfX" },
   { sheetName: "SPAN.DEFLECTION", exportName: "deflection", arguments: atX, sizeRule: "shapeOfX" },
-  { sheetName: "SPAN.MAXMOMENT", exportName: "maxMoment", arguments: [...member, ...tail], sizeRule: "twoByTwo" },
-  { sheetName: "SPAN.EXTREMES", exportName: "extremes", arguments: [...member, ...tail], sizeRule: "extremes" },
+  { sheetName: "SPAN.MAXMOMENT", exportName: "maxMoment", arguments: [...member, ...withUnits], sizeRule: "twoByTwo" },
+  { sheetName: "SPAN.EXTREMES", exportName: "extremes", arguments: [...member, ...withUnits], sizeRule: "extremes" },
   {
     sheetName: "SPAN.DIAGRAM",
     exportName: "diagram",
-    arguments: [...member, { name: "points", kind: "value", optional: true }, ...tail],
+    arguments: [...member, { name: "points", kind: "value", optional: true }, ...withUnits],
     sizeRule: "diagram",
   },
   ...STUDIES,

@@ -33,7 +33,7 @@ export interface SpanCall {
 export type ParseResult = { ok: true; call: SpanCall } | { ok: false; message: string };
 
 /** The arguments every SPAN function shares: the member. */
-export const MEMBER_ARGUMENTS = ["spans", "loads", "supports", "EI", "combo"] as const;
+export const MEMBER_ARGUMENTS = ["spans", "loads", "supports", "EI", "combo", "units"] as const;
 export type MemberArgument = (typeof MEMBER_ARGUMENTS)[number];
 
 const SHEET = String.raw`(?:'((?:[^']|'')+)'|([A-Za-z_][\w.]*))!`;

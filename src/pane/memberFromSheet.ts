@@ -4,7 +4,7 @@
  * builds the member with the sheet layer's own readers and solves it with the core.
  */
 import { solve, type Member, type Solution } from "../core";
-import { describeError, readLoads, readMember, type MemberArgs } from "../sheet";
+import { describeError, memberInOwnUnits, readLoads, readMember, readMemberUnits, type MemberArgs } from "../sheet";
 import { parseBlock, blockText } from "./addresses";
 import { MEMBER_ARGUMENTS, parseSpanFormula, unresolvedArguments, type ArgSource, type MemberArgument, type SpanCall } from "./formulaRefs";
 import { qualify, splitAddress, type CellValue, type Selection, type SheetHost } from "./host";
@@ -104,6 +104,16 @@ async function labelsNear(host: SheetHost, qualified: string | undefined): Promi
   }
 }
 
+/** The length and force units a formula's units argument names, if it has a readable one. */
+function labelledUnits(arg: unknown): Units | undefined {
+  try {
+    const units = readMemberUnits(arg ?? null);
+    return units === null ? undefined : { length: units.length.text, force: units.force.text };
+  } catch {
+    return undefined;
+  }
+}
+
 /** Reads every member argument's values through the host and builds the resolved member. */
 export async function resolveSources(host: SheetHost, sheet: string, cell: string, sources: MemberSources, call?: SpanCall): Promise<Lookup> {
   const ranges: Partial<Record<MemberArgument, string>> = {};
@@ -120,9 +130,16 @@ export async function resolveSources(host: SheetHost, sheet: string, cell: strin
   } catch (error) {
     return { ok: false, reason: "invalid", message: error instanceof Error ? error.message : String(error) };
   }
-  const args: MemberArgs = { spans: values.spans, loads: values.loads, supports: values.supports ?? null, EI: values.EI ?? null, combo: values.combo ?? null };
+  const args: MemberArgs = {
+    spans: values.spans,
+    loads: values.loads,
+    supports: values.supports ?? null,
+    EI: values.EI ?? null,
+    combo: values.combo ?? null,
+    units: values.units ?? null,
+  };
   const [spanLabels, eiLabels, loadLabels] = [await labelsNear(host, ranges.spans), await labelsNear(host, ranges.EI), await labelsNear(host, ranges.loads)];
-  const units = guessUnits({ spans: spanLabels, EI: eiLabels, loads: loadLabels });
+  const units = labelledUnits(args.units) ?? guessUnits({ spans: spanLabels, EI: eiLabels, loads: loadLabels });
   return { ok: true, member: { sheet, cell, call, sources, ranges, args, cases: casesOf(args.loads), units } };
 }
 
@@ -162,7 +179,8 @@ export interface Solved {
 export function solveMember(resolved: ResolvedMember, combo?: string): Solved | { error: string } {
   try {
     const args: MemberArgs = combo === undefined ? resolved.args : { ...resolved.args, combo };
-    const member = readMember(args);
+    const units = readMemberUnits(args.units ?? null);
+    const member = units === null ? readMember(args) : memberInOwnUnits(readMember(args), units);
     const solution = solve(member);
     const comboText = combo ?? (typeof args.combo === "string" ? args.combo : Array.isArray(args.combo) ? String(args.combo[0]?.[0] ?? "") : "");
     return { member, solution, comboText };

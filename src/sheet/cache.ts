@@ -56,7 +56,7 @@ function hashOf(arg: unknown, hash: number): number {
 
 /** A 32-bit hash of the member arguments' cells, or null when they cannot be keyed. */
 export function memberHash(args: MemberArgs): number | null {
-  const parts = [args.spans, args.loads, args.supports, args.EI, args.combo];
+  const parts = [args.spans, args.loads, args.supports, args.EI, args.combo, args.units ?? null];
   let h = 0x9e3779b9 | 0;
   for (let i = 0; i < parts.length; i++) {
     h = hashOf(parts[i], mix(h, 11 + i));
@@ -75,7 +75,14 @@ export function sameCells(a: unknown, b: unknown): boolean {
 }
 
 function sameArgs(a: MemberArgs, b: MemberArgs): boolean {
-  return sameCells(a.spans, b.spans) && sameCells(a.loads, b.loads) && sameCells(a.supports, b.supports) && sameCells(a.EI, b.EI) && sameCells(a.combo, b.combo);
+  return (
+    sameCells(a.spans, b.spans) &&
+    sameCells(a.loads, b.loads) &&
+    sameCells(a.supports, b.supports) &&
+    sameCells(a.EI, b.EI) &&
+    sameCells(a.combo, b.combo) &&
+    sameCells(a.units ?? null, b.units ?? null)
+  );
 }
 
 /** A copy of an argument's cells (arrays copied, cell values are primitives). */
@@ -113,7 +120,14 @@ export class LruCache<K, V> {
 }
 
 function copyOf(args: MemberArgs): MemberArgs {
-  return { spans: snapshot(args.spans), loads: snapshot(args.loads), supports: snapshot(args.supports), EI: snapshot(args.EI), combo: snapshot(args.combo) };
+  return {
+    spans: snapshot(args.spans),
+    loads: snapshot(args.loads),
+    supports: snapshot(args.supports),
+    EI: snapshot(args.EI),
+    combo: snapshot(args.combo),
+    units: snapshot(args.units ?? null),
+  };
 }
 
 /** Slots of the table of recently seen hashes (a power of two). */

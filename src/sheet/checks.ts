@@ -17,7 +17,6 @@ import {
   peakShearStress,
   sameDimension,
   dimensionName,
-  solve,
   spanDeflections,
   unavailable,
   utilisation,
@@ -27,10 +26,10 @@ import {
 } from "../core";
 import { errorCodeOf, isBlank, isEmpty, numberFromText, readNumber, show } from "./cells";
 import { guarded } from "./hostError";
-import { readMember, type MemberArgs } from "./member";
+import type { MemberArgs } from "./member";
 import { listEntries, rowsOf } from "./ranges";
 import { finite } from "./shape";
-import { readMemberUnits, readUnit, memberInSI, type MemberUnits } from "./units";
+import { readMemberUnits, readUnit, type MemberUnits } from "./units";
 import { solvedMember } from "./worksheet";
 
 interface Solved {
@@ -41,8 +40,7 @@ interface Solved {
 function solvedWithUnits(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, unitsArg: unknown): Solved {
   const args: MemberArgs = { spans, loads, supports: supports ?? null, EI: EI ?? null, combo: combo ?? null };
   const units = readMemberUnits(unitsArg ?? null);
-  if (units === null) return { solution: solvedMember(args), units };
-  return { solution: solve(memberInSI(readMember(args), units)), units };
+  return { solution: solvedMember({ ...args, units: units === null ? null : unitsArg }), units };
 }
 
 /** A value of the section argument and the unit it came with (from a SECTION table's unit column). */

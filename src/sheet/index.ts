@@ -13,7 +13,7 @@ export { rowsOf, singleCell, isOmitted, isAllBlank, vectorCells, splitList, list
 export { mapPositions, orBlank, finite } from "./shape";
 export { hostError, describeError, guarded, MESSAGE_LIMIT } from "./hostError";
 export { memberHash, sameCells, LruCache, MemberCache, solvedMembers, MEMBER_CACHE_SIZE } from "./cache";
-export { readUnit, readMemberUnits, memberInSI, UNIT_KEYS } from "./units";
+export { readUnit, readMemberUnits, memberInSI, memberInOwnUnits, UNIT_KEYS } from "./units";
 export type { MemberUnits } from "./units";
 export { sheetSection, readShape, readDimensions, SECTION_ROWS } from "./section";
 export { sheetStress, sheetShearStress, sheetDeflectionCheck, sheetUtilisation, sheetConvert, sheetStiffness } from "./checks";

@@ -19,6 +19,8 @@ export interface MemberArgs {
   supports: unknown;
   EI: unknown;
   combo: unknown;
+  /** The units argument (key=unit pairs); absent or blank = consistent units. */
+  units?: unknown;
 }
 
 /** Load rows from a table range, or from one text cell in the load notation. */

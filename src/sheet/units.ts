@@ -124,3 +124,14 @@ export function memberInSI(member: Member, units: MemberUnits): Member {
     }),
   };
 }
+
+/**
+ * The member in the user's own length and force units: only EI changes (to force x length^2
+ * of those units), so every result comes out in the units the member was written in, with
+ * deflection in the length unit. Used where results are drawn rather than converted.
+ */
+export function memberInOwnUnits(member: Member, units: MemberUnits): Member {
+  const consistent = units.force.factor * units.length.factor * units.length.factor;
+  const scale = units.EI.factor / consistent;
+  return { ...member, stiffness: member.stiffness === null ? null : member.stiffness.map((ei) => ei * scale) };
+}

@@ -8,6 +8,7 @@ import { errorCodeOf, isEmpty, readNumber } from "./cells";
 import { memberHash, solvedMembers } from "./cache";
 import { guarded } from "./hostError";
 import { readMember, type MemberArgs } from "./member";
+import { memberInSI, readMemberUnits, type MemberUnits } from "./units";
 import { singleCell } from "./ranges";
 import { finite, mapPositions, orBlank } from "./shape";
 
@@ -25,13 +26,54 @@ export function solvedMember(args: MemberArgs): Solution {
     const cached = solvedMembers.get(args, hash);
     if (cached !== undefined) return cached;
   }
-  const solution = solve(readMember(args));
+  const units = readMemberUnits(args.units ?? null);
+  const member = readMember(args);
+  const solution = solve(units === null ? member : memberInSI(member, units));
   if (hash !== null) solvedMembers.remember(args, hash, solution);
   return solution;
 }
 
-function memberArgs(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown): MemberArgs {
-  return { spans, loads, supports: supports ?? null, EI: EI ?? null, combo: combo ?? null };
+/**
+ * Factors from the solution's units (metres and newtons when the units argument is given,
+ * the user's consistent units otherwise) to the units the sheet shows: positions in the
+ * length unit, forces in the force unit, moments in force x length, deflection in its unit.
+ */
+export interface OutputScale {
+  length: number;
+  force: number;
+  moment: number;
+  deflection: number;
+}
+
+const UNIT_SCALE: OutputScale = { length: 1, force: 1, moment: 1, deflection: 1 };
+
+export function outputScale(units: MemberUnits | null): OutputScale {
+  if (units === null) return UNIT_SCALE;
+  const length = units.length.factor;
+  const force = units.force.factor;
+  return { length, force, moment: force * length, deflection: units.deflection.factor };
+}
+
+function scaleOf(args: MemberArgs): OutputScale {
+  return args.units === null || args.units === undefined ? UNIT_SCALE : outputScale(readMemberUnits(args.units));
+}
+
+/** Divides a quantity's value in the solution's units into the sheet's units. */
+function shown(quantity: Quantity, value: number, scale: OutputScale): number {
+  switch (quantity) {
+    case "shear":
+      return value / scale.force;
+    case "moment":
+      return value / scale.moment;
+    case "deflection":
+      return value / scale.deflection;
+    default:
+      return value;
+  }
+}
+
+function memberArgs(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown): MemberArgs {
+  return { spans, loads, supports: supports ?? null, EI: EI ?? null, combo: combo ?? null, units: units ?? null };
 }
 
 function requireStiffness(solution: Solution, quantity: Quantity): void {
@@ -58,10 +100,16 @@ function checkPoints(points: number): number {
 }
 
 /** SPAN.REACTIONS: one row per node [x, vertical reaction (up +), moment reaction (ccw +)]. */
-export function sheetReactions(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown): number[][] {
+export function sheetReactions(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown): number[][] {
   return guarded(() => {
-    const solution = solvedMember(memberArgs(spans, loads, supports, EI, combo));
-    return solution.reactions.map((r) => [r.x, finite(r.force, "a vertical reaction"), finite(r.moment, "a moment reaction")]);
+    const args = memberArgs(spans, loads, supports, EI, combo, units);
+    const solution = solvedMember(args);
+    const scale = scaleOf(args);
+    return solution.reactions.map((r) => [
+      r.x / scale.length,
+      finite(r.force / scale.force, "a vertical reaction"),
+      finite(r.moment / scale.moment, "a moment reaction"),
+    ]);
   });
 }
 
@@ -74,33 +122,45 @@ export function sheetValuesAt(
   supports: unknown,
   EI: unknown,
   combo: unknown,
+  units?: unknown,
 ): (number | string)[][] {
   return guarded(() => {
-    const solution = solvedMember(memberArgs(spans, loads, supports, EI, combo));
+    const args = memberArgs(spans, loads, supports, EI, combo, units);
+    const solution = solvedMember(args);
     if (quantity === "slope" || quantity === "deflection") requireStiffness(solution, quantity);
-    return mapPositions(x, (position) => valueAt(solution, quantity, position));
+    const scale = scaleOf(args);
+    if (scale === UNIT_SCALE) return mapPositions(x, (position) => valueAt(solution, quantity, position));
+    const length = Number((solution.length / scale.length).toPrecision(12));
+    return mapPositions(x, (position) => {
+      if (!(position >= 0 && position <= length * (1 + 1e-12))) throw invalid(`x = ${position} is outside the member, which runs from 0 to ${length}`);
+      return shown(quantity, valueAt(solution, quantity, Math.min(position * scale.length, solution.length)), scale);
+    });
   });
 }
 
 /** SPAN.MAXMOMENT: [[largest M, x], [smallest M, x]]. */
-export function sheetMaxMoment(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown): number[][] {
+export function sheetMaxMoment(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown): number[][] {
   return guarded(() => {
-    const e = extremes(solvedMember(memberArgs(spans, loads, supports, EI, combo)), "moment");
+    const args = memberArgs(spans, loads, supports, EI, combo, units);
+    const e = extremes(solvedMember(args), "moment");
+    const scale = scaleOf(args);
     return [
-      [finite(e.max, "the largest moment"), e.xMax],
-      [finite(e.min, "the smallest moment"), e.xMin],
+      [finite(e.max / scale.moment, "the largest moment"), e.xMax / scale.length],
+      [finite(e.min / scale.moment, "the smallest moment"), e.xMin / scale.length],
     ];
   });
 }
 
 /** SPAN.EXTREMES: rows [label, max, x at max, min, x at min]; slope and deflection only with EI. */
-export function sheetExtremes(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown): (number | string)[][] {
+export function sheetExtremes(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown): (number | string)[][] {
   return guarded(() => {
-    const solution = solvedMember(memberArgs(spans, loads, supports, EI, combo));
+    const args = memberArgs(spans, loads, supports, EI, combo, units);
+    const solution = solvedMember(args);
+    const scale = scaleOf(args);
     const quantities: Quantity[] = solution.hasStiffness ? ["shear", "moment", "slope", "deflection"] : ["shear", "moment"];
     return quantities.map((q) => {
       const e = extremes(solution, q);
-      return [q, finite(e.max, `the largest ${q}`), e.xMax, finite(e.min, `the smallest ${q}`), e.xMin];
+      return [q, finite(shown(q, e.max, scale), `the largest ${q}`), e.xMax / scale.length, finite(shown(q, e.min, scale), `the smallest ${q}`), e.xMin / scale.length];
     });
   });
 }
@@ -113,16 +173,19 @@ export function sheetDiagram(
   supports: unknown,
   EI: unknown,
   combo: unknown,
+  units?: unknown,
 ): (number | string)[][] {
   return guarded(() => {
     const count = readPoints(points);
-    const solution = solvedMember(memberArgs(spans, loads, supports, EI, combo));
+    const args = memberArgs(spans, loads, supports, EI, combo, units);
+    const solution = solvedMember(args);
+    const scale = scaleOf(args);
     return diagram(solution, count).map((row) => [
-      row.x,
-      finite(row.shear, "a shear value"),
-      finite(row.moment, "a moment value"),
+      row.x / scale.length,
+      finite(row.shear / scale.force, "a shear value"),
+      finite(row.moment / scale.moment, "a moment value"),
       orBlank(row.slope),
-      orBlank(row.deflection),
+      orBlank(row.deflection / scale.deflection),
     ]);
   });
 }

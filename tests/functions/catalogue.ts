@@ -20,16 +20,18 @@ const trailing: CatalogueEntry["parameters"] = [
   ["EI", "matrix", true],
   ["combo", "scalar", true],
 ];
+/** The analysis functions' trailing arguments: the member's own, then the units labels. */
+const analysis: CatalogueEntry["parameters"] = [...trailing, ["units", "matrix", true]];
 
 export const CATALOGUE: CatalogueEntry[] = [
-  { id: "REACTIONS", exportName: "reactions", parameters: [...member, ...trailing] },
-  { id: "SHEAR", exportName: "shear", parameters: [...member, ["x", "matrix", false], ...trailing] },
-  { id: "MOMENT", exportName: "moment", parameters: [...member, ["x", "matrix", false], ...trailing] },
-  { id: "SLOPE", exportName: "slope", parameters: [...member, ["x", "matrix", false], ...trailing] },
-  { id: "DEFLECTION", exportName: "deflection", parameters: [...member, ["x", "matrix", false], ...trailing] },
-  { id: "MAXMOMENT", exportName: "maxMoment", parameters: [...member, ...trailing] },
-  { id: "EXTREMES", exportName: "extremes", parameters: [...member, ...trailing] },
-  { id: "DIAGRAM", exportName: "diagram", parameters: [...member, ["points", "scalar", true], ...trailing] },
+  { id: "REACTIONS", exportName: "reactions", parameters: [...member, ...analysis] },
+  { id: "SHEAR", exportName: "shear", parameters: [...member, ["x", "matrix", false], ...analysis] },
+  { id: "MOMENT", exportName: "moment", parameters: [...member, ["x", "matrix", false], ...analysis] },
+  { id: "SLOPE", exportName: "slope", parameters: [...member, ["x", "matrix", false], ...analysis] },
+  { id: "DEFLECTION", exportName: "deflection", parameters: [...member, ["x", "matrix", false], ...analysis] },
+  { id: "MAXMOMENT", exportName: "maxMoment", parameters: [...member, ...analysis] },
+  { id: "EXTREMES", exportName: "extremes", parameters: [...member, ...analysis] },
+  { id: "DIAGRAM", exportName: "diagram", parameters: [...member, ["points", "scalar", true], ...analysis] },
   // load arrangements: envelopes, peaks, influence lines, moving loads, combination sets
   {
     id: "ENVELOPE",

@@ -44,8 +44,8 @@ describe("classifyArgument", () => {
 
 describe("parseSpanFormula", () => {
   it("rejects more arguments than the function takes, naming the count", () => {
-    const result = parseSpanFormula('=SPAN.MOMENT(B3:B5,Loads!A2:F9,C3,,D3:D6,E3,"1.2D+1.6L")');
-    expect(result).toEqual({ ok: false, message: "SPAN.MOMENT takes at most 6 arguments, the formula gives 7" });
+    const result = parseSpanFormula('=SPAN.MOMENT(B3:B5,Loads!A2:F9,C3,,D3:D6,E3,"1.2D+1.6L","length=m, force=kN",F1)');
+    expect(result).toEqual({ ok: false, message: "SPAN.MOMENT takes at most 7 arguments, the formula gives 9" });
   });
 
   it("maps a full six-argument moment call", () => {
@@ -62,7 +62,7 @@ describe("parseSpanFormula", () => {
 
   it("maps DIAGRAM with points before the supports, and skipped arguments", () => {
     const call = parsed("=SPAN.DIAGRAM(Schedule!$B$4,Schedule!$C$4,101,,Schedule!E4)");
-    expect(call.entry.arguments.map((a) => a.name)).toEqual(["spans", "loads", "points", "supports", "EI", "combo"]);
+    expect(call.entry.arguments.map((a) => a.name)).toEqual(["spans", "loads", "points", "supports", "EI", "combo", "units"]);
     expect(call.args.points).toEqual({ kind: "literal", value: 101, text: "101" });
     expect(call.args.supports).toEqual({ kind: "omitted", text: "" });
     expect(call.args.EI).toEqual({ kind: "range", sheet: "Schedule", address: "E4", text: "Schedule!E4" });

@@ -1,4 +1,6 @@
-import { extremes, solve } from "../../src/core";
+import { extremes, solve, valueAt } from "../../src/core";
+import { relDiff } from "../../src/core/tolerance";
+import { deflection } from "../../functions/functions";
 import { readMember, sheetExtremes } from "../../src/sheet";
 import { findMember, solveMember, type ResolvedMember } from "../../src/pane/memberFromSheet";
 import { FakeHost } from "./support/fakeHost";
@@ -54,6 +56,21 @@ describe("findMember", () => {
     const table = sheetExtremes(spans, loads, supports, EI, combo);
     const moment = extremes(solved.solution, "moment");
     expect(table[1]).toEqual(["moment", moment.max, moment.xMax, moment.min, moment.xMin]);
+  });
+
+  it("honours the formula's units argument: draws in the user's length and force units, EI converted", async () => {
+    const host = new FakeHost()
+      .put("US!A1", [["Spans (ft)", 20], ["EI", 14790000]])
+      .putFormula("US!D1", '=SPAN.DEFLECTION(B1,"udl 1.5 D",10,,B2,,"length=ft, force=kip, EI=kip*in^2, deflection=ft")');
+    const member = await found(host, "US!D1");
+    expect(member.units).toEqual({ length: "ft", force: "kip" });
+    const solved = solveMember(member);
+    if ("error" in solved) throw new Error(solved.error);
+    const sheet = deflection([[20]], [["udl 1.5 D"]], [[10]], null as any, [[14790000]], null, [["length=ft, force=kip, EI=kip*in^2, deflection=ft"]]);
+    expect(relDiff(valueAt(solved.solution, "deflection", 10), sheet[0][0] as number)).toBeLessThan(1e-12);
+    // Closed form 5wL^4/384EI in kip and inches, shown in feet (steel construction manual, simple beam, uniform load; from memory).
+    expect(relDiff(valueAt(solved.solution, "deflection", 10), (5 * (1.5 / 12) * 240 ** 4) / (384 * 14790000) / 12)).toBeLessThan(1e-12);
+    expect(relDiff(valueAt(solved.solution, "moment", 10), 1.5 * 400 / 8)).toBeLessThan(1e-12);
   });
 
   it("takes literals, array constants, names and spilled ranges", async () => {
