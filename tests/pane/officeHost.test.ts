@@ -173,6 +173,25 @@ describe("OfficeHost", () => {
     expect(agreed.calls.cleared).toEqual(["Beam!N3:R107 Contents"]);
   });
 
+  it.each([
+    ["a zero in the first cell", 0, 0, 0],
+    ["a formula in the last cell", 104, 4, "=B3"],
+    ["text in the middle", 52, 2, "note"],
+    ["a FALSE", 10, 1, false],
+    ["a single space", 70, 3, " "],
+  ] as const)("%s counts as occupied: the user is asked, and refusing writes and clears nothing", async (_name, row, col, content) => {
+    const target: unknown[][] = Array.from({ length: 105 }, () => ["", "", "", "", ""]);
+    target[row][col] = content;
+    const { host, calls, ranges } = officeMock(target as string[][]);
+    const questions: string[] = [];
+    const outcome = await writeTable(host, await plan(host), async (q) => (questions.push(q), false));
+    expect(outcome.written).toBe(false);
+    expect(questions).toHaveLength(1);
+    expect(calls.cleared).toEqual([]);
+    expect(calls.written).toEqual([]);
+    expect(Array.isArray(ranges["N3:R4"].formulas)).toBe(false);
+  });
+
   it("asks for scatter-line charts over the table's columns, beside it", async () => {
     const { host, calls, mock } = officeMock([[""]]);
     const p = await plan(host);
