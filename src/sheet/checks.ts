@@ -40,7 +40,7 @@ interface Solved {
 function solvedWithUnits(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, unitsArg: unknown): Solved {
   const args: MemberArgs = { spans, loads, supports: supports ?? null, EI: EI ?? null, combo: combo ?? null };
   const units = readMemberUnits(unitsArg ?? null);
-  return { solution: solvedMember({ ...args, units: units === null ? null : unitsArg }), units };
+  return { solution: solvedMember({ ...args, units: units === null ? null : unitsArg }, units), units };
 }
 
 /** A value of the section argument and the unit it came with (from a SECTION table's unit column). */

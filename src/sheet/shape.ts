@@ -6,9 +6,9 @@ import { invalid } from "../core";
 import { isEmpty, readNumber } from "./cells";
 import { rowsOf } from "./ranges";
 
-/** Names an x cell for messages: "x" for one cell, "x row 2, column 3" in a range. */
-function xPlace(rows: unknown[][], r: number, c: number): string {
-  return rows.length === 1 && rows[0].length === 1 ? "x" : `x row ${r + 1}, column ${c + 1}`;
+/** Names a position cell for messages: "x" for one cell, "x row 2, column 3" in a range. */
+function xPlace(rows: unknown[][], r: number, c: number, name: string): string {
+  return rows.length === 1 && rows[0].length === 1 ? name : `${name} row ${r + 1}, column ${c + 1}`;
 }
 
 /** Checks a result value is a finite number before it reaches the sheet. */
@@ -17,20 +17,20 @@ export function finite(value: number, what: string): number {
   return value;
 }
 
-function valueAtPosition(at: (position: number) => number, position: number): number {
+function valueAtPosition(at: (position: number) => number, position: number, name: string): number {
   const value = at(position);
-  if (!Number.isFinite(value)) throw invalid(`the value at x = ${position} is not a finite number; check the member's data`);
+  if (!Number.isFinite(value)) throw invalid(`the value at ${name} = ${position} is not a finite number; check the member's data`);
   return value;
 }
 
-/** Evaluates `at` for every non-empty x cell, keeping the shape of x. */
-export function mapPositions(x: unknown, at: (position: number) => number): (number | string)[][] {
+/** Evaluates `at` for every non-empty position cell, keeping the argument's shape (`name` in messages). */
+export function mapPositions(x: unknown, at: (position: number) => number, name = "x"): (number | string)[][] {
   if (Array.isArray(x) && x.length === 1 && Array.isArray(x[0]) && x[0].length === 1 && typeof x[0][0] === "number") {
     const position = x[0][0];
-    if (Number.isFinite(position)) return [[valueAtPosition(at, position)]];
+    if (Number.isFinite(position)) return [[valueAtPosition(at, position, name)]];
   }
   const rows = rowsOf(x);
-  if (rows.length === 0) throw invalid("x: give a cell or a range of positions");
+  if (rows.length === 0) throw invalid(`${name}: give a cell or a range of positions`);
   const width = rows.reduce((w, row) => Math.max(w, Array.isArray(row) ? row.length : 1), 0);
   const result: (number | string)[][] = new Array(rows.length);
   for (let r = 0; r < rows.length; r++) {
@@ -42,8 +42,8 @@ export function mapPositions(x: unknown, at: (position: number) => number): (num
         out[c] = "";
         continue;
       }
-      const position = readNumber(cell, () => xPlace(rows, r, c));
-      out[c] = valueAtPosition(at, position);
+      const position = readNumber(cell, () => xPlace(rows, r, c, name));
+      out[c] = valueAtPosition(at, position, name);
     }
     result[r] = out;
   }

@@ -23,7 +23,7 @@ import { readEffect } from "./effect";
 import { guarded } from "./hostError";
 import { readLoads, readMember } from "./member";
 import { isAllBlank, listEntries, rowsOf, singleCell } from "./ranges";
-import { finite } from "./shape";
+import { finite, mapPositions } from "./shape";
 
 function memberOf(spans: unknown, loads: unknown, supports: unknown, EI: unknown): Member {
   return readMember({ spans, loads, supports: supports ?? null, EI: EI ?? null, combo: null });
@@ -137,15 +137,7 @@ export function sheetInfluence(spans: unknown, effect: unknown, positions: unkno
     const member = memberOf(spans, null, supports, EI);
     const e = readEffect(effect, false);
     if (e.kind === "absolute-moment") throw invalid("effect: absolute moment applies to moving loads only");
-    const rows = rowsOf(positions);
-    if (rows.length === 0) throw invalid("positions: give a cell or a range of unit-load positions");
-    return rows.map((row, r) =>
-      (Array.isArray(row) ? row : [row]).map((cell, c) => {
-        if (isEmpty(cell)) return "";
-        const p = readNumber(cell, () => (rows.length === 1 && row.length === 1 ? "positions" : `positions row ${r + 1}, column ${c + 1}`));
-        return finite(influenceLine(member, e, [p])[0], `the ordinate at ${p}`);
-      }),
-    );
+    return mapPositions(positions, (p) => influenceLine(member, e, [p])[0], "positions");
   });
 }
 

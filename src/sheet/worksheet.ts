@@ -17,8 +17,12 @@ export const DEFAULT_POINTS = 101;
 /** Most stations a diagram may ask for. */
 export const MAX_POINTS = 10001;
 
-/** The solution for the member arguments, from the cache when the same arguments were solved before. */
-export function solvedMember(args: MemberArgs): Solution {
+/**
+ * The solution for the member arguments, from the cache when the same arguments were solved
+ * before. `units` is the already-read units argument when the caller has it (read here on a
+ * miss otherwise); with units the member is solved in metres and newtons.
+ */
+export function solvedMember(args: MemberArgs, units?: MemberUnits | null): Solution {
   const last = solvedMembers.getLast(args);
   if (last !== undefined) return last;
   const hash = memberHash(args);
@@ -26,9 +30,9 @@ export function solvedMember(args: MemberArgs): Solution {
     const cached = solvedMembers.get(args, hash);
     if (cached !== undefined) return cached;
   }
-  const units = readMemberUnits(args.units ?? null);
+  const given = units === undefined ? readMemberUnits(args.units ?? null) : units;
   const member = readMember(args);
-  const solution = solve(units === null ? member : memberInSI(member, units));
+  const solution = solve(given === null ? member : memberInSI(member, given));
   if (hash !== null) solvedMembers.remember(args, hash, solution);
   return solution;
 }
@@ -54,8 +58,10 @@ export function outputScale(units: MemberUnits | null): OutputScale {
   return { length, force, moment: force * length, deflection: units.deflection.factor };
 }
 
-function scaleOf(args: MemberArgs): OutputScale {
-  return args.units === null || args.units === undefined ? UNIT_SCALE : outputScale(readMemberUnits(args.units));
+/** The solved member and the factors that bring its results into the sheet's units; the units argument is read once. */
+function solvedWithScale(args: MemberArgs): { solution: Solution; scale: OutputScale } {
+  const units = readMemberUnits(args.units ?? null);
+  return { solution: solvedMember(args, units), scale: outputScale(units) };
 }
 
 /** Divides a quantity's value in the solution's units into the sheet's units. */
@@ -102,9 +108,7 @@ function checkPoints(points: number): number {
 /** SPAN.REACTIONS: one row per node [x, vertical reaction (up +), moment reaction (ccw +)]. */
 export function sheetReactions(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown): number[][] {
   return guarded(() => {
-    const args = memberArgs(spans, loads, supports, EI, combo, units);
-    const solution = solvedMember(args);
-    const scale = scaleOf(args);
+    const { solution, scale } = solvedWithScale(memberArgs(spans, loads, supports, EI, combo, units));
     return solution.reactions.map((r) => [
       r.x / scale.length,
       finite(r.force / scale.force, "a vertical reaction"),
@@ -125,10 +129,8 @@ export function sheetValuesAt(
   units?: unknown,
 ): (number | string)[][] {
   return guarded(() => {
-    const args = memberArgs(spans, loads, supports, EI, combo, units);
-    const solution = solvedMember(args);
+    const { solution, scale } = solvedWithScale(memberArgs(spans, loads, supports, EI, combo, units));
     if (quantity === "slope" || quantity === "deflection") requireStiffness(solution, quantity);
-    const scale = scaleOf(args);
     if (scale === UNIT_SCALE) return mapPositions(x, (position) => valueAt(solution, quantity, position));
     const length = Number((solution.length / scale.length).toPrecision(12));
     return mapPositions(x, (position) => {
@@ -141,9 +143,8 @@ export function sheetValuesAt(
 /** SPAN.MAXMOMENT: [[largest M, x], [smallest M, x]]. */
 export function sheetMaxMoment(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown): number[][] {
   return guarded(() => {
-    const args = memberArgs(spans, loads, supports, EI, combo, units);
-    const e = extremes(solvedMember(args), "moment");
-    const scale = scaleOf(args);
+    const { solution, scale } = solvedWithScale(memberArgs(spans, loads, supports, EI, combo, units));
+    const e = extremes(solution, "moment");
     return [
       [finite(e.max / scale.moment, "the largest moment"), e.xMax / scale.length],
       [finite(e.min / scale.moment, "the smallest moment"), e.xMin / scale.length],
@@ -154,9 +155,7 @@ export function sheetMaxMoment(spans: unknown, loads: unknown, supports: unknown
 /** SPAN.EXTREMES: rows [label, max, x at max, min, x at min]; slope and deflection only with EI. */
 export function sheetExtremes(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown): (number | string)[][] {
   return guarded(() => {
-    const args = memberArgs(spans, loads, supports, EI, combo, units);
-    const solution = solvedMember(args);
-    const scale = scaleOf(args);
+    const { solution, scale } = solvedWithScale(memberArgs(spans, loads, supports, EI, combo, units));
     const quantities: Quantity[] = solution.hasStiffness ? ["shear", "moment", "slope", "deflection"] : ["shear", "moment"];
     return quantities.map((q) => {
       const e = extremes(solution, q);
@@ -177,9 +176,7 @@ export function sheetDiagram(
 ): (number | string)[][] {
   return guarded(() => {
     const count = readPoints(points);
-    const args = memberArgs(spans, loads, supports, EI, combo, units);
-    const solution = solvedMember(args);
-    const scale = scaleOf(args);
+    const { solution, scale } = solvedWithScale(memberArgs(spans, loads, supports, EI, combo, units));
     return diagram(solution, count).map((row) => [
       row.x / scale.length,
       finite(row.shear / scale.force, "a shear value"),
