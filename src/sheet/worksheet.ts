@@ -3,7 +3,7 @@
  * (2-D arrays, blanks as "", null or 0, skipped optional arguments as null) and returning
  * 2-D arrays. Every body runs guarded: only #VALUE! / #N/A host errors escape.
  */
-import { diagram, extremes, invalid, solve, unavailable, valueAt, type Quantity, type Solution } from "../core";
+import { diagram, extremes, invalid, solve, tolerance, unavailable, valueAt, type Quantity, type Solution } from "../core";
 import { errorCodeOf, isEmpty, readNumber } from "./cells";
 import { memberHash, solvedMembers } from "./cache";
 import { guarded } from "./hostError";
@@ -134,7 +134,7 @@ export function sheetValuesAt(
     if (scale === UNIT_SCALE) return mapPositions(x, (position) => valueAt(solution, quantity, position));
     const length = Number((solution.length / scale.length).toPrecision(12));
     return mapPositions(x, (position) => {
-      if (!(position >= 0 && position <= length * (1 + 1e-12))) throw invalid(`x = ${position} is outside the member, which runs from 0 to ${length}`);
+      if (!(position >= 0 && position <= length * (1 + tolerance.POSITION_TOLERANCE))) throw invalid(`x = ${position} is outside the member, which runs from 0 to ${length}`);
       return shown(quantity, valueAt(solution, quantity, Math.min(position * scale.length, solution.length)), scale);
     });
   });
