@@ -127,13 +127,10 @@ export function movingLoad(member: Member, train: Train, effect: MovingEffect): 
       const count = samples[0].length;
       for (let c = 0; c < count; c++) {
         const fit = fitPolynomial(FIT_POINTS, samples.map((s) => s[c].value));
-        const placeOf = (u: number): number => {
-          const probeX = samples.map((s) => s[c].x);
-          const line = fitPolynomial(FIT_POINTS, probeX);
-          return evaluatePolynomial(line, u);
-        };
-        offer(evaluatePolynomial(fit, -1), lo, direction, placeOf(-1));
-        offer(evaluatePolynomial(fit, 1), hi, direction, placeOf(1));
+        // Where the effect is measured moves linearly with the train (or stays put): fit it once.
+        const place = fitPolynomial(FIT_POINTS, samples.map((s) => s[c].x));
+        offer(evaluatePolynomial(fit, -1), lo, direction, evaluatePolynomial(place, -1));
+        offer(evaluatePolynomial(fit, 1), hi, direction, evaluatePolynomial(place, 1));
         for (const u of rootsBetween(derivative(fit), -1, 1)) {
           const leadX = mid + half * u;
           const exact = probes(solveAt(leadX, direction), leadX, direction)[c];
