@@ -5,10 +5,9 @@
  */
 import { solve, type Member, type Solution } from "../core";
 import { describeError, memberInOwnUnits, readLoads, readMember, readMemberUnits, type MemberArgs } from "../sheet";
-import { parseBlock, blockText } from "./addresses";
 import { MEMBER_ARGUMENTS, parseSpanFormula, unresolvedArguments, type ArgSource, type MemberArgument, type SpanCall } from "./formulaRefs";
-import { qualify, splitAddress, type CellValue, type Selection, type SheetHost } from "./host";
-import { guessUnits, type Units } from "./units";
+import { qualify, type Selection, type SheetHost } from "./host";
+import { NO_UNITS, paneUnits, type Units } from "./units";
 
 export type MemberSources = Record<MemberArgument, ArgSource>;
 
@@ -82,35 +81,12 @@ function casesOf(loads: unknown): string[] {
   }
 }
 
-/** Label cells near a range: the cell left of its first cell, and the cells above it in its column. */
-async function labelsNear(host: SheetHost, qualified: string | undefined): Promise<CellValue[]> {
-  if (qualified === undefined) return [];
+/** The units the formula's units argument names; none when it has none (or cannot be read: the solve then says why). */
+function unitsOf(arg: unknown): Units {
   try {
-    const { sheet, address } = splitAddress(qualified);
-    const block = parseBlock(address);
-    const out: CellValue[] = [];
-    if (block.from.col > 0) {
-      const left = { row: block.from.row, col: block.from.col - 1 };
-      out.push(...(await host.getValues(qualify(sheet ?? "", blockText({ from: left, to: left }))))[0]);
-    }
-    if (block.from.row > 0) {
-      const top = Math.max(0, block.from.row - 12);
-      const above = await host.getValues(qualify(sheet ?? "", blockText({ from: { row: top, col: block.from.col }, to: { row: block.from.row - 1, col: block.from.col } })));
-      out.push(...above.map((row) => row[0]).reverse());
-    }
-    return out;
+    return paneUnits(readMemberUnits(arg ?? null));
   } catch {
-    return [];
-  }
-}
-
-/** The length and force units a formula's units argument names, if it has a readable one. */
-function labelledUnits(arg: unknown): Units | undefined {
-  try {
-    const units = readMemberUnits(arg ?? null);
-    return units === null ? undefined : { length: units.length.text, force: units.force.text };
-  } catch {
-    return undefined;
+    return NO_UNITS;
   }
 }
 
@@ -138,8 +114,7 @@ export async function resolveSources(host: SheetHost, sheet: string, cell: strin
     combo: values.combo ?? null,
     units: values.units ?? null,
   };
-  const [spanLabels, eiLabels, loadLabels] = [await labelsNear(host, ranges.spans), await labelsNear(host, ranges.EI), await labelsNear(host, ranges.loads)];
-  const units = labelledUnits(args.units) ?? guessUnits({ spans: spanLabels, EI: eiLabels, loads: loadLabels });
+  const units = unitsOf(args.units);
   return { ok: true, member: { sheet, cell, call, sources, ranges, args, cases: casesOf(args.loads), units } };
 }
 

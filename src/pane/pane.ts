@@ -16,6 +16,7 @@ import { findMember, resolveSources, solveMember, type MemberSources, type Resol
 import { blockText } from "./addresses";
 import { chartRequests, planTable, tableInPlace, writeTable } from "./writeBack";
 import { DEFAULT_POINTS } from "../sheet";
+import { NO_UNITS, type Units } from "./units";
 
 export const CAUTION = "Results are an aid to a qualified engineer, who checks them; local codes and licensed practice govern.";
 
@@ -43,8 +44,7 @@ export const PANE_HTML = `
 </form>
 <div class="controls" hidden>
   <label class="combo" hidden><span>Combination</span><select></select><input class="combo-text" spellcheck="false" autocomplete="off" aria-label="combination"/></label>
-  <label><span>Length unit</span><input class="unit-length" size="4" autocomplete="off"/></label>
-  <label><span>Force unit</span><input class="unit-force" size="4" autocomplete="off"/></label>
+  <span class="units-note"></span>
 </div>
 <div class="figure"></div>
 <div class="readout" aria-live="off"></div>
@@ -62,7 +62,6 @@ export class Pane {
   private resolved: ResolvedMember | undefined;
   private solved: Solved | undefined;
   private drawing: Drawing | undefined;
-  private unitsEdited = false;
   private pendingConfirm: ((ok: boolean) => void) | undefined;
   private readonly follow = debounce(() => void this.refresh(), 180);
   private unsubscribe: (() => void) | undefined;
@@ -141,10 +140,9 @@ export class Pane {
     this.resolved = member;
     el<HTMLFormElement>(this.root, ".pick").hidden = true;
     this.message(undefined);
-    if (!this.unitsEdited) {
-      el<HTMLInputElement>(this.root, ".unit-length").value = member.units.length;
-      el<HTMLInputElement>(this.root, ".unit-force").value = member.units.force;
-    }
+    el(this.root, ".units-note").textContent = member.units.length
+      ? `units from the formula: length ${member.units.length}, force ${member.units.force}, deflection ${member.units.deflection}`
+      : "no units argument: values in the member's own consistent units";
     this.fillCombos(member);
     el(this.root, ".controls").hidden = false;
     this.redraw();
@@ -175,8 +173,8 @@ export class Pane {
     return typeof combo === "string" ? combo : Array.isArray(combo) ? String(combo[0]?.[0] ?? "") : "";
   }
 
-  private units() {
-    return { length: el<HTMLInputElement>(this.root, ".unit-length").value.trim(), force: el<HTMLInputElement>(this.root, ".unit-force").value.trim() };
+  private units(): Units {
+    return this.resolved?.units ?? NO_UNITS;
   }
 
   /** Solves (with the chosen combination) and draws; returns the time taken in ms. */
@@ -343,7 +341,7 @@ export class Pane {
     line?.setAttribute("x1", String(drawing.layout.x(x)));
     line?.setAttribute("x2", String(drawing.layout.x(x)));
     cursor?.setAttribute("visibility", "visible");
-    const parts = readoutText(readoutAt(solved.solution, x), this.units());
+    const parts = readoutText(readoutAt(solved.solution, x, this.units().deflectionFactor), this.units());
     el(this.root, ".readout").innerHTML = parts.map(([name, value]) => `<span data-name="${name}"><b>${escapeXml(name)}</b> ${escapeXml(value)}</span>`).join(" ");
   }
 
@@ -361,12 +359,6 @@ export class Pane {
       this.redraw();
     });
     el<HTMLInputElement>(root, ".combo-text").addEventListener("change", () => this.redraw());
-    for (const selector of [".unit-length", ".unit-force"]) {
-      el<HTMLInputElement>(root, selector).addEventListener("change", () => {
-        this.unitsEdited = true;
-        this.redraw();
-      });
-    }
     const figure = el<HTMLElement>(root, ".figure");
     let frame = 0;
     figure.addEventListener("pointermove", (event) => {

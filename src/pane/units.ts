@@ -1,56 +1,48 @@
 /**
- * Units as the user labels them: the pane never converts, it only shows the user's own unit
- * names, guessed from labels such as "Spans (m)" or "EI (kN·m²)" and editable in the pane.
+ * Units as the pane shows them. They come from one place only: the formula's `units`
+ * argument, read by the sheet layer's own reader (readMemberUnits). Without one, the member is
+ * in consistent units the pane cannot know, so every quantity is shown without a unit. The
+ * pane never guesses units from text near the cells and never relabels numbers.
+ *
+ * The pane solves the member in the length and force units the formula names (only EI is
+ * converted, see memberInOwnUnits), so x, V and M come out in those units; deflection comes out
+ * in the length unit and is multiplied by `deflectionFactor` into the formula's deflection unit.
  */
+import type { MemberUnits } from "../sheet";
 
 export interface Units {
-  /** Length unit of the spans and of every x, e.g. "m". */
+  /** Length unit of the spans and of every x, e.g. "ft"; "" without a units argument. */
   length: string;
-  /** Force unit of the loads, e.g. "kN". */
+  /** Force unit of the loads, e.g. "kip"; "" without a units argument. */
   force: string;
+  /** Deflection unit of the results (the formula's deflection key, default the length unit). */
+  deflection: string;
+  /** Multiplies a deflection in the length unit into the deflection unit (1 without units). */
+  deflectionFactor: number;
 }
 
-/** The text inside the last pair of brackets of a label: "Spans (m)" -> "m". */
-export function unitIn(label: unknown): string | undefined {
-  if (typeof label !== "string") return undefined;
-  const match = /\(([^()]{1,16})\)\s*$/.exec(label.trim()) ?? /\[([^[\]]{1,16})\]\s*$/.exec(label.trim());
-  return match ? match[1].trim() : undefined;
-}
+/** No units argument: quantities without units. */
+export const NO_UNITS: Units = { length: "", force: "", deflection: "", deflectionFactor: 1 };
 
-/** The force unit inside a stiffness unit ("kN·m²", "kip*in^2", "N mm2") or a line-load unit ("kN/m"). */
-export function forceFromStiffness(unit: string): string | undefined {
-  const match = /^(.+?)\s*[·*.\-\u22C5 ]\s*[A-Za-z]+\s*(?:²|\^2|2)$/.exec(unit.trim());
-  return match ? match[1].trim() : undefined;
-}
-
-export function forceFromLineLoad(unit: string): string | undefined {
-  const match = /^(.+?)\s*\/\s*[A-Za-z]+$/.exec(unit.trim());
-  return match ? match[1].trim() : undefined;
-}
-
-/** Units from the labels found near the member's inputs; blanks where nothing tells. */
-export function guessUnits(labels: { spans: unknown[]; EI: unknown[]; loads: unknown[] }): Units {
-  const first = <T>(values: unknown[], pick: (unit: string) => T | undefined): T | undefined => {
-    for (const value of values) {
-      const unit = unitIn(value);
-      const picked = unit === undefined ? undefined : pick(unit);
-      if (picked !== undefined) return picked;
-    }
-    return undefined;
+/** The pane's units from the units argument as the sheet layer read it (null = none given). */
+export function paneUnits(units: MemberUnits | null): Units {
+  if (units === null) return NO_UNITS;
+  return {
+    length: units.length.text,
+    force: units.force.text,
+    deflection: units.deflection.text,
+    deflectionFactor: units.length.factor / units.deflection.factor,
   };
-  const length = first(labels.spans, (unit) => unit) ?? "";
-  const force =
-    first(labels.EI, forceFromStiffness) ??
-    first(labels.loads, (unit) => forceFromLineLoad(unit) ?? (/^[A-Za-z]+$/.test(unit) ? unit : undefined)) ??
-    "";
-  return { length, force };
 }
+
+/** The unit labels of a member: deflection defaults to the length unit, as in the units argument. */
+export type UnitLabels = Pick<Units, "length" | "force"> & { deflection?: string };
 
 /** Unit text of each quantity shown in the pane. */
-export function quantityUnits(units: Units): { x: string; shear: string; moment: string; slope: string; deflection: string; intensity: string } {
+export function quantityUnits(units: UnitLabels): { x: string; shear: string; moment: string; slope: string; deflection: string; intensity: string } {
   const moment = units.force && units.length ? `${units.force}·${units.length}` : "";
   const intensity = units.force && units.length ? `${units.force}/${units.length}` : "";
-  return { x: units.length, shear: units.force, moment, slope: "rad", deflection: units.length, intensity };
+  return { x: units.length, shear: units.force, moment, slope: "rad", deflection: units.deflection ?? units.length, intensity };
 }
 
 /** "M (kN·m)" or just "M" when the unit is unknown. */

@@ -7,7 +7,7 @@ import { blockAt, blockText, parseBlock, type Block } from "./addresses";
 import { MEMBER_ARGUMENTS, type ArgSource } from "./formulaRefs";
 import { qualify, splitAddress, type CellInput, type ChartRequest, type SheetHost } from "./host";
 import type { ResolvedMember } from "./memberFromSheet";
-import { quantityUnits, withUnit, type Units } from "./units";
+import { quantityUnits, withUnit, type UnitLabels } from "./units";
 
 export const TABLE_COLUMNS = 5;
 
@@ -30,20 +30,22 @@ function quoted(text: string): string {
 }
 
 /**
- * The DIAGRAM formula for the member: its own argument texts (so the table stays live), the
- * combination shown in the pane when it differs from the formula's, trailing blanks dropped.
+ * The DIAGRAM formula for the member: every member argument of the source formula as its own
+ * text (so the table stays live and in the same units: spans, loads, supports, EI, combo and
+ * units), the combination shown in the pane when it differs from the formula's, trailing
+ * blanks dropped.
  */
 export function diagramFormula(member: ResolvedMember, points: number, combo: string | undefined): string {
   const text: Record<string, string> = {};
   for (const name of MEMBER_ARGUMENTS) text[name] = argText(member.sources[name]);
   if (combo !== undefined) text.combo = combo === "" ? "" : quoted(combo);
-  const args = [text.spans, text.loads, String(points), text.supports, text.EI, text.combo];
+  const args = [text.spans, text.loads, String(points), text.supports, text.EI, text.combo, text.units];
   while (args.length > 3 && args[args.length - 1] === "") args.pop();
   return `=SPAN.DIAGRAM(${args.join(",")})`;
 }
 
-/** Column headings with the user's units. */
-export function tableHeader(units: Units): string[] {
+/** Column headings in the units of the formula's units argument (none without one). */
+export function tableHeader(units: UnitLabels): string[] {
   const u = quantityUnits(units);
   return [withUnit("x", u.x), withUnit("V", u.shear), withUnit("M", u.moment), withUnit("slope", u.slope), withUnit("deflection", u.deflection)];
 }
@@ -97,7 +99,7 @@ export async function tableInPlace(host: SheetHost, plan: TablePlan): Promise<bo
 }
 
 /** Scatter-line charts of V, M and (with EI) deflection over the table's columns, right of the table. */
-export function chartRequests(plan: TablePlan, withDeflection: boolean, units: Units): ChartRequest[] {
+export function chartRequests(plan: TablePlan, withDeflection: boolean, units: UnitLabels): ChartRequest[] {
   const u = quantityUnits(units);
   const first = plan.block.from.row + 1;
   const last = plan.block.from.row + plan.rows;

@@ -4,6 +4,9 @@ import { deflection } from "../../functions/functions";
 import { readMember, sheetExtremes } from "../../src/sheet";
 import { findMember, solveMember, type ResolvedMember } from "../../src/pane/memberFromSheet";
 import { FakeHost } from "./support/fakeHost";
+import { NO_UNITS } from "../../src/pane/units";
+import { drawDiagrams } from "../../src/pane/draw/diagramSvg";
+import { readoutAt, readoutText } from "../../src/pane/draw/readout";
 
 /** A two-span member laid out on a "Beam" sheet, with a load table on "Load table". */
 function beamBook(): FakeHost {
@@ -19,6 +22,11 @@ function beamBook(): FakeHost {
       ["point", 12, 2.5, null, null, "L"],
       ["moment", 4, 7, null, null, "D"],
     ]);
+}
+
+/** The text content of every <text> element of an SVG, joined. */
+function texts(svg: string): string {
+  return [...svg.matchAll(/<text[^>]*>([^<]*)<\/text>/g)].map((m) => m[1]).join(" | ");
 }
 
 async function found(host: FakeHost, cell: string): Promise<ResolvedMember> {
@@ -48,7 +56,8 @@ describe("findMember", () => {
     const member = await found(host, "Beam!H3");
     expect(member.ranges).toEqual({ spans: "Beam!B3:C3", loads: "'Load table'!A2:F5", supports: "Beam!B4:D4", EI: "Beam!B5", combo: "Beam!B6" });
     expect(member.cases).toEqual(["D", "L"]);
-    expect(member.units).toEqual({ length: "m", force: "kN" });
+    // The labels "Spans (m)" and "EI (kN·m²)" beside the inputs are never read as units.
+    expect(member.units).toEqual(NO_UNITS);
     const solved = solveMember(member);
     if ("error" in solved) throw new Error(solved.error);
     expect(solved.comboText).toBe("1.2D+1.6L");
@@ -63,7 +72,7 @@ describe("findMember", () => {
       .put("US!A1", [["Spans (ft)", 20], ["EI", 14790000]])
       .putFormula("US!D1", '=SPAN.DEFLECTION(B1,"udl 1.5 D",10,,B2,,"length=ft, force=kip, EI=kip*in^2, deflection=ft")');
     const member = await found(host, "US!D1");
-    expect(member.units).toEqual({ length: "ft", force: "kip" });
+    expect(member.units).toEqual({ length: "ft", force: "kip", deflection: "ft", deflectionFactor: 1 });
     const solved = solveMember(member);
     if ("error" in solved) throw new Error(solved.error);
     const sheet = deflection([[20]], [["udl 1.5 D"]], [[10]], null as any, [[14790000]], null, [["length=ft, force=kip, EI=kip*in^2, deflection=ft"]]);
@@ -71,6 +80,49 @@ describe("findMember", () => {
     // Closed form 5wL^4/384EI in kip and inches, shown in feet (steel construction manual, simple beam, uniform load; from memory).
     expect(relDiff(valueAt(solved.solution, "deflection", 10), (5 * (1.5 / 12) * 240 ** 4) / (384 * 14790000) / 12)).toBeLessThan(1e-12);
     expect(relDiff(valueAt(solved.solution, "moment", 10), 1.5 * 400 / 8)).toBeLessThan(1e-12);
+  });
+
+  it("labels and draws in the units argument's units, deflection in its own unit, numbers as the sheet computes them", async () => {
+    const unitsText = "length=ft, force=kip, EI=kip*in^2, deflection=in";
+    const host = new FakeHost()
+      .put("US!A1", [["Spans (m)", 20, 12], ["EI (kN)", 14790000], ["Supports", "pin", "pin", "free"]])
+      .put("US!A5", [[unitsText]])
+      .putFormula("US!D1", "=SPAN.EXTREMES(B1:C1,\"udl 1.5 D; point 4 at 26 D\",B3:D3,B2,,A5)");
+    const member = await found(host, "US!D1");
+    // 1 ft = 12 in exactly (ANSI/NIST definition of the international foot).
+    expect(member.units).toMatchObject({ length: "ft", force: "kip", deflection: "in" });
+    expect(relDiff(member.units.deflectionFactor, 12)).toBeLessThan(1e-15);
+    const solved = solveMember(member);
+    if ("error" in solved) throw new Error(solved.error);
+    const drawing = drawDiagrams({ member: solved.member, solution: solved.solution, units: member.units, theme: "light", width: 400 });
+    const table = sheetExtremes([[20, 12]], "udl 1.5 D; point 4 at 26 D", [["pin", "pin", "free"]], [[14790000]], null, [[unitsText]]);
+    for (const panel of drawing.panels) {
+      const row = table.find((r) => r[0] === panel.quantity) as [string, number, number, number, number];
+      const max = panel.labels.find((l) => l.kind === "max")!;
+      const min = panel.labels.find((l) => l.kind === "min")!;
+      expect(relDiff(max.value, row[1])).toBeLessThan(1e-12);
+      expect(relDiff(max.x, row[2])).toBeLessThan(1e-12);
+      expect(relDiff(min.value, row[3])).toBeLessThan(1e-12);
+    }
+    expect(drawing.svg).toContain("Deflection, down + (in)");
+    expect(drawing.svg).toContain("Moment M, sagging + (kip·ft)");
+    expect(texts(drawing.svg)).not.toMatch(/\(m\)|kN/);
+    const at = readoutAt(solved.solution, 10, member.units.deflectionFactor);
+    const sheet = deflection([[20, 12]], [["udl 1.5 D; point 4 at 26 D"]], [[10]], [["pin", "pin", "free"]], [[14790000]], null, [[unitsText]]);
+    expect(relDiff(at.deflection!, sheet[0][0] as number)).toBeLessThan(1e-12);
+    expect(readoutText(at, member.units).find(([name]) => name === "deflection")?.[1]).toMatch(/ in$/);
+  });
+
+  it("without a units argument shows every quantity without units, whatever the labels say", async () => {
+    const host = beamBook().putFormula("Beam!H3", "=SPAN.EXTREMES(B3:C3,'Load table'!A2:F5,B4:D4,B5,B6)");
+    const member = await found(host, "Beam!H3");
+    const solved = solveMember(member);
+    if ("error" in solved) throw new Error(solved.error);
+    const drawing = drawDiagrams({ member: solved.member, solution: solved.solution, units: member.units, theme: "light", width: 400 });
+    expect(drawing.svg).toContain(">Moment M, sagging +<");
+    expect(texts(drawing.svg)).not.toMatch(/kN|\bm\b/);
+    // slope is in radians whatever the length unit; nothing else carries a unit
+    expect(readoutText(readoutAt(solved.solution, 2), member.units).map(([, text]) => text).join(" ").replace(/ rad\b/, "")).not.toMatch(/[a-z]/);
   });
 
   it("takes literals, array constants, names and spilled ranges", async () => {

@@ -123,7 +123,8 @@ describe("OfficeHost", () => {
     const lookup = await findMember(host, selection);
     if (!lookup.ok) throw new Error(lookup.message);
     expect(lookup.member.ranges.loads).toBe("Beam!A10:F12");
-    expect(lookup.member.units).toEqual({ length: "m", force: "kN" });
+    // No units argument: no units (labels beside the inputs are never read as units).
+    expect(lookup.member.units).toEqual({ length: "", force: "", deflection: "", deflectionFactor: 1 });
     const solved = solveMember(lookup.member);
     if ("error" in solved) throw new Error(solved.error);
     const moment = extremes(solved.solution, "moment");
@@ -155,7 +156,7 @@ describe("OfficeHost", () => {
     expect(outcome).toEqual({ written: true, address: "Beam!N3:R107" });
     expect(asked).toEqual([]);
     expect(calls.cleared).toEqual([]);
-    expect(ranges["N3:R4"].formulas).toEqual([["x (m)", "V (kN)", "M (kN·m)", "slope (rad)", "deflection (m)"], ["=SPAN.DIAGRAM(B3:C3,loadTable,101,B4:D4,B5,B6)", null, null, null, null]]);
+    expect(ranges["N3:R4"].formulas).toEqual([["x", "V", "M", "slope (rad)", "deflection"], ["=SPAN.DIAGRAM(B3:C3,loadTable,101,B4:D4,B5,B6)", null, null, null, null]]);
   });
 
   it("never writes over a cell holding anything unless the user agrees", async () => {

@@ -54,9 +54,12 @@ export function drawDiagrams(input: DrawInput, rows = diagram(input.solution, dr
   const parts: string[] = [];
   for (const box of layout.panels) {
     const q = QUANTITY[box.quantity];
-    const values = rows.map((row) => row[q]);
-    const peak = extremes(solution, q);
-    const tiny = solution.scales[q] * 1e-9;
+    // Deflection comes out in the length unit; shown in the formula's deflection unit.
+    const k = q === "deflection" ? input.units.deflectionFactor : 1;
+    const values = rows.map((row) => row[q] * k);
+    const raw = extremes(solution, q);
+    const peak = { ...raw, max: raw.max * k, min: raw.min * k };
+    const tiny = solution.scales[q] * k * 1e-9;
     const result = panelSvg({ box, xUnit: u.x, ...specs[box.quantity] }, layout, rows, values, peak, c, tiny);
     panels.push({ quantity: box.quantity, frame: result.frame, labels: result.labels });
     parts.push(result.svg);

@@ -1,6 +1,6 @@
 /** The values under the pointer: x from the pixel, then V, M, slope and deflection there. Pure. */
 import { valueAt, type Solution } from "../../core";
-import type { Units } from "../units";
+import type { UnitLabels } from "../units";
 import { quantityUnits } from "../units";
 import { withUnitValue } from "./format";
 import type { Layout } from "./layout";
@@ -19,19 +19,20 @@ export function xAtPixel(layout: Layout, px: number): number {
   return Math.min(hi, Math.max(lo, layout.x.invert(px)));
 }
 
-export function readoutAt(solution: Solution, x: number): Readout {
+/** The values at x; deflection multiplied by `deflectionFactor` into the deflection unit. */
+export function readoutAt(solution: Solution, x: number, deflectionFactor = 1): Readout {
   const stiff = solution.hasStiffness;
   return {
     x,
     shear: valueAt(solution, "shear", x),
     moment: valueAt(solution, "moment", x),
     slope: stiff ? valueAt(solution, "slope", x) : undefined,
-    deflection: stiff ? valueAt(solution, "deflection", x) : undefined,
+    deflection: stiff ? valueAt(solution, "deflection", x) * deflectionFactor : undefined,
   };
 }
 
 /** The readout as labelled pieces of text, in display order. */
-export function readoutText(readout: Readout, units: Units): [string, string][] {
+export function readoutText(readout: Readout, units: UnitLabels): [string, string][] {
   const u = quantityUnits(units);
   const out: [string, string][] = [
     ["x", withUnitValue(readout.x, u.x)],

@@ -24,7 +24,7 @@ function sampleMember(): Member {
   });
 }
 
-const units = { length: "m", force: "kN" };
+const units = { length: "m", force: "kN", deflection: "m", deflectionFactor: 1 };
 
 describe("drawDiagrams", () => {
   const member = sampleMember();

@@ -1,0 +1,55 @@
+/** What the pane writes: the DIAGRAM formula keeps every member argument of the source formula, units included. */
+import { sheetDiagram } from "../../src/sheet";
+import { findMember, type ResolvedMember } from "../../src/pane/memberFromSheet";
+import { chartRequests, diagramFormula, planTable, tableHeader } from "../../src/pane/writeBack";
+import { FakeHost } from "./support/fakeHost";
+
+async function memberAt(host: FakeHost, cell: string): Promise<ResolvedMember> {
+  host.select(cell);
+  const lookup = await findMember(host, await host.getSelection());
+  if (!lookup.ok) throw new Error(lookup.message);
+  return lookup.member;
+}
+
+const UNITS = '"length=ft, force=kip, EI=kip*in^2, deflection=in"';
+
+describe("diagramFormula", () => {
+  const cases: [string, string | undefined, string][] = [
+    ["=SPAN.MOMENT(B1:C1,A5:F9,4,B2:D2,B3,B4,B6)", undefined, "=SPAN.DIAGRAM(B1:C1,A5:F9,101,B2:D2,B3,B4,B6)"],
+    [`=SPAN.REACTIONS(B1:C1,A5:F9,B2:D2,B3,,${UNITS})`, undefined, `=SPAN.DIAGRAM(B1:C1,A5:F9,101,B2:D2,B3,,${UNITS})`],
+    [`=SPAN.EXTREMES(B1:C1,A5:F9,B2:D2,B3,"1.2D+1.6L",${UNITS})`, "D", `=SPAN.DIAGRAM(B1:C1,A5:F9,101,B2:D2,B3,"D",${UNITS})`],
+    [`=SPAN.SHEAR(B1:C1,A5:F9,3,,,,${UNITS})`, undefined, `=SPAN.DIAGRAM(B1:C1,A5:F9,101,,,,${UNITS})`],
+    ["=SPAN.DEFLECTION(B1:C1,A5:F9,3,B2:D2,B3)", "", "=SPAN.DIAGRAM(B1:C1,A5:F9,101,B2:D2,B3)"],
+    [`=SPAN.STRESS(B1:C1,A5:F9,H1:H4,B2:D2,B3,,${UNITS})`, undefined, `=SPAN.DIAGRAM(B1:C1,A5:F9,101,B2:D2,B3,,${UNITS})`],
+  ];
+  it.each(cases)("%s (combination %p) -> %s", async (formula, combo, expected) => {
+    const host = new FakeHost().put("A1", [[null]]).putFormula("H9", formula);
+    expect(diagramFormula(await memberAt(host, "H9"), 101, combo)).toBe(expected);
+  });
+});
+
+describe("the written table's headers are in the formula's units", () => {
+  it("labels x, V, M and deflection from the units argument, nothing without one", async () => {
+    const host = new FakeHost()
+      .put("A1", [["Spans (m)", 20, 12]])
+      .putFormula("H1", `=SPAN.EXTREMES(B1:C1,"udl 1.5",,14790000,,${UNITS})`)
+      .putFormula("H2", `=SPAN.EXTREMES(B1:C1,"udl 1.5",,14790000)`);
+    const withUnits = await memberAt(host, "H1");
+    expect(tableHeader(withUnits.units)).toEqual(["x (ft)", "V (kip)", "M (kip·ft)", "slope (rad)", "deflection (in)"]);
+    const plain = await memberAt(host, "H2");
+    expect(tableHeader(plain.units)).toEqual(["x", "V", "M", "slope (rad)", "deflection"]);
+    const plan = planTable(withUnits, "H1:L4", 101, 101, undefined);
+    expect(chartRequests(plan, true, withUnits.units).map((c) => c.yTitle)).toEqual(["V (kip)", "M (kip·ft)", "deflection (in)"]);
+  });
+
+  it("the DIAGRAM the pane writes computes in those units: deflection in inches, as SPAN.DIAGRAM with the same arguments", async () => {
+    const host = new FakeHost().putFormula("H1", `=SPAN.EXTREMES("20 12","udl 1.5",,14790000,,${UNITS})`);
+    const formula = diagramFormula(await memberAt(host, "H1"), 5, undefined);
+    expect(formula).toBe(`=SPAN.DIAGRAM("20 12","udl 1.5",5,,14790000,,${UNITS})`);
+    const withUnits = sheetDiagram("20 12", "udl 1.5", 5, null, 14790000, null, "length=ft, force=kip, EI=kip*in^2, deflection=in");
+    const without = sheetDiagram("20 12", "udl 1.5", 5, null, 14790000, null);
+    // Dropping the units would read EI in kip*ft^2 and give deflections in feet: 144 x 12 = 1728 times apart.
+    const interior = withUnits.findIndex((row) => Math.abs(row[4] as number) > 0);
+    expect((withUnits[interior][4] as number) / (without[interior][4] as number)).toBeCloseTo(1728, 9);
+  });
+});
