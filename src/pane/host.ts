@@ -49,6 +49,15 @@ export interface SheetHost {
   resolveName(name: string, scope: string): Promise<string | undefined>;
   /** The range a formula cell spills into (sheet-qualified), or undefined when it does not spill. */
   spillRange(address: string): Promise<string | undefined>;
+  /**
+   * The cells (sheet-qualified) of the formulas whose results spill into a cell of the range
+   * while the formula's own cell lies outside it: writing there would break that spill
+   * (#SPILL!), and clearing cannot remove spilled values. Optional while a host cannot tell.
+   * In the spreadsheet host, Range.getSpillParentOrNullObject answers this for one cell at a
+   * time ("Handle dynamic arrays and spilling using the Excel JavaScript API",
+   * learn.microsoft.com/office/dev/add-ins/excel/excel-add-ins-ranges-dynamic-arrays).
+   */
+  spillsInto?(address: string): Promise<string[]>;
   /** True when no cell of the range holds a value or a formula. */
   isEmpty(address: string): Promise<boolean>;
   /** Writes a block with its top-left cell at the range's top-left; the range must have the block's size. */

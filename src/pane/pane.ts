@@ -37,6 +37,7 @@ export const PANE_HTML = `
 <p class="caution">${escapeXml(CAUTION)}</p>
 <p class="source" aria-live="polite">Select a cell holding a SPAN formula.</p>
 <p class="message" role="status" hidden></p>
+<p class="outcome" role="status" hidden></p>
 <form class="pick" hidden>
   <p>Pick the member's input ranges (select a range in the sheet, then press its "use selection"):</p>
   ${MEMBER_ARGUMENTS.map((name) => `<label><span>${name}</span><input name="${name}" spellcheck="false" autocomplete="off"/><button type="button" data-use="${name}">use selection</button></label>`).join("")}
@@ -63,6 +64,9 @@ export class Pane {
   private solved: Solved | undefined;
   private drawing: Drawing | undefined;
   private pendingConfirm: ((ok: boolean) => void) | undefined;
+  /** The selected cell ("Sheet!A1") at the last refresh, and where the shown outcome was made. */
+  private selectedAt: string | undefined;
+  private outcomeAt: string | undefined;
   private readonly follow = debounce(() => void this.refresh(), 180);
   private unsubscribe: (() => void) | undefined;
   /** Milliseconds the last redraw took (solve, diagram, SVG, into the page). */
@@ -104,6 +108,18 @@ export class Pane {
     box.dataset.kind = kind;
   }
 
+  /**
+   * What a write or export did, or why it could not: kept on screen through refreshes until
+   * the user's next action (a pane button or control, or selecting another cell).
+   */
+  private outcome(text: string | undefined, kind: "info" | "error" = "info"): void {
+    const box = el<HTMLElement>(this.root, ".outcome");
+    box.hidden = !text;
+    box.textContent = text ?? "";
+    box.dataset.kind = kind;
+    this.outcomeAt = text ? this.selectedAt : undefined;
+  }
+
   /** Reads the selection and, when it holds a SPAN formula, finds, solves and draws its member. */
   async refresh(): Promise<void> {
     const generation = ++this.generation;
@@ -118,6 +134,8 @@ export class Pane {
     try {
       const selection = await this.host.getSelection();
       if (generation !== this.generation) return;
+      this.selectedAt = qualify(selection.sheet, selection.cell);
+      if (this.outcomeAt !== undefined && this.outcomeAt !== this.selectedAt) this.outcome(undefined);
       if (!selection.formula || !/SPAN/i.test(selection.formula)) {
         if (!this.resolved) el(this.root, ".source").textContent = `${selection.cell}: select a cell holding a SPAN formula.`;
         return;
@@ -263,7 +281,7 @@ export class Pane {
     const spill = await this.host.spillRange(qualify(member.sheet, member.cell)).catch(() => undefined);
     const plan = planTable(member, spill, rows, DEFAULT_POINTS, this.chosenCombo());
     const outcome = await writeTable(this.host, plan, (q) => this.ask(q));
-    this.message(outcome.written ? `Diagram table written to ${outcome.address}.` : outcome.reason);
+    this.outcome(outcome.written ? `Diagram table written to ${outcome.address}.` : outcome.reason, outcome.written ? "info" : "error");
     return outcome.written ? { address: outcome.address, rows } : undefined;
   }
 
@@ -279,12 +297,12 @@ export class Pane {
       ? ({ written: true, address: qualify(plan.sheet, blockText(plan.block)) } as const)
       : await writeTable(this.host, plan, (q) => this.ask(q));
     if (!outcome.written) {
-      this.message(`${outcome.reason}; the charts need the table`);
+      this.outcome(`${outcome.reason}; the charts need the table`, "error");
       return 0;
     }
     const requests = chartRequests(plan, solved.solution.hasStiffness, this.units());
     for (const request of requests) await this.host.addChart(request);
-    this.message(`Diagram table written to ${outcome.address}, ${requests.length} charts added.`);
+    this.outcome(`Diagram table written to ${outcome.address}, ${requests.length} charts added.`);
     return requests.length;
   }
 
@@ -297,16 +315,20 @@ export class Pane {
     download(new Blob([this.drawing.svg], { type: "image/svg+xml" }), `${this.fileStem()}.svg`);
   }
 
-  async exportPng(): Promise<void> {
+  /**
+   * PNG through a canvas. The SVG is loaded as a data: URL image, the one image source the
+   * page's policy allows besides its own files (img-src 'self' data:); a blob: image would be
+   * blocked. The file then downloads like the SVG.
+   */
+  async exportPng(): Promise<boolean> {
     const drawing = this.drawing;
-    if (!drawing) return;
-    const url = URL.createObjectURL(new Blob([drawing.svg], { type: "image/svg+xml" }));
+    if (!drawing) return false;
     try {
       const image = new Image();
       await new Promise<void>((resolve, reject) => {
         image.onload = () => resolve();
         image.onerror = () => reject(new Error("the drawing could not be turned into an image"));
-        image.src = url;
+        image.src = svgDataUrl(drawing.svg);
       });
       const canvas = document.createElement("canvas");
       canvas.width = drawing.layout.width * 2;
@@ -316,11 +338,13 @@ export class Pane {
       context.scale(2, 2);
       context.drawImage(image, 0, 0);
       const blob = await new Promise<Blob | null>((resolve) => canvas.toBlob(resolve, "image/png"));
-      if (blob) download(blob, `${this.fileStem()}.png`);
+      if (!blob) throw new Error("the browser made no PNG from the drawing");
+      download(blob, `${this.fileStem()}.png`);
+      this.outcome(`Saved ${this.fileStem()}.png.`);
+      return true;
     } catch (error) {
-      this.message(error instanceof Error ? error.message : String(error), "error");
-    } finally {
-      URL.revokeObjectURL(url);
+      this.outcome(`PNG not saved: ${error instanceof Error ? error.message : String(error)}`, "error");
+      return false;
     }
   }
 
@@ -347,6 +371,11 @@ export class Pane {
 
   private bind(): void {
     const root = this.root;
+    // Every action of the user in the pane replaces the last outcome.
+    root.addEventListener("click", (event) => {
+      if ((event.target as HTMLElement).closest?.("button:not(.confirm-yes):not(.confirm-no)")) this.outcome(undefined);
+    }, true);
+    root.addEventListener("change", () => this.outcome(undefined), true);
     root.querySelector(".write-table")?.addEventListener("click", () => void this.writeTable());
     root.querySelector(".insert-charts")?.addEventListener("click", () => void this.insertCharts());
     root.querySelector(".export-svg")?.addEventListener("click", () => this.exportSvg());
@@ -392,6 +421,11 @@ export class Pane {
     }, 120);
     if (typeof ResizeObserver !== "undefined") new ResizeObserver(() => resize()).observe(root);
   }
+}
+
+/** The SVG text as a data: URL (percent-encoded UTF-8). */
+export function svgDataUrl(svg: string): string {
+  return `data:image/svg+xml;charset=utf-8,${encodeURIComponent(svg)}`;
 }
 
 function download(blob: Blob, name: string): void {

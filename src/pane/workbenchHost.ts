@@ -7,7 +7,7 @@ import { blockText, parseBlock } from "./addresses";
 import { qualify, splitAddress, type CellInput, type CellValue, type ChartRequest, type Selection, type SheetHost } from "./host";
 
 /** The parts of the workbench interface the pane uses; optional ones are used when present. */
-export type WorkbenchLike = Pick<WorkbenchApi, "getSelection" | "getFormula" | "getValues" | "setValues" | "onSelectionChange" | "addChart"> & {
+export type WorkbenchLike = Pick<WorkbenchApi, "getSelection" | "getFormula" | "getValues" | "setValues" | "onSelectionChange" | "addChart" | "spillAnchor"> & {
   spillRange?(address: string): string | undefined;
   resolveName?(name: string, scope?: string): string | undefined;
 };
@@ -60,6 +60,26 @@ export class WorkbenchHost implements SheetHost {
     let rows = 1;
     while (rows < 20000 && spilled(anchor.row + rows, anchor.col)) rows++;
     return qualify(sheet, blockText({ from: anchor, to: { row: anchor.row + rows - 1, col: anchor.col + cols - 1 } }));
+  }
+
+  /** Asks the formula engine, cell by cell, which formula each cell's value spills from. */
+  async spillsInto(address: string): Promise<string[]> {
+    const { sheet = this.api.getSelection().sheet, address: range } = splitAddress(address);
+    const block = parseBlock(range);
+    const inside = (cell: string): boolean => {
+      const at = parseBlock(cell).from;
+      return at.row >= block.from.row && at.row <= block.to.row && at.col >= block.from.col && at.col <= block.to.col;
+    };
+    const found = new Set<string>();
+    for (let r = block.from.row; r <= block.to.row; r++) {
+      for (let c = block.from.col; c <= block.to.col; c++) {
+        const anchor = this.api.spillAnchor(qualify(sheet, blockText({ from: { row: r, col: c }, to: { row: r, col: c } })));
+        if (anchor === undefined) continue;
+        const { address: cell } = splitAddress(anchor);
+        if (!inside(cell)) found.add(qualify(sheet, cell));
+      }
+    }
+    return [...found];
   }
 
   async isEmpty(address: string): Promise<boolean> {

@@ -78,16 +78,38 @@ export function tableBlock(plan: TablePlan): { address: string; block: CellInput
 export type Confirm = (message: string) => Promise<boolean>;
 export type WriteOutcome = { written: true; address: string } | { written: false; reason: string };
 
-/** Writes the table when its cells are empty, or when `confirm` agrees to overwrite them. */
+/**
+ * Writes the table when its cells are empty, or when `confirm` agrees to overwrite them. A
+ * write never breaks another formula: when any target cell holds a value spilled from a
+ * formula outside the target (which a clear cannot remove, and a write would turn into
+ * #SPILL!), nothing is written and the reason names that formula's cell. (A host without
+ * spillsInto cannot tell; the check then rests on the read-back below.)
+ */
 export async function writeTable(host: SheetHost, plan: TablePlan, confirm: Confirm): Promise<WriteOutcome> {
   const target = qualify(plan.sheet, blockText(plan.block));
-  if (!(await host.isEmpty(target))) {
+  const empty = await host.isEmpty(target);
+  if (host.spillsInto) {
+    const spills = await host.spillsInto(target);
+    if (spills.length > 0) {
+      const list = spills.length > 3 ? `${spills.slice(0, 3).join(", ")} and ${spills.length - 3} more` : spills.join(", ");
+      return {
+        written: false,
+        reason: `nothing written: ${target} takes cells that the result of ${list} spills into; writing there would break ${spills.length > 1 ? "those formulas" : "that formula"} (#SPILL!). Move ${spills.length > 1 ? "them" : "it"}, or make room beside the member`,
+      };
+    }
+  }
+  if (!empty) {
     const ok = await confirm(`${target} already holds something. Write the diagram table over it?`);
     if (!ok) return { written: false, reason: `nothing written: ${target} holds something` };
     await host.clear(target);
   }
   const { address, block } = tableBlock(plan);
   await host.writeBlock(address, block);
+  const anchor = qualify(plan.sheet, blockText(blockAt({ row: plan.block.from.row + 1, col: plan.block.from.col }, 1, 1)));
+  const shown = await host.getValues(anchor).then((rows) => rows[0]?.[0], () => undefined);
+  if (typeof shown === "string" && /^#SPILL!/i.test(shown)) {
+    return { written: false, reason: `the diagram table at ${anchor} shows #SPILL!: something in ${target} blocks it` };
+  }
   return { written: true, address: target };
 }
 

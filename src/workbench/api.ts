@@ -35,6 +35,8 @@ export interface WorkbenchApi {
   addChart(spec: ChartSpec): string;
   /** The range a formula cell's result spills over ("B3:F12"), or undefined when it does not spill. */
   spillRange(address: string): string | undefined;
+  /** For a cell another formula's result spills into, that formula's cell ("B3", sheet-qualified when the address is); undefined otherwise. */
+  spillAnchor(address: string): string | undefined;
 }
 
 export function createApi(bench: Workbench, charts: HTMLElement): WorkbenchApi {
@@ -100,6 +102,12 @@ export function createApi(bench: Workbench, charts: HTMLElement): WorkbenchApi {
       if (!size) return undefined;
       const to = { row: ref.from.row + size.rows - 1, col: ref.from.col + size.cols - 1 };
       return `${ref.sheet ? `${ref.sheet}!` : ""}${rangeText(ref.from, to)}`;
+    },
+    spillAnchor(address) {
+      const ref = parseRange(address);
+      const anchor = bench.book.spillAnchorOf(bench.book.sheetId(sheetOf(ref)), ref.from.row, ref.from.col);
+      if (!anchor) return undefined;
+      return `${ref.sheet ? `${ref.sheet}!` : ""}${rangeText(anchor, anchor)}`;
     },
   };
   return api;

@@ -1,7 +1,8 @@
 /** What the pane writes: the DIAGRAM formula keeps every member argument of the source formula, units included. */
 import { sheetDiagram } from "../../src/sheet";
 import { findMember, type ResolvedMember } from "../../src/pane/memberFromSheet";
-import { chartRequests, diagramFormula, planTable, tableHeader } from "../../src/pane/writeBack";
+import { blockText } from "../../src/pane/addresses";
+import { chartRequests, diagramFormula, planTable, tableHeader, writeTable } from "../../src/pane/writeBack";
 import { FakeHost } from "./support/fakeHost";
 
 async function memberAt(host: FakeHost, cell: string): Promise<ResolvedMember> {
@@ -51,5 +52,55 @@ describe("the written table's headers are in the formula's units", () => {
     // Dropping the units would read EI in kip*ft^2 and give deflections in feet: 144 x 12 = 1728 times apart.
     const interior = withUnits.findIndex((row) => Math.abs(row[4] as number) > 0);
     expect((withUnits[interior][4] as number) / (without[interior][4] as number)).toBeCloseTo(1728, 9);
+  });
+});
+
+describe("writeTable never breaks another formula's spill", () => {
+  /** A member at H3 whose table goes to J3:N104, and a formula at I10 spilling right over J10:K10. */
+  async function setUp(): Promise<{ host: FakeHost; member: ResolvedMember }> {
+    const host = new FakeHost().putFormula("H3", '=SPAN.REACTIONS("6","udl 2")').putFormula("I10", "=SEQUENCE(1,3)", 1).put("J10", [[2, 3]]);
+    host.spilledFrom.set("Sheet1!J10", "Sheet1!I10").set("Sheet1!K10", "Sheet1!I10");
+    return { host, member: await memberAt(host, "H3") };
+  }
+
+  it("refuses, names the spilling formula's cell, and neither asks, clears nor writes", async () => {
+    const { host, member } = await setUp();
+    const plan = planTable(member, undefined, 101, 101, undefined);
+    expect(blockText(plan.block)).toBe("J3:N104");
+    const asked: string[] = [];
+    const outcome = await writeTable(host, plan, async (q) => (asked.push(q), true));
+    expect(outcome).toEqual({
+      written: false,
+      reason: "nothing written: Sheet1!J3:N104 takes cells that the result of Sheet1!I10 spills into; writing there would break that formula (#SPILL!). Move it, or make room beside the member",
+    });
+    expect(asked).toEqual([]);
+    expect(host.cleared).toEqual([]);
+    expect(host.writes).toEqual([]);
+  });
+
+  it("writes over a formula whose own cell is inside the target once the user agrees (clearing it removes its spill)", async () => {
+    const { host, member } = await setUp();
+    host.spilledFrom.clear();
+    host.putFormula("J10", "=SEQUENCE(1,2)", 1).put("K10", [[2]]);
+    host.spilledFrom.set("Sheet1!K10", "Sheet1!J10");
+    const plan = planTable(member, undefined, 101, 101, undefined);
+    const asked: string[] = [];
+    const outcome = await writeTable(host, plan, async (q) => (asked.push(q), true));
+    expect(outcome).toEqual({ written: true, address: "Sheet1!J3:N104" });
+    expect(asked).toEqual(["Sheet1!J3:N104 already holds something. Write the diagram table over it?"]);
+    expect(host.cleared).toEqual(["Sheet1!J3:N104"]);
+  });
+
+  it("reports a table that shows #SPILL! after the write instead of claiming success", async () => {
+    const { host, member } = await setUp();
+    host.spilledFrom.clear();
+    const plan = planTable(member, undefined, 101, 101, undefined);
+    const write = host.writeBlock.bind(host);
+    host.writeBlock = async (address, block) => {
+      await write(address, block);
+      host.putFormula("J4", String(block[1][0]), "#SPILL!");
+    };
+    const outcome = await writeTable(host, plan, async () => true);
+    expect(outcome).toEqual({ written: false, reason: "the diagram table at Sheet1!J4 shows #SPILL!: something in Sheet1!J3:N104 blocks it" });
   });
 });

@@ -9,6 +9,8 @@ export class FakeHost implements SheetHost {
   readonly sheets = new Map<string, Grid>();
   readonly names = new Map<string, string>();
   readonly spills = new Map<string, string>();
+  /** Cells ("Sheet1!C5") holding a value spilled from the formula cell given ("Sheet1!B5"). */
+  readonly spilledFrom = new Map<string, string>();
   readonly writes: { address: string; block: CellInput[][] }[] = [];
   readonly charts: ChartRequest[] = [];
   selection: Selection = { sheet: "Sheet1", cell: "A1", formula: undefined, value: null, range: "A1" };
@@ -67,6 +69,20 @@ export class FakeHost implements SheetHost {
   }
   async spillRange(address: string): Promise<string | undefined> {
     return this.spills.get(address);
+  }
+  async spillsInto(address: string): Promise<string[]> {
+    const { sheet = this.selection.sheet, address: range } = splitAddress(address);
+    const block = parseBlock(range);
+    const inside = (cell: string): boolean => {
+      const at = parseBlock(splitAddress(cell).address).from;
+      return at.row >= block.from.row && at.row <= block.to.row && at.col >= block.from.col && at.col <= block.to.col;
+    };
+    const out = new Set<string>();
+    for (const [cell, anchor] of this.spilledFrom) {
+      const where = splitAddress(cell);
+      if ((where.sheet ?? "Sheet1") === sheet && inside(cell) && !inside(anchor)) out.add(anchor);
+    }
+    return [...out];
   }
   async isEmpty(address: string): Promise<boolean> {
     return this.cells(address).every((row) => row.every((cell) => (cell.value === null || cell.value === "") && cell.formula === undefined));
