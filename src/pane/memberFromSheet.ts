@@ -11,6 +11,25 @@ import { NO_UNITS, paneUnits, type Units } from "./units";
 
 export type MemberSources = Record<MemberArgument, ArgSource>;
 
+/**
+ * What the selected cell computes, as the pane draws it: one member under one combination
+ * (REACTIONS, SHEAR, ..., DIAGRAM, the checks), an envelope over combinations (ENVELOPE,
+ * PEAKS), an influence line (INFLUENCE) or a moving load (MOVING).
+ */
+export type CellKind = "member" | "envelope" | "peaks" | "influence" | "moving";
+
+const KIND: Partial<Record<string, CellKind>> = { envelope: "envelope", peaks: "peaks", influence: "influence", moving: "moving" };
+
+/** The arguments besides the member's that the pane needs to draw a study cell. */
+export const STUDY_ARGUMENTS = ["combos", "pattern", "psi0", "effect", "axles", "spacings"] as const;
+export type StudyArgument = (typeof STUDY_ARGUMENTS)[number];
+
+/** What a formula cell computes, from its function; undefined when it has no member (SECTION, CONVERT, ...). */
+export function cellKindOf(call: SpanCall): CellKind | undefined {
+  if (!call.entry.arguments.some((a) => a.name === "spans")) return undefined;
+  return KIND[call.entry.exportName] ?? "member";
+}
+
 export interface ResolvedMember {
   /** Sheet and cell of the formula (or of the picked inputs). */
   sheet: string;
@@ -24,11 +43,16 @@ export interface ResolvedMember {
   /** Case labels of the load table, in order of first use. */
   cases: string[];
   units: Units;
+  /** What the cell computes ("member" for picked inputs). */
+  kind: CellKind;
+  /** The study arguments' values (combos, pattern, psi0, effect, axles, spacings) as the function receives them. */
+  study: Partial<Record<StudyArgument, unknown>>;
 }
 
 export type Lookup =
   | { ok: true; member: ResolvedMember }
   | { ok: false; reason: "no-formula"; message: string }
+  | { ok: false; reason: "no-member"; message: string }
   | { ok: false; reason: "unresolved"; message: string; unresolved: MemberArgument[]; call: SpanCall; sheet: string; cell: string }
   | { ok: false; reason: "invalid"; message: string };
 
@@ -94,6 +118,8 @@ function unitsOf(arg: unknown): Units {
 export async function resolveSources(host: SheetHost, sheet: string, cell: string, sources: MemberSources, call?: SpanCall): Promise<Lookup> {
   const ranges: Partial<Record<MemberArgument, string>> = {};
   const values: Partial<Record<MemberArgument, unknown>> = {};
+  const study: Partial<Record<StudyArgument, unknown>> = {};
+  const kind = call ? (cellKindOf(call) ?? "member") : "member";
   try {
     for (const name of MEMBER_ARGUMENTS) {
       const source = sources[name];
@@ -102,6 +128,12 @@ export async function resolveSources(host: SheetHost, sheet: string, cell: strin
         ranges[name] = range;
         values[name] = await host.getValues(range);
       } else values[name] = literalValue(source);
+    }
+    for (const name of STUDY_ARGUMENTS) {
+      const source = call?.args[name];
+      if (source === undefined) continue;
+      const range = await rangeOf(host, source, sheet);
+      study[name] = range !== undefined ? await host.getValues(range) : literalValue(source);
     }
   } catch (error) {
     return { ok: false, reason: "invalid", message: error instanceof Error ? error.message : String(error) };
@@ -115,7 +147,7 @@ export async function resolveSources(host: SheetHost, sheet: string, cell: strin
     units: values.units ?? null,
   };
   const units = unitsOf(args.units);
-  return { ok: true, member: { sheet, cell, call, sources, ranges, args, cases: casesOf(args.loads), units } };
+  return { ok: true, member: { sheet, cell, call, sources, ranges, args, cases: casesOf(args.loads), units, kind, study } };
 }
 
 /** The member behind a selection holding a SPAN formula. */
@@ -123,6 +155,9 @@ export async function findMember(host: SheetHost, selection: Selection): Promise
   const parsed = parseSpanFormula(selection.formula);
   if (!parsed.ok) return { ok: false, reason: "no-formula", message: `${selection.cell}: ${parsed.message}` };
   const call = parsed.call;
+  if (cellKindOf(call) === undefined) {
+    return { ok: false, reason: "no-member", message: `${selection.cell}: ${call.functionName} computes no member, so the pane has nothing to draw for this cell` };
+  }
   const unresolved = unresolvedArguments(call);
   if (unresolved.length > 0) {
     const list = unresolved.map((name) => `${name} (${call.args[name].text})`).join(", ");

@@ -7,7 +7,9 @@
 import { diagram } from "../core";
 import { debounce } from "./debounce";
 import { drawDiagrams, type Drawing } from "./draw/diagramSvg";
-import { escapeXml } from "./draw/format";
+import { escapeXml, formatValue } from "./draw/format";
+import { drawEnvelope, drawInfluence, drawMoving, type Figure } from "./draw/studySvg";
+import { computeStudy, envelopeAt, influenceAt, type Study } from "./study";
 import type { Theme } from "./draw/palette";
 import { readoutAt, readoutText, xAtPixel } from "./draw/readout";
 import { MEMBER_ARGUMENTS, classifyArgument, type MemberArgument } from "./formulaRefs";
@@ -15,7 +17,7 @@ import { qualify, type SheetHost } from "./host";
 import { findMember, resolveSources, solveMember, type MemberSources, type ResolvedMember, type Solved } from "./memberFromSheet";
 import { blockText } from "./addresses";
 import { chartRequests, planTable, tableInPlace, writeTable } from "./writeBack";
-import { DEFAULT_POINTS } from "../sheet";
+import { DEFAULT_POINTS, describeError } from "../sheet";
 import { NO_UNITS, type Units } from "./units";
 
 export const CAUTION = "Results are an aid to a qualified engineer, who checks them; local codes and licensed practice govern.";
@@ -52,6 +54,7 @@ export const PANE_HTML = `
 <div class="actions" hidden>
   <button type="button" class="write-table">Write diagram table</button>
   <button type="button" class="insert-charts">Insert charts</button>
+  <span class="study-note" hidden>The cell's own result is its table: the pane writes diagram tables for cells of one member under one combination.</span>
   <button type="button" class="export-svg">Export SVG</button>
   <button type="button" class="export-png">Export PNG</button>
 </div>
@@ -62,7 +65,8 @@ export class Pane {
   private generation = 0;
   private resolved: ResolvedMember | undefined;
   private solved: Solved | undefined;
-  private drawing: Drawing | undefined;
+  private drawing: Drawing | Figure | undefined;
+  private study: Study | undefined;
   private pendingConfirm: ((ok: boolean) => void) | undefined;
   /** The selected cell ("Sheet!A1") at the last refresh, and where the shown outcome was made. */
   private selectedAt: string | undefined;
@@ -97,7 +101,7 @@ export class Pane {
     return this.resolved;
   }
 
-  get currentDrawing(): Drawing | undefined {
+  get currentDrawing(): Drawing | Figure | undefined {
     return this.drawing;
   }
 
@@ -175,7 +179,7 @@ export class Pane {
     select.innerHTML = options.map(([value, text]) => `<option value="${escapeXml(value)}">${escapeXml(text)}</option>`).join("");
     select.value = FORMULA_COMBO;
     el<HTMLInputElement>(this.root, ".combo-text").value = formulaCombo;
-    label.hidden = member.cases.length === 0;
+    label.hidden = member.cases.length === 0 || member.kind !== "member";
   }
 
   /** The combination the user chose, or undefined for the formula's own. */
@@ -199,7 +203,10 @@ export class Pane {
   redraw(): number {
     const member = this.resolved;
     if (!member) return 0;
+    if (member.kind !== "member") return this.redrawStudy(member);
     const started = performance.now();
+    this.study = undefined;
+    this.showWrites(true);
     const solved = solveMember(member, this.chosenCombo());
     const figure = el<HTMLElement>(this.root, ".figure");
     if ("error" in solved) {
@@ -228,6 +235,67 @@ export class Pane {
     el(this.root, ".actions").hidden = false;
     this.lastDrawMs = performance.now() - started;
     return this.lastDrawMs;
+  }
+
+  private showWrites(member: boolean): void {
+    el(this.root, ".write-table").hidden = !member;
+    el(this.root, ".insert-charts").hidden = !member;
+    el(this.root, ".study-note").hidden = member;
+  }
+
+  /** Draws what an ENVELOPE, PEAKS, INFLUENCE or MOVING cell computes, or says why it cannot. */
+  private redrawStudy(member: ResolvedMember): number {
+    const started = performance.now();
+    this.solved = undefined;
+    this.showWrites(false);
+    const figure = el<HTMLElement>(this.root, ".figure");
+    const study = computeStudy(member);
+    if ("error" in study) {
+      this.study = undefined;
+      this.drawing = undefined;
+      figure.innerHTML = "";
+      el(this.root, ".actions").hidden = true;
+      this.message(`The pane cannot draw this cell: ${study.error}`, "error");
+      return performance.now() - started;
+    }
+    this.message(undefined);
+    this.study = study;
+    const width = Math.max(320, Math.floor(figure.clientWidth || this.root.clientWidth || 360));
+    const theme = this.themeOf();
+    this.root.dataset.theme = theme;
+    const name = member.call?.functionName ?? "";
+    if (study.kind === "envelope" || study.kind === "peaks") {
+      const subtitle = `${name}: upper (solid) and lower (dashed) bound over the cell's combinations`;
+      this.drawing = drawEnvelope({ member: study.member, curves: study.curves, peaks: study.peaks, theme, width, subtitle });
+    } else if (study.kind === "influence") {
+      this.drawing = drawInfluence({ member: study.member, effect: study.effect, xs: study.xs, values: study.values, theme, width, subtitle: `${name}: ${study.effect}` });
+    } else if (study.kind === "moving") {
+      this.drawing = drawMoving({ member: study.member, effect: study.effect, placements: study.placements, line: study.line, theme, width, subtitle: `${name}: the train's extremes of ${study.effect}` });
+    } else return performance.now() - started;
+    figure.innerHTML = this.drawing.svg;
+    el(this.root, ".actions").hidden = false;
+    this.lastDrawMs = performance.now() - started;
+    return this.lastDrawMs;
+  }
+
+  /** The readout of a study cell at x: the bounds and what governs them, or the ordinate. */
+  private studyReadout(study: Study, x: number): [string, string][] {
+    const member = this.resolved;
+    if (!member) return [];
+    try {
+      if (study.kind === "envelope" || study.kind === "peaks") {
+        const out: [string, string][] = [["x", formatValue(x)]];
+        for (const [q, max, maxBy, min, minBy] of envelopeAt(member, study.member, x)) {
+          const name = q === "shear" ? "V" : q === "moment" ? "M" : "deflection";
+          out.push([`${name} max`, `${formatValue(max)} (${maxBy})`], [`${name} min`, `${formatValue(min)} (${minBy})`]);
+        }
+        return out;
+      }
+      if (study.kind === "influence" || (study.kind === "moving" && study.line)) return [["x", formatValue(x)], ["ordinate", formatValue(influenceAt(member, x))]];
+      return [["x", formatValue(x)]];
+    } catch (error) {
+      return [["x", formatValue(x)], ["", describeError(error).message]];
+    }
   }
 
   private showPick(known: Partial<MemberSources>, unresolved: MemberArgument[]): void {
@@ -351,8 +419,9 @@ export class Pane {
   private pointer(event: PointerEvent): void {
     const drawing = this.drawing;
     const solved = this.solved;
+    const study = this.study;
     const svg = this.root.querySelector<SVGSVGElement>(".figure svg");
-    if (!drawing || !solved || !svg) return;
+    if (!drawing || (!solved && !study) || !svg) return;
     const box = svg.getBoundingClientRect();
     const px = ((event.clientX - box.left) * drawing.layout.width) / (box.width || drawing.layout.width);
     const cursor = svg.querySelector<SVGGElement>(".cursor");
@@ -365,7 +434,7 @@ export class Pane {
     line?.setAttribute("x1", String(drawing.layout.x(x)));
     line?.setAttribute("x2", String(drawing.layout.x(x)));
     cursor?.setAttribute("visibility", "visible");
-    const parts = readoutText(readoutAt(solved.solution, x, this.units().deflectionFactor), this.units());
+    const parts = solved ? readoutText(readoutAt(solved.solution, x, this.units().deflectionFactor), this.units()) : this.studyReadout(study!, x);
     el(this.root, ".readout").innerHTML = parts.map(([name, value]) => `<span data-name="${name}"><b>${escapeXml(name)}</b> ${escapeXml(value)}</span>`).join(" ");
   }
 

@@ -17,6 +17,6 @@ export { readUnit, readMemberUnits, memberInSI, memberInOwnUnits, UNIT_KEYS } fr
 export type { MemberUnits } from "./units";
 export { sheetSection, readShape, readDimensions, SECTION_ROWS } from "./section";
 export { sheetStress, sheetShearStress, sheetDeflectionCheck, sheetUtilisation, sheetConvert, sheetStiffness } from "./checks";
-export { sheetEnvelope, sheetPeaks, sheetInfluence, sheetMoving, sheetCombinationSet, readPattern } from "./studies";
+export { sheetEnvelope, sheetPeaks, sheetInfluence, sheetMoving, sheetCombinationSet, readPattern, readTrain } from "./studies";
 export { readCombinations, readPsi0 } from "./combinations";
 export { readEffect } from "./effect";

@@ -16,6 +16,7 @@ import {
   type Member,
   type PatternMode,
   type Quantity,
+  type Train,
 } from "../core";
 import { errorCodeOf, isBlank, isEmpty, readNumber, show } from "./cells";
 import { readCombinations, readPsi0 } from "./combinations";
@@ -148,6 +149,13 @@ function readNumberList(arg: unknown, name: string): number[] {
   return entries.slice(0, count).map((cell, i) => readNumber(cell, () => `${name} entry ${i + 1}`));
 }
 
+/** The train of SPAN.MOVING from its axles and spacings arguments (the pane places it with this too). */
+export function readTrain(axles: unknown, spacings: unknown): Train {
+  const loads = readNumberList(axles, "axles");
+  const gaps = isAllBlank(spacings ?? null) ? [] : readNumberList(spacings, "spacings");
+  return trainFrom(loads, gaps);
+}
+
 /** SPAN.MOVING: rows ["max" | "min", value, x of the first axle, direction, x where measured]. */
 export function sheetMoving(
   spans: unknown,
@@ -159,9 +167,7 @@ export function sheetMoving(
 ): (number | string)[][] {
   return guarded(() => {
     const member = memberOf(spans, null, supports, EI);
-    const loads = readNumberList(axles, "axles");
-    const gaps = isAllBlank(spacings ?? null) ? [] : readNumberList(spacings, "spacings");
-    const result = movingLoad(member, trainFrom(loads, gaps), readEffect(effect, true));
+    const result = movingLoad(member, readTrain(axles, spacings), readEffect(effect, true));
     return (["max", "min"] as const).map((label) => {
       const p = result[label];
       return [label, finite(p.value, `the ${label} value`), p.leadX, p.direction, p.x];

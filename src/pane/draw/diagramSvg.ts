@@ -6,8 +6,8 @@
 import { diagram, extremes, type DiagramRow, type Member, type Quantity, type Solution } from "../../core";
 import { quantityUnits, withUnit, type Units } from "../units";
 import { escapeXml, formatValue } from "./format";
-import { layoutFor, type Layout, type PanelQuantity } from "./layout";
-import { palette, type Theme } from "./palette";
+import { layoutFor, type DiagramQuantity, type Layout } from "./layout";
+import { palette, type Palette, type Theme } from "./palette";
 import { panelSvg, type PanelResult } from "./panel";
 import type { PeakLabel } from "./peaks";
 import { sketchSvg } from "./sketch";
@@ -25,7 +25,7 @@ export interface DrawInput {
 export interface Drawing {
   svg: string;
   layout: Layout;
-  panels: { quantity: PanelQuantity; frame: PanelResult["frame"]; labels: PeakLabel[] }[];
+  panels: { quantity: DiagramQuantity; frame: PanelResult["frame"]; labels: PeakLabel[] }[];
   rows: DiagramRow[];
 }
 
@@ -37,13 +37,24 @@ export function drawingPoints(spanCount: number, plotWidth = 360): number {
   return Math.min(801, Math.max(121, Math.round(plotWidth), 12 * spanCount + 1));
 }
 
-const QUANTITY: Record<PanelQuantity, Quantity> = { shear: "shear", moment: "moment", deflection: "deflection" };
+const QUANTITY: Record<DiagramQuantity, Quantity> = { shear: "shear", moment: "moment", deflection: "deflection" };
+
+/** The shared x axis under the panels: round-number ticks and the x title. */
+export function axisSvg(layout: Layout, xUnit: string, c: Palette): string {
+  const x = layout.x;
+  const ticks = x.ticks(Math.max(3, Math.floor((layout.right - layout.left) / 64)));
+  return (
+    `<g class="x-axis"><line x1="${layout.left}" x2="${layout.right}" y1="${layout.axisY}" y2="${layout.axisY}" stroke="${c.muted}"/>` +
+    ticks.map((t) => `<line x1="${x(t)}" x2="${x(t)}" y1="${layout.axisY}" y2="${layout.axisY + 4}" stroke="${c.muted}"/><text x="${x(t)}" y="${layout.axisY + 15}" text-anchor="middle" fill="${c.muted}" font-size="9.5">${escapeXml(formatValue(t))}</text>`).join("") +
+    `<text x="${layout.right}" y="${layout.axisY + 27}" text-anchor="end" fill="${c.muted}" font-size="10">${escapeXml(withUnit("x", xUnit))}</text></g>`
+  );
+}
 
 export function drawDiagrams(input: DrawInput, rows = diagram(input.solution, drawingPoints(input.member.spans.length, input.width - 70))): Drawing {
   const { member, solution } = input;
   const c = palette(input.theme);
   const u = quantityUnits(input.units);
-  const quantities: PanelQuantity[] = solution.hasStiffness ? ["shear", "moment", "deflection"] : ["shear", "moment"];
+  const quantities: DiagramQuantity[] = solution.hasStiffness ? ["shear", "moment", "deflection"] : ["shear", "moment"];
   const layout = layoutFor(input.width, solution.length, quantities);
   const specs = {
     shear: { title: withUnit("Shear V", u.shear), valueUnit: u.shear, colour: c.shear, fill: c.shearFill, downward: false },
@@ -53,26 +64,22 @@ export function drawDiagrams(input: DrawInput, rows = diagram(input.solution, dr
   const panels: Drawing["panels"] = [];
   const parts: string[] = [];
   for (const box of layout.panels) {
-    const q = QUANTITY[box.quantity];
+    const q = QUANTITY[box.quantity as DiagramQuantity];
     // Deflection comes out in the length unit; shown in the formula's deflection unit.
     const k = q === "deflection" ? input.units.deflectionFactor : 1;
     const values = rows.map((row) => row[q] * k);
     const raw = extremes(solution, q);
     const peak = { ...raw, max: raw.max * k, min: raw.min * k };
     const tiny = solution.scales[q] * k * 1e-9;
-    const result = panelSvg({ box, xUnit: u.x, ...specs[box.quantity] }, layout, rows, values, peak, c, tiny);
-    panels.push({ quantity: box.quantity, frame: result.frame, labels: result.labels });
+    const result = panelSvg({ box, xUnit: u.x, ...specs[box.quantity as DiagramQuantity] }, layout, rows, values, peak, c, tiny);
+    panels.push({ quantity: box.quantity as DiagramQuantity, frame: result.frame, labels: result.labels });
     parts.push(result.svg);
   }
   const x = layout.x;
   const nodeLines = solution.nodeX
     .map((nx) => `<line x1="${Math.round(x(nx) * 10) / 10}" x2="${Math.round(x(nx) * 10) / 10}" y1="${layout.sketch.bottom}" y2="${layout.axisY}" stroke="${c.grid}" stroke-dasharray="2 3"/>`)
     .join("");
-  const ticks = x.ticks(Math.max(3, Math.floor((layout.right - layout.left) / 64)));
-  const axis =
-    `<g class="x-axis"><line x1="${layout.left}" x2="${layout.right}" y1="${layout.axisY}" y2="${layout.axisY}" stroke="${c.muted}"/>` +
-    ticks.map((t) => `<line x1="${x(t)}" x2="${x(t)}" y1="${layout.axisY}" y2="${layout.axisY + 4}" stroke="${c.muted}"/><text x="${x(t)}" y="${layout.axisY + 15}" text-anchor="middle" fill="${c.muted}" font-size="9.5">${escapeXml(formatValue(t))}</text>`).join("") +
-    `<text x="${layout.right}" y="${layout.axisY + 27}" text-anchor="end" fill="${c.muted}" font-size="10">${escapeXml(withUnit("x", u.x))}</text></g>`;
+  const axis = axisSvg(layout, u.x, c);
   const title = `<text x="${layout.left}" y="12" fill="${c.muted}" font-size="10">${escapeXml(input.subtitle ?? "")}</text>`;
   const sketch = sketchSvg(member, layout, { force: u.shear, intensity: u.intensity, moment: u.moment }, c);
   const svg =

@@ -4,7 +4,9 @@
  */
 import { linearScale, type LinearScale } from "./scale";
 
-export type PanelQuantity = "shear" | "moment" | "deflection";
+/** The member diagrams; an influence line has a panel of its own kind. */
+export type DiagramQuantity = "shear" | "moment" | "deflection";
+export type PanelQuantity = DiagramQuantity | "influence";
 
 export interface PanelBox {
   quantity: PanelQuantity;
