@@ -4,7 +4,7 @@
  * builds the member with the sheet layer's own readers and solves it with the core.
  */
 import { solve, type Member, type Solution } from "../core";
-import { describeError, memberInOwnUnits, readLoads, readMember, readMemberUnits, type MemberArgs } from "../sheet";
+import { describeError, memberInOwnUnits, readLoads, readMember, readMemberUnits, sheetReactions, type MemberArgs } from "../sheet";
 import { MEMBER_ARGUMENTS, parseSpanFormula, unresolvedArguments, type ArgSource, type MemberArgument, type SpanCall } from "./formulaRefs";
 import { qualify, type Selection, type SheetHost } from "./host";
 import { NO_UNITS, paneUnits, type Units } from "./units";
@@ -184,11 +184,16 @@ export interface Solved {
 
 /**
  * Solves the member, with `combo` in place of the formula's combination when given
- * (`""` = every load at 1). Bad input gives `{ error }` with the sheet layer's message.
+ * (`""` = every load at 1). The arguments first go through SPAN.REACTIONS' own body
+ * (sheetReactions), so the combination box and every other input obey exactly the rules the
+ * worksheet functions obey (case labels, combinations, blanks, units); its refusal comes back
+ * as `{ error }` with the sheet layer's code and message. The member drawn is then read in the
+ * formula's own length and force units.
  */
 export function solveMember(resolved: ResolvedMember, combo?: string): Solved | { error: string } {
   try {
     const args: MemberArgs = combo === undefined ? resolved.args : { ...resolved.args, combo };
+    sheetReactions(args.spans, args.loads, args.supports, args.EI, args.combo, args.units ?? null);
     const units = readMemberUnits(args.units ?? null);
     const member = units === null ? readMember(args) : memberInOwnUnits(readMember(args), units);
     const solution = solve(member);

@@ -1,7 +1,7 @@
 import { extremes, solve, valueAt } from "../../src/core";
 import { relDiff } from "../../src/core/tolerance";
 import { deflection } from "../../functions/functions";
-import { readMember, sheetExtremes } from "../../src/sheet";
+import { readMember, sheetExtremes, sheetReactions } from "../../src/sheet";
 import { findMember, solveMember, type ResolvedMember } from "../../src/pane/memberFromSheet";
 import { FakeHost } from "./support/fakeHost";
 import { NO_UNITS } from "../../src/pane/units";
@@ -173,5 +173,39 @@ describe("findMember", () => {
     const solved = solveMember(await found(host, "Beam!H3"));
     expect(solved).toHaveProperty("error");
     if ("error" in solved) expect(solved.error).toMatch(/^#VALUE! supports/);
+  });
+});
+
+describe("the combination box follows the worksheet functions' rule", () => {
+  /** What SPAN.REACTIONS says for the member under a combination: its rows, or its code and message. */
+  function sheetSays(combo: string): { rows: number[][] } | { error: string } {
+    const [spans, loads, supports, EI] = directArgs();
+    try {
+      return { rows: sheetReactions(spans, loads, supports, EI, combo) };
+    } catch (error) {
+      return { error: `${(error as { code: string }).code} ${(error as Error).message}` };
+    }
+  }
+
+  const combos = ["1.2D+1.6L", "1.2D+1.6LL", "1.2d+1.6l", "1.6W", "1.2D+1.6L+0.5S", "1.2D+", "D", ""];
+  it.each(combos)("combination %p: the pane draws exactly when SPAN.REACTIONS answers, and otherwise shows its message", async (combo) => {
+    const member = await found(beamBook().putFormula("Beam!H3", "=SPAN.REACTIONS(B3:C3,'Load table'!A2:F5,B4:D4,B5,B6)"), "Beam!H3");
+    const solved = solveMember(member, combo);
+    const sheet = sheetSays(combo);
+    if ("error" in sheet) expect(solved).toEqual({ error: sheet.error });
+    else {
+      if ("error" in solved) throw new Error(solved.error);
+      solved.solution.reactions.forEach((r, i) => {
+        expect(r.force).toBeCloseTo(sheet.rows[i][1], 9);
+        expect(r.moment).toBeCloseTo(sheet.rows[i][2], 9);
+      });
+    }
+  });
+
+  it("a combination that cannot be read is refused with the sheet's message", async () => {
+    const member = await found(beamBook().putFormula("Beam!H3", "=SPAN.REACTIONS(B3:C3,'Load table'!A2:F5,B4:D4,B5,B6)"), "Beam!H3");
+    const solved = solveMember(member, "1.2D+");
+    expect(solved).toHaveProperty("error");
+    if ("error" in solved) expect(solved.error).toMatch(/^#VALUE! /);
   });
 });
