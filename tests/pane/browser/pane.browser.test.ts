@@ -106,16 +106,42 @@ describe("the pane on the workbench", () => {
     await page.selectOption("#pane .combo select", "(formula)");
   });
 
-  it("asks before writing over cells that hold anything, and writes nothing on cancel", async () => {
+  it("refuses a write into cells another formula spills into, names it, and never leaves #SPILL!", async () => {
+    // A25's table would go to G25:K126; the DIAGRAM at H3 spills over H3:L25, so H25:K25 are its cells.
     await clickCell("Member", "A25");
     await waitForSource("Member!A25");
-    const before = await workbench<unknown[][]>("return api.getValues('Member!G25:K40')");
+    const before = await workbench<unknown[][]>("return api.getValues('Member!A1:L130')");
+    await page.click("#pane .write-table");
+    await page.waitForFunction(() => /nothing written/.test(document.querySelector("#pane .outcome")?.textContent ?? ""));
+    expect(await page.textContent("#pane .outcome")).toMatch(/^nothing written: Member!G25:K\d+ takes cells that the result of Member!H3 spills into/);
+    expect(await page.isVisible("#pane .confirm")).toBe(false);
+    expect(await workbench("return api.getValues('Member!A1:L130')")).toEqual(before);
+    expect(JSON.stringify(before)).not.toContain("#SPILL!");
+    // The outcome stays through a refresh of the same selection.
+    await page.evaluate(() => (window as any).spanwisePane.refresh());
+    expect(await page.textContent("#pane .outcome")).toMatch(/^nothing written/);
+  });
+
+  it("asks before writing over plain values, writes nothing on cancel, and Write anyway leaves no #SPILL!", async () => {
+    await workbench("api.setValues('Member!A200:C200', [['=SPAN.MAXMOMENT(B3:C3,A10:F14,B4:D4,B5,B6)', null, null]]); api.setValues('Member!F205', [['note']])");
+    await clickCell("Member", "A200");
+    await waitForSource("Member!A200");
+    const before = await workbench<unknown[][]>("return api.getValues('Member!D200:H350')");
     await page.click("#pane .write-table");
     await page.waitForSelector("#pane .confirm:not([hidden])");
-    expect(await page.textContent("#pane .confirm p")).toMatch(/^Member!G25:K\d+ already holds something/);
+    expect(await page.textContent("#pane .confirm p")).toMatch(/^Member!D200:H\d+ already holds something/);
     await page.click("#pane .confirm-no");
-    await page.waitForFunction(() => /nothing written/.test(document.querySelector("#pane .message")?.textContent ?? ""));
-    expect(await workbench("return api.getValues('Member!G25:K40')")).toEqual(before);
+    await page.waitForFunction(() => /nothing written/.test(document.querySelector("#pane .outcome")?.textContent ?? ""));
+    expect(await workbench("return api.getValues('Member!D200:H350')")).toEqual(before);
+    await page.click("#pane .write-table");
+    await page.waitForSelector("#pane .confirm:not([hidden])");
+    await page.click("#pane .confirm-yes");
+    await page.waitForFunction(() => /Diagram table written to Member!D200:H\d+/.test(document.querySelector("#pane .outcome")?.textContent ?? ""));
+    expect(await workbench("return api.getFormula('Member!D201')")).toBe("=SPAN.DIAGRAM(B3:C3,A10:F14,101,B4:D4,B5,B6)");
+    expect(JSON.stringify(await workbench("return api.getValues('Member!A1:L350')"))).not.toContain("#SPILL!");
+    await page.evaluate(() => (window as any).spanwisePane.refresh());
+    await page.waitForFunction(() => Number((document.querySelector("#pane") as HTMLElement).dataset.refreshed ?? 0) > 0);
+    expect(await page.textContent("#pane .outcome")).toMatch(/^Diagram table written to Member!D200:H\d+/);
   });
 
   it("writes a live DIAGRAM table into empty cells and charts over its columns", async () => {
@@ -124,7 +150,7 @@ describe("the pane on the workbench", () => {
     await waitForSource("Member!A50");
     await page.waitForSelector(".figure svg g.peak");
     await page.click("#pane .insert-charts");
-    await page.waitForFunction(() => /charts added/.test(document.querySelector("#pane .message")?.textContent ?? ""));
+    await page.waitForFunction(() => /charts added/.test(document.querySelector("#pane .outcome")?.textContent ?? ""));
     expect(await page.isVisible("#pane .confirm")).toBe(false);
     const formula = await workbench<string>("return api.getFormula('Member!D51')");
     expect(formula).toBe("=SPAN.DIAGRAM(B3:C3,A10:F14,101,B4:D4,B5,B6)");
@@ -147,6 +173,101 @@ describe("the pane on the workbench", () => {
     await page.click("#pane .pick .draw-picked");
     await page.waitForSelector("#pane .pick", { state: "hidden" });
     expect(await page.$$eval(".figure svg g.panel", (p) => p.length)).toBe(3);
+  });
+
+  it("writes a member with a units argument as a table and as charts that give the numbers of direct calls", async () => {
+    const units = "length=ft, force=kip, EI=kip*in^2, deflection=in";
+    await workbench(`api.setValues('Member!A260:D263', [[20, 12, null, null], ['udl 1.5 D; point 4 at 26 D', null, null, null], ['pin', 'pin', 'free', null], [14790000, '${units}', null, null]])`);
+    await workbench("api.setFormula('Member!A265', '=SPAN.EXTREMES(A260:B260,A261,A262:C262,A263,,B263)')");
+    await clickCell("Member", "A265");
+    await waitForSource("Member!A265");
+    await page.waitForSelector(".figure svg g.peak");
+    // Labels in the formula's units, deflection in its own unit; peak values as SPAN.EXTREMES gives them.
+    expect(await page.textContent(".figure svg .panel[data-quantity='deflection'] .panel-title")).toBe("Deflection, down + (in)");
+    const extremes = await workbench<unknown[][]>("return api.getValues('Member!A265:E268')");
+    const shown = await peaks();
+    expect(shown.filter((p) => p.quantity === "deflection").length).toBeGreaterThan(0);
+    for (const label of shown) {
+      const row = extremes.find((r) => r[0] === label.quantity) as [string, number, number, number, number];
+      const [value, x] = label.kind === "max" ? [row[1], row[2]] : [row[3], row[4]];
+      expect(Math.abs(label.value - value)).toBeLessThanOrEqual(1e-12 * Math.max(Math.abs(row[1]), Math.abs(row[3])));
+      expect(Math.abs(label.x - x)).toBeLessThanOrEqual(1e-12 * 32);
+    }
+    await page.click("#pane .insert-charts");
+    await page.waitForFunction(() => /charts added/.test(document.querySelector("#pane .outcome")?.textContent ?? ""));
+    const formula = await workbench<string>("return api.getFormula('Member!G266')");
+    expect(formula).toBe("=SPAN.DIAGRAM(A260:B260,A261,101,A262:C262,A263,,B263)");
+    const header = await workbench<unknown[][]>("return api.getValues('Member!G265:K265')");
+    expect(header[0]).toEqual(["x (ft)", "V (kip)", "M (kip·ft)", "slope (rad)", "deflection (in)"]);
+    const spill = await workbench<string>("return api.spillRange('Member!G266')");
+    const last = Number(/:K(\d+)$/.exec(spill)![1]);
+    const table = await workbench<number[][]>(`return api.getValues('Member!G266:K${last}')`);
+    await workbench(`api.setFormula('Member!M266', '=SPAN.SHEAR(A260:B260,A261,G266:G${last},A262:C262,A263,,B263)'); api.setFormula('Member!N266', '=SPAN.MOMENT(A260:B260,A261,G266:G${last},A262:C262,A263,,B263)'); api.setFormula('Member!O266', '=SPAN.DEFLECTION(A260:B260,A261,G266:G${last},A262:C262,A263,,B263)')`);
+    const direct = await workbench<number[][]>(`return api.getValues('Member!M266:O${last}')`);
+    const repeated = (i: number): boolean => table[i - 1]?.[0] === table[i][0] || table[i + 1]?.[0] === table[i][0];
+    table.forEach((row, i) => {
+      const [v, m, d] = direct[i];
+      // Deflection and moment are continuous here (no couples); shear is compared away from its jumps,
+      // where the table lists both sides at one x and a single call gives one of them.
+      expect(Math.abs(row[4] - d)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(d)));
+      expect(Math.abs(row[2] - m)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(m)));
+      if (!repeated(i)) expect(Math.abs(row[1] - v)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(v)));
+    });
+    // Deflection in inches: 12 times the same member's deflection in feet.
+    await workbench(`api.setFormula('Member!P266', '=SPAN.DEFLECTION(A260:B260,A261,G266:G${last},A262:C262,A263,,"length=ft, force=kip, EI=kip*in^2")')`);
+    const feet = await workbench<number[][]>(`return api.getValues('Member!P266:P${last}')`);
+    table.forEach((row, i) => expect(Math.abs(row[4] - 12 * feet[i][0])).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(row[4]))));
+    expect(await bench.locator("#charts figure").count()).toBeGreaterThanOrEqual(3);
+  });
+
+  it("draws an ENVELOPE cell's upper and lower curves, with what governs under the pointer", async () => {
+    await workbench("api.setValues('Member!A300:B303', [[6, null], ['udl 1 D; udl 2 L', null], ['1.2D+1.6L', null], ['0.9D', null]])");
+    await workbench("api.setFormula('Member!D300', '=SPAN.ENVELOPE(A300,A301,3,A302:A303)')");
+    await clickCell("Member", "D300");
+    await waitForSource("Member!D300");
+    await page.waitForSelector(".figure svg[data-kind='envelope']");
+    expect(await page.$$eval(".figure svg .panel[data-quantity='moment'] path.curve", (p) => p.map((n) => n.getAttribute("class")))).toEqual(["curve upper", "curve lower"]);
+    expect(await page.textContent(".figure svg")).not.toContain("every load at factor 1");
+    expect(await page.isVisible("#pane .write-table")).toBe(false);
+    const box = await page.locator(".figure svg").boundingBox();
+    if (!box) throw new Error("no drawing");
+    const layout = await page.evaluate(() => { const l = (window as any).spanwisePane.currentDrawing.layout; return { left: l.left, right: l.right, width: l.width }; });
+    const px = layout.left + (layout.right - layout.left) * 0.5;
+    await page.mouse.move(box.x + (px * box.width) / layout.width, box.y + box.height * 0.5);
+    await page.waitForFunction(() => document.querySelector("#pane .readout span[data-name='M max']") !== null);
+    const readout = await page.textContent("#pane .readout span[data-name='M max']");
+    const x = Number((await page.textContent("#pane .readout span[data-name='x']"))!.replace(/^x\s*/, ""));
+    await workbench(`api.setFormula('Member!D310', '=SPAN.ENVELOPE(A300,A301,${x},A302:A303)')`);
+    const cell = await workbench<unknown[][]>("return api.getValues('Member!D310:H310')");
+    expect(readout).toContain(formatValue(cell[0][1] as number));
+    expect(readout).toContain(`(${cell[0][2]})`);
+  });
+
+  it("shows the sheet's message for a combination typed in the combination box", async () => {
+    await clickCell("Member", "A25");
+    await waitForSource("Member!A25");
+    await page.fill("#pane .combo-text", "1.2D+");
+    await page.dispatchEvent("#pane .combo-text", "change");
+    await page.waitForFunction(() => /^#VALUE! /.test(document.querySelector("#pane .message")?.textContent ?? ""));
+    await page.selectOption("#pane .combo select", "(formula)");
+  });
+
+  it("exports a PNG under the page's own policy (a data: image), as a download", async () => {
+    await clickCell("Member", "A25");
+    await waitForSource("Member!A25");
+    await page.waitForSelector(".figure svg g.peak");
+    const refused: string[] = [];
+    page.on("console", (m) => { if (/Content Security Policy|Refused to load/i.test(m.text())) refused.push(m.text()); });
+    const [download] = await Promise.all([page.waitForEvent("download"), page.click("#pane .export-png")]);
+    expect(download.suggestedFilename()).toBe("spanwise-a25.png");
+    const file = path.join(ARTIFACTS, "pane-export.png");
+    await download.saveAs(file);
+    const bytes = fs.readFileSync(file);
+    expect([...bytes.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+    expect(bytes.length).toBeGreaterThan(2000);
+    expect(refused).toEqual([]);
+    expect(await page.textContent("#pane .outcome")).toBe("Saved spanwise-a25.png.");
+    expect(await page.getAttribute("meta[http-equiv='Content-Security-Policy']", "content")).toContain("img-src 'self' data:;");
   });
 
   it("stays readable at 320 px and follows a dark theme", async () => {
