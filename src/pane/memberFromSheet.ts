@@ -21,7 +21,9 @@ export type CellKind = "member" | "envelope" | "peaks" | "influence" | "moving";
 const KIND: Partial<Record<string, CellKind>> = { envelope: "envelope", peaks: "peaks", influence: "influence", moving: "moving" };
 
 /** The arguments besides the member's that the pane needs to draw a study cell. */
-export const STUDY_ARGUMENTS = ["combos", "pattern", "psi0", "effect", "axles", "spacings"] as const;
+export const STUDY_ARGUMENTS = ["combos", "pattern", "psi0", "effect", "axles", "spacings", "quantity", "x", "positions"] as const;
+/** Study arguments the drawing does not need: an expression there is skipped, not refused. */
+const OPTIONAL_FOR_DRAWING: readonly string[] = ["x", "positions"];
 export type StudyArgument = (typeof STUDY_ARGUMENTS)[number];
 
 /** What a formula cell computes, from its function; undefined when it has no member (SECTION, CONVERT, ...). */
@@ -45,7 +47,7 @@ export interface ResolvedMember {
   units: Units;
   /** What the cell computes ("member" for picked inputs). */
   kind: CellKind;
-  /** The study arguments' values (combos, pattern, psi0, effect, axles, spacings) as the function receives them. */
+  /** The study arguments' values (combos, pattern, psi0, effect, axles, spacings, quantity, and x or positions when the pane can read them) as the function receives them. */
   study: Partial<Record<StudyArgument, unknown>>;
 }
 
@@ -131,7 +133,7 @@ export async function resolveSources(host: SheetHost, sheet: string, cell: strin
     }
     for (const name of STUDY_ARGUMENTS) {
       const source = call?.args[name];
-      if (source === undefined) continue;
+      if (source === undefined || (source.kind === "expression" && OPTIONAL_FOR_DRAWING.includes(name))) continue;
       const range = await rangeOf(host, source, sheet);
       study[name] = range !== undefined ? await host.getValues(range) : literalValue(source);
     }

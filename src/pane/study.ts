@@ -130,11 +130,25 @@ function placed(train: { loads: number[]; offsets: number[] }, leadX: number, di
   return out;
 }
 
+/**
+ * Evaluates the cell itself, with all its own arguments, when the pane could read them (its x
+ * or positions may be an expression the pane skips): a cell that shows an error is not drawn.
+ */
+function checkCell(resolved: ResolvedMember): void {
+  const a = resolved.args;
+  const s = resolved.study;
+  if (resolved.kind === "envelope" && s.x !== undefined) {
+    sheetEnvelope(a.spans, a.loads, s.x, s.combos ?? null, a.supports, a.EI, s.quantity ?? null, s.pattern ?? null, s.psi0 ?? null);
+  }
+  if (resolved.kind === "influence" && s.positions !== undefined) sheetInfluence(a.spans, s.effect ?? null, s.positions, a.supports, a.EI);
+}
+
 /** Computes what a study cell shows; bad input gives the sheet layer's code and message. */
 export function computeStudy(resolved: ResolvedMember): Study | { error: string } {
   try {
     const a = resolved.args;
     const s = resolved.study;
+    checkCell(resolved);
     switch (resolved.kind) {
       case "envelope":
       case "peaks": {

@@ -130,3 +130,17 @@ describe("INFLUENCE and MOVING cells", () => {
     expect(xs[xs.length - 1]).toBe(10);
   });
 });
+
+describe("a study cell that shows an error is not drawn", () => {
+  const cases: [string, RegExp][] = [
+    ['=SPAN.ENVELOPE(A1,A2,3,A3:A4,,,"deflection")', /^#VALUE! quantity deflection needs EI/],
+    ["=SPAN.ENVELOPE(A1,A2,9,A3:A4)", /^#(VALUE|N\/A)! .*9/],
+    ['=SPAN.INFLUENCE(10,"reaction 1",12)', /^#(VALUE|N\/A)! .*12/],
+  ];
+  it.each(cases)("%s", async (formula, message) => {
+    const host = book().putFormula("D9", formula);
+    const study = computeStudy(await memberAt(host, "D9"));
+    expect(study).toHaveProperty("error");
+    if ("error" in study) expect(study.error).toMatch(message);
+  });
+});
