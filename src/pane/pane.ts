@@ -4,7 +4,6 @@
  * pointer, and writes the table and charts into the sheet on request. All host access goes
  * through SheetHost; all drawing is the pure draw/ code.
  */
-import { diagram } from "../core";
 import { debounce } from "./debounce";
 import { drawDiagrams, type Drawing } from "./draw/diagramSvg";
 import { escapeXml, formatValue } from "./draw/format";
@@ -16,7 +15,7 @@ import { MEMBER_ARGUMENTS, classifyArgument, type MemberArgument } from "./formu
 import { qualify, type SheetHost } from "./host";
 import { findMember, resolveSources, solveMember, type MemberSources, type ResolvedMember, type Solved } from "./memberFromSheet";
 import { blockText } from "./addresses";
-import { chartRequests, planTable, tableInPlace, writeTable } from "./writeBack";
+import { chartRequests, diagramRows, planTable, tableInPlace, writeTable } from "./writeBack";
 import { DEFAULT_POINTS, describeError } from "../sheet";
 import { NO_UNITS, type Units } from "./units";
 
@@ -345,7 +344,7 @@ export class Pane {
     const member = this.resolved;
     const solved = this.solved;
     if (!member || !solved) return undefined;
-    const rows = diagram(solved.solution, DEFAULT_POINTS).length;
+    const rows = diagramRows(member, DEFAULT_POINTS, this.chosenCombo());
     const spill = await this.host.spillRange(qualify(member.sheet, member.cell)).catch(() => undefined);
     const plan = planTable(member, spill, rows, DEFAULT_POINTS, this.chosenCombo());
     const outcome = await writeTable(this.host, plan, (q) => this.ask(q));
@@ -358,7 +357,7 @@ export class Pane {
     const member = this.resolved;
     const solved = this.solved;
     if (!member || !solved) return 0;
-    const rows = diagram(solved.solution, DEFAULT_POINTS).length;
+    const rows = diagramRows(member, DEFAULT_POINTS, this.chosenCombo());
     const spill = await this.host.spillRange(qualify(member.sheet, member.cell)).catch(() => undefined);
     const plan = planTable(member, spill, rows, DEFAULT_POINTS, this.chosenCombo());
     const outcome = (await tableInPlace(this.host, plan))
@@ -445,8 +444,9 @@ export class Pane {
       if ((event.target as HTMLElement).closest?.("button:not(.confirm-yes):not(.confirm-no)")) this.outcome(undefined);
     }, true);
     root.addEventListener("change", () => this.outcome(undefined), true);
-    root.querySelector(".write-table")?.addEventListener("click", () => void this.writeTable());
-    root.querySelector(".insert-charts")?.addEventListener("click", () => void this.insertCharts());
+    const failed = (error: unknown): void => this.outcome(`nothing written: ${describeError(error).message}`, "error");
+    root.querySelector(".write-table")?.addEventListener("click", () => void this.writeTable().catch(failed));
+    root.querySelector(".insert-charts")?.addEventListener("click", () => void this.insertCharts().catch(failed));
     root.querySelector(".export-svg")?.addEventListener("click", () => this.exportSvg());
     root.querySelector(".export-png")?.addEventListener("click", () => void this.exportPng());
     root.querySelector(".confirm-yes")?.addEventListener("click", () => this.pendingConfirm?.(true));

@@ -8,6 +8,7 @@ import { MEMBER_ARGUMENTS, type ArgSource } from "./formulaRefs";
 import { qualify, splitAddress, type CellInput, type ChartRequest, type SheetHost } from "./host";
 import type { ResolvedMember } from "./memberFromSheet";
 import { quantityUnits, withUnit, type UnitLabels } from "./units";
+import { sheetDiagram } from "../sheet";
 
 export const TABLE_COLUMNS = 5;
 
@@ -42,6 +43,16 @@ export function diagramFormula(member: ResolvedMember, points: number, combo: st
   const args = [text.spans, text.loads, String(points), text.supports, text.EI, text.combo, text.units];
   while (args.length > 3 && args[args.length - 1] === "") args.pop();
   return `=SPAN.DIAGRAM(${args.join(",")})`;
+}
+
+/**
+ * The rows the written DIAGRAM will spill into: SPAN.DIAGRAM's own body with the member's
+ * arguments (the chosen combination in place of the formula's), so the cells checked before
+ * writing are exactly the cells the table will take.
+ */
+export function diagramRows(member: ResolvedMember, points: number, combo: string | undefined): number {
+  const a = member.args;
+  return sheetDiagram(a.spans, a.loads, points, a.supports, a.EI, combo === undefined ? a.combo : combo, a.units ?? null).length;
 }
 
 /** Column headings in the units of the formula's units argument (none without one). */

@@ -2,7 +2,7 @@
 import { sheetDiagram } from "../../src/sheet";
 import { findMember, type ResolvedMember } from "../../src/pane/memberFromSheet";
 import { blockText } from "../../src/pane/addresses";
-import { chartRequests, diagramFormula, planTable, tableHeader, writeTable } from "../../src/pane/writeBack";
+import { chartRequests, diagramFormula, diagramRows, planTable, tableHeader, writeTable } from "../../src/pane/writeBack";
 import { FakeHost } from "./support/fakeHost";
 
 async function memberAt(host: FakeHost, cell: string): Promise<ResolvedMember> {
@@ -102,5 +102,17 @@ describe("writeTable never breaks another formula's spill", () => {
     };
     const outcome = await writeTable(host, plan, async () => true);
     expect(outcome).toEqual({ written: false, reason: "the diagram table at Sheet1!J4 shows #SPILL!: something in Sheet1!J3:N104 blocks it" });
+  });
+});
+
+describe("diagramRows", () => {
+  it("is the number of rows SPAN.DIAGRAM spills for the member's own arguments, units and chosen combination included", async () => {
+    const host = new FakeHost().putFormula("H1", `=SPAN.EXTREMES("20 12","udl 1.5 D; point 4 at 26 L",,14790000,"D+L",${UNITS})`);
+    const member = await memberAt(host, "H1");
+    const units = "length=ft, force=kip, EI=kip*in^2, deflection=in";
+    expect(diagramRows(member, 101, undefined)).toBe(sheetDiagram("20 12", "udl 1.5 D; point 4 at 26 L", 101, null, 14790000, "D+L", units).length);
+    expect(diagramRows(member, 101, "D")).toBe(sheetDiagram("20 12", "udl 1.5 D; point 4 at 26 L", 101, null, 14790000, "D", units).length);
+    // The point load adds both sides of its jump: more rows than stations.
+    expect(diagramRows(member, 101, undefined)).toBeGreaterThan(101);
   });
 });
