@@ -152,6 +152,10 @@ export class Pane {
         return;
       }
       this.use(lookup.member);
+      const shows = typeof selection.value === "string" ? /^#(SPILL|CALC|REF|NAME\?|VALUE|N\/A)!?/i.exec(selection.value)?.[0] : undefined;
+      if (shows && el<HTMLElement>(this.root, ".message").hidden) {
+        this.message(`${selection.cell} shows ${selection.value}: what is drawn is what its arguments give, not what the cell shows now`, "error");
+      }
     } catch (error) {
       if (generation === this.generation) this.message(error instanceof Error ? error.message : String(error), "error");
     }

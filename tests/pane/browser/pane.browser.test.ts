@@ -177,14 +177,14 @@ describe("the pane on the workbench", () => {
 
   it("writes a member with a units argument as a table and as charts that give the numbers of direct calls", async () => {
     const units = "length=ft, force=kip, EI=kip*in^2, deflection=in";
-    await workbench(`api.setValues('Member!A260:D263', [[20, 12, null, null], ['udl 1.5 D; point 4 at 26 D', null, null, null], ['pin', 'pin', 'free', null], [14790000, '${units}', null, null]])`);
-    await workbench("api.setFormula('Member!A265', '=SPAN.EXTREMES(A260:B260,A261,A262:C262,A263,,B263)')");
-    await clickCell("Member", "A265");
-    await waitForSource("Member!A265");
+    await workbench(`api.setValues('Member!A400:D403', [[20, 12, null, null], ['udl 1.5 D; point 4 at 26 D', null, null, null], ['pin', 'pin', 'free', null], [14790000, '${units}', null, null]])`);
+    await workbench("api.setFormula('Member!A405', '=SPAN.EXTREMES(A400:B400,A401,A402:C402,A403,,B403)')");
+    await clickCell("Member", "A405");
+    await waitForSource("Member!A405");
     await page.waitForSelector(".figure svg g.peak");
     // Labels in the formula's units, deflection in its own unit; peak values as SPAN.EXTREMES gives them.
     expect(await page.textContent(".figure svg .panel[data-quantity='deflection'] .panel-title")).toBe("Deflection, down + (in)");
-    const extremes = await workbench<unknown[][]>("return api.getValues('Member!A265:E268')");
+    const extremes = await workbench<unknown[][]>("return api.getValues('Member!A405:E408')");
     const shown = await peaks();
     expect(shown.filter((p) => p.quantity === "deflection").length).toBeGreaterThan(0);
     for (const label of shown) {
@@ -195,15 +195,15 @@ describe("the pane on the workbench", () => {
     }
     await page.click("#pane .insert-charts");
     await page.waitForFunction(() => /charts added/.test(document.querySelector("#pane .outcome")?.textContent ?? ""));
-    const formula = await workbench<string>("return api.getFormula('Member!G266')");
-    expect(formula).toBe("=SPAN.DIAGRAM(A260:B260,A261,101,A262:C262,A263,,B263)");
-    const header = await workbench<unknown[][]>("return api.getValues('Member!G265:K265')");
+    const formula = await workbench<string>("return api.getFormula('Member!G406')");
+    expect(formula).toBe("=SPAN.DIAGRAM(A400:B400,A401,101,A402:C402,A403,,B403)");
+    const header = await workbench<unknown[][]>("return api.getValues('Member!G405:K405')");
     expect(header[0]).toEqual(["x (ft)", "V (kip)", "M (kip·ft)", "slope (rad)", "deflection (in)"]);
-    const spill = await workbench<string>("return api.spillRange('Member!G266')");
+    const spill = await workbench<string>("return api.spillRange('Member!G406')");
     const last = Number(/:K(\d+)$/.exec(spill)![1]);
-    const table = await workbench<number[][]>(`return api.getValues('Member!G266:K${last}')`);
-    await workbench(`api.setFormula('Member!M266', '=SPAN.SHEAR(A260:B260,A261,G266:G${last},A262:C262,A263,,B263)'); api.setFormula('Member!N266', '=SPAN.MOMENT(A260:B260,A261,G266:G${last},A262:C262,A263,,B263)'); api.setFormula('Member!O266', '=SPAN.DEFLECTION(A260:B260,A261,G266:G${last},A262:C262,A263,,B263)')`);
-    const direct = await workbench<number[][]>(`return api.getValues('Member!M266:O${last}')`);
+    const table = await workbench<number[][]>(`return api.getValues('Member!G406:K${last}')`);
+    await workbench(`api.setFormula('Member!M406', '=SPAN.SHEAR(A400:B400,A401,G406:G${last},A402:C402,A403,,B403)'); api.setFormula('Member!N406', '=SPAN.MOMENT(A400:B400,A401,G406:G${last},A402:C402,A403,,B403)'); api.setFormula('Member!O406', '=SPAN.DEFLECTION(A400:B400,A401,G406:G${last},A402:C402,A403,,B403)')`);
+    const direct = await workbench<number[][]>(`return api.getValues('Member!M406:O${last}')`);
     const repeated = (i: number): boolean => table[i - 1]?.[0] === table[i][0] || table[i + 1]?.[0] === table[i][0];
     table.forEach((row, i) => {
       const [v, m, d] = direct[i];
@@ -214,17 +214,17 @@ describe("the pane on the workbench", () => {
       if (!repeated(i)) expect(Math.abs(row[1] - v)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(v)));
     });
     // Deflection in inches: 12 times the same member's deflection in feet.
-    await workbench(`api.setFormula('Member!P266', '=SPAN.DEFLECTION(A260:B260,A261,G266:G${last},A262:C262,A263,,"length=ft, force=kip, EI=kip*in^2")')`);
-    const feet = await workbench<number[][]>(`return api.getValues('Member!P266:P${last}')`);
+    await workbench(`api.setFormula('Member!P406', '=SPAN.DEFLECTION(A400:B400,A401,G406:G${last},A402:C402,A403,,"length=ft, force=kip, EI=kip*in^2")')`);
+    const feet = await workbench<number[][]>(`return api.getValues('Member!P406:P${last}')`);
     table.forEach((row, i) => expect(Math.abs(row[4] - 12 * feet[i][0])).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(row[4]))));
     expect(await bench.locator("#charts figure").count()).toBeGreaterThanOrEqual(3);
   });
 
   it("draws an ENVELOPE cell's upper and lower curves, with what governs under the pointer", async () => {
-    await workbench("api.setValues('Member!A300:B303', [[6, null], ['udl 1 D; udl 2 L', null], ['1.2D+1.6L', null], ['0.9D', null]])");
-    await workbench("api.setFormula('Member!D300', '=SPAN.ENVELOPE(A300,A301,3,A302:A303)')");
-    await clickCell("Member", "D300");
-    await waitForSource("Member!D300");
+    await workbench("api.setValues('Member!A450:B453', [[6, null], ['udl 1 D; udl 2 L', null], ['1.2D+1.6L', null], ['0.9D', null]])");
+    await workbench("api.setFormula('Member!A455', '=SPAN.ENVELOPE(A450,A451,3,A452:A453)')");
+    await clickCell("Member", "A455");
+    await waitForSource("Member!A455");
     await page.waitForSelector(".figure svg[data-kind='envelope']");
     expect(await page.$$eval(".figure svg .panel[data-quantity='moment'] path.curve", (p) => p.map((n) => n.getAttribute("class")))).toEqual(["curve upper", "curve lower"]);
     expect(await page.textContent(".figure svg")).not.toContain("every load at factor 1");
@@ -237,10 +237,32 @@ describe("the pane on the workbench", () => {
     await page.waitForFunction(() => document.querySelector("#pane .readout span[data-name='M max']") !== null);
     const readout = await page.textContent("#pane .readout span[data-name='M max']");
     const x = Number((await page.textContent("#pane .readout span[data-name='x']"))!.replace(/^x\s*/, ""));
-    await workbench(`api.setFormula('Member!D310', '=SPAN.ENVELOPE(A300,A301,${x},A302:A303)')`);
-    const cell = await workbench<unknown[][]>("return api.getValues('Member!D310:H310')");
+    await workbench(`api.setFormula('Member!A460', '=SPAN.ENVELOPE(A450,A451,${x},A452:A453)')`);
+    const cell = await workbench<unknown[][]>("return api.getValues('Member!A460:E460')");
     expect(readout).toContain(formatValue(cell[0][1] as number));
     expect(readout).toContain(`(${cell[0][2]})`);
+  });
+
+  it("draws an INFLUENCE cell's influence line and a MOVING cell's train at its extremes", async () => {
+    await workbench("api.setFormula('Member!A470', '=SPAN.INFLUENCE(10,\"reaction 1\",{0,5,10})'); api.setFormula('Member!A472', '=SPAN.MOVING(10,{10,10},2,\"moment at 5\")')");
+    await clickCell("Member", "A470");
+    await waitForSource("Member!A470");
+    await page.waitForSelector(".figure svg[data-kind='influence'] path.curve.influence");
+    expect(await page.textContent(".figure svg .panel-title")).toBe("Influence line: reaction 1, unit load at x");
+    await clickCell("Member", "A472");
+    await waitForSource("Member!A472");
+    await page.waitForSelector(".figure svg[data-kind='moving']");
+    const placements = await page.$$eval(".figure svg g.placement", (g) => g.map((n) => ({ label: n.getAttribute("data-label"), value: Number(n.getAttribute("data-value")) })));
+    const cell = await workbench<unknown[][]>("return api.getValues('Member!A472:E473')");
+    expect(placements).toEqual(cell.map((row) => ({ label: row[0], value: row[1] })));
+  });
+
+  it("says so when the selected cell itself shows #SPILL!", async () => {
+    await workbench("api.setValues('Member!B481', [['in the way']]); api.setFormula('Member!A480', '=SPAN.REACTIONS(B3:C3,A10:F14,B4:D4,B5,B6)')");
+    expect((await workbench<any[][]>("return api.getValues('Member!A480')"))[0][0]).toMatchObject({ error: "#SPILL!" });
+    await clickCell("Member", "A480");
+    await waitForSource("Member!A480");
+    await page.waitForFunction(() => /^A480 shows #SPILL!/.test(document.querySelector("#pane .message")?.textContent ?? ""));
   });
 
   it("shows the sheet's message for a combination typed in the combination box", async () => {
