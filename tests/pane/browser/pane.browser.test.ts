@@ -241,6 +241,7 @@ describe("the pane on the workbench", () => {
     const cell = await workbench<unknown[][]>("return api.getValues('Member!A460:E460')");
     expect(readout).toContain(formatValue(cell[0][1] as number));
     expect(readout).toContain(`(${cell[0][2]})`);
+    await (await page.$("#pane"))?.screenshot({ path: path.join(ARTIFACTS, "pane-envelope.png") });
   });
 
   it("draws an INFLUENCE cell's influence line and a MOVING cell's train at its extremes", async () => {
