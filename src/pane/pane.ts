@@ -268,7 +268,7 @@ export class Pane {
     this.root.dataset.theme = theme;
     const name = member.call?.functionName ?? "";
     if (study.kind === "envelope" || study.kind === "peaks") {
-      const subtitle = `${name}: upper (solid) and lower (dashed) bound over the cell's combinations`;
+      const subtitle = `${name}: upper bound solid, lower dashed`;
       this.drawing = drawEnvelope({ member: study.member, curves: study.curves, peaks: study.peaks, theme, width, subtitle });
     } else if (study.kind === "influence") {
       this.drawing = drawInfluence({ member: study.member, effect: study.effect, xs: study.xs, values: study.values, theme, width, subtitle: `${name}: ${study.effect}` });

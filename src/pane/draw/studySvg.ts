@@ -186,9 +186,9 @@ export interface MovingInput {
 
 const SKETCH_STEP = 144;
 
-/** What a placement's caption says: the value, where the first axle stands, where it is measured. */
+/** What a placement's caption says, one line per ": " part: the value; where the first axle stands and where it is measured; how many axles are on the member when not all. */
 export function placementText(p: MovingPlacement, effect: string): string {
-  const on = p.axles.length === p.axleCount ? "" : `; ${p.axles.length} of ${p.axleCount} axles on the member`;
+  const on = p.axles.length === p.axleCount ? "" : `: ${p.axles.length} of ${p.axleCount} axles on the member`;
   return `${p.label} ${effect} = ${formatValue(p.value)}: first axle at x = ${formatValue(p.leadX)}, ${p.direction}, measured at x = ${formatValue(p.x)}${on}`;
 }
 
@@ -210,7 +210,10 @@ export function drawMoving(input: MovingInput): Figure {
     const sketch = { top: base.sketch.top + dy, bottom: base.sketch.bottom + dy, beamY: base.sketch.beamY + dy };
     parts.push(
       `<g class="placement" data-label="${p.label}" data-value="${p.value}" data-lead-x="${p.leadX}">` +
-        `<text class="placement-text" x="${layout.left}" y="${sketch.top + 8}" fill="${c.ink}" font-size="10">${escapeXml(placementText(p, input.effect))}</text>` +
+        placementText(p, input.effect)
+          .split(": ")
+          .map((line, k) => `<text class="placement-text" x="${layout.left}" y="${sketch.top + 8 + 12 * k}" fill="${c.ink}" font-size="10">${escapeXml(line)}</text>`)
+          .join("") +
         sketchSvg({ ...input.member, loads: p.axles }, { ...layout, sketch }, NO_UNITS, c) +
         `</g>`,
     );
