@@ -22,18 +22,37 @@ export interface DynamicEntries {
   a24: number;
 }
 
-/** sum over k of (sign^k) u^k / (4k + offset)!, summed until the terms vanish. */
-function series(u: number, sign: number, offset: number): number {
+/** Terms kept in the power series: for u = beta^4 <= 16 the 12th term is below 1e-19 of the first. */
+const TERMS = 12;
+
+/** Coefficients sign^k / (4k + offset)! of the series in u = beta^4, k = 0 .. TERMS - 1. */
+function coefficientsOf(sign: number, offset: number): Float64Array {
+  const c = new Float64Array(TERMS);
   let factorial = 1;
   for (let i = 2; i <= offset; i++) factorial *= i;
-  let term = 1 / factorial;
-  let sum = term;
-  for (let k = 1; k < 60; k++) {
+  c[0] = 1 / factorial;
+  for (let k = 1; k < TERMS; k++) {
     const n = 4 * k + offset;
-    term *= (sign * u) / ((n - 3) * (n - 2) * (n - 1) * n);
-    sum += term;
-    if (Math.abs(term) <= 1e-17 * Math.abs(sum)) break;
+    c[k] = (c[k - 1] * sign) / ((n - 3) * (n - 2) * (n - 1) * n);
   }
+  return c;
+}
+
+const SERIES = {
+  d: coefficientsOf(-4, 4),
+  f: coefficientsOf(-4, 1),
+  g: coefficientsOf(-4, 2),
+  gg: coefficientsOf(-4, 3),
+  h1: coefficientsOf(1, 1),
+  h2: coefficientsOf(1, 2),
+  h3: coefficientsOf(1, 3),
+  k0: coefficientsOf(1, 0),
+};
+
+/** sum over k of c[k] u^k (Horner). */
+function series(c: Float64Array, u: number): number {
+  let sum = 0;
+  for (let k = TERMS - 1; k >= 0; k--) sum = sum * u + c[k];
   return sum;
 }
 
@@ -49,13 +68,13 @@ export function dynamicEntries(beta: number): DynamicEntries {
   if (beta < SERIES_LIMIT) {
     const u = beta ** 4;
     // delta = 1 - cos cosh = beta^4 D; the numerators likewise carry their powers of beta.
-    const D = 4 * series(u, -4, 4); // sum over k >= 1 of -(-4)^k u^(k-1) / (4k)!
-    const F = series(u, -4, 1);
-    const G = series(u, -4, 2);
-    const H1 = series(u, 1, 1);
-    const H2 = series(u, 1, 2);
-    const Gg = series(u, -4, 3);
-    const H3 = series(u, 1, 3);
+    const D = 4 * series(SERIES.d, u); // sum over k >= 1 of -(-4)^k u^(k-1) / (4k)!
+    const F = series(SERIES.f, u);
+    const G = series(SERIES.g, u);
+    const H1 = series(SERIES.h1, u);
+    const H2 = series(SERIES.h2, u);
+    const Gg = series(SERIES.gg, u);
+    const H3 = series(SERIES.h3, u);
     return { a11: (2 * F) / D, a12: (2 * G) / D, a13: (-2 * H1) / D, a14: (2 * H2) / D, a22: (4 * Gg) / D, a24: (2 * H3) / D };
   }
   const c = Math.cos(beta);
@@ -110,5 +129,5 @@ export function clampedCount(beta: number): number {
  */
 export function krylov(lambda4: number, x: number): [number, number, number, number] {
   const u = lambda4 * x ** 4;
-  return [series(u, 1, 0), x * series(u, 1, 1), x * x * series(u, 1, 2), x ** 3 * series(u, 1, 3)];
+  return [series(SERIES.k0, u), x * series(SERIES.h1, u), x * x * series(SERIES.h2, u), x ** 3 * series(SERIES.h3, u)];
 }

@@ -18,6 +18,13 @@ import { validateMember } from "./validate";
 /** Most modes one call may ask for. */
 export const MAX_MODES = 50;
 
+/**
+ * Most elements x modes one call may take (elements: the spans cut at every mass boundary):
+ * each mode costs about fifty factorisations of the whole member, so this keeps a call to
+ * about a second on a slow machine (for example 2,000 spans and 50 modes, or 10,000 and 10).
+ */
+export const MAX_VIBRATION_WORK = 100_000;
+
 /** Bisection stops when the bracket is this fraction of the frequency (well inside 1e-12). */
 export const FREQUENCY_TOLERANCE = 2e-14;
 
@@ -257,6 +264,12 @@ function checkModeCount(count: number, name: string): void {
 }
 
 function search(mesh: Mesh, count: number): number[] {
+  const elements = mesh.elements.length;
+  if (elements * count > MAX_VIBRATION_WORK) {
+    throw invalid(
+      `modes: ${count} modes of a member of ${elements} elements (spans cut at mass boundaries) is more than one call takes (elements x modes at most ${MAX_VIBRATION_WORK}); ask for at most ${Math.max(1, Math.floor(MAX_VIBRATION_WORK / elements) - 1)} modes`,
+    );
+  }
   if (!mesh.elements.some((e) => e.mass > 0) && count > mesh.pointMasses.length) {
     throw invalid(`modes: the member's mass is all in point loads at ${mesh.pointMasses.length} free node(s), so it has only ${mesh.pointMasses.length} natural frequencies; ask for at most that many`);
   }

@@ -210,6 +210,36 @@ describe("mode shapes", () => {
     expect(Math.abs(modeValue(shape, 1.3) - modeValue(shape, 8.7) * Math.sign(modeValue(shape, 7.5)))).toBeLessThan(1e-9);
     expect(Math.abs(modeValue(shape, 5))).toBeLessThan(1e-9);
   });
+  test("mass orthogonality of the shapes (sum of m phi_i phi_j over the member, point masses included, is 0 for i != j) on a member with a hinge, a spring, per-span EI and mass and a point mass", () => {
+    const spans = [4, 5, 3];
+    const masses = [...spanMasses(spans, [1.2, 0.8, 2]), { kind: "point" as const, at: 6.5, mass: 3, row: 1 }];
+    const v: VibrationModel = { member: beam(spans, ["fixed", 2000, "hinge", "pin"], [], [3e4, 2e4, 4e4]), masses };
+    const shapes = [1, 2, 3, 4].map((k) => modeShape(v, k));
+    // Gauss-Legendre, 5 points per interval (exact for polynomials to degree 9), 100 intervals per span.
+    const gx = [-0.906179845938664, -0.538469310105683, 0, 0.538469310105683, 0.906179845938664];
+    const gw = [0.236926885056189, 0.478628670499366, 0.568888888888889, 0.478628670499366, 0.236926885056189];
+    const inner = (a: (typeof shapes)[number], b: (typeof shapes)[number]) => {
+      let sum = 3 * modeValue(a, 6.5) * modeValue(b, 6.5);
+      let x0 = 0;
+      spans.forEach((span, s) => {
+        const m = [1.2, 0.8, 2][s];
+        const h = span / 100;
+        for (let i = 0; i < 100; i++) {
+          const c = x0 + (i + 0.5) * h;
+          gx.forEach((t, q) => (sum += ((gw[q] * h) / 2) * m * modeValue(a, c + (t * h) / 2) * modeValue(b, c + (t * h) / 2)));
+        }
+        x0 += span;
+      });
+      return sum;
+    };
+    for (let i = 0; i < 4; i++) {
+      for (let j = i + 1; j < 4; j++) {
+        const cosine = inner(shapes[i], shapes[j]) / Math.sqrt(inner(shapes[i], shapes[i]) * inner(shapes[j], shapes[j]));
+        expect(Math.abs(cosine)).toBeLessThan(1e-9);
+      }
+    }
+  });
+
   test("x off the member is refused", () => {
     const shape = modeShape(model([L], ["pin", "pin"], EI, m), 1);
     expect(() => modeValue(shape, 6.5)).toThrow(/outside the member/);
@@ -233,6 +263,7 @@ describe("masses from loads and bad input", () => {
     ["no mass", () => naturalFrequencies(model([5], ["pin", "pin"], 1e4, 0), 1), /no mass/],
     ["a mechanism", () => naturalFrequencies(model([5], ["pin", "free"], 1e4, 1), 1), /./],
     ["too many modes", () => naturalFrequencies(model([5], ["pin", "pin"], 1e4, 1), MAX_MODES + 1), /modes: give a whole number of modes from 1 to 50/],
+    ["too much work for one call", () => naturalFrequencies(model(Array.from({ length: 2001 }, () => 1), Array.from({ length: 2002 }, () => "pin" as const), 1e4, 1), 50), /modes: 50 modes of a member of 2001 elements .* ask for at most 48 modes/],
     ["a negative mass", () => naturalFrequencies(model([5], ["pin", "pin"], 1e4, 0, [{ kind: "distributed", from: 0, to: 5, perLength: -1, row: 2 }]), 1), /negative/],
   ])("%s", (_name, call, message) => {
     expect(call).toThrow(message);
