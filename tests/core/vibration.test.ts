@@ -16,7 +16,7 @@ import { massesFromLoads, MAX_MODES, modeShape, modeValue, naturalFrequencies, s
 import { feFrequencies } from "./kit/beamEigen";
 import { beam, point, udl, couple, linear, type SupportWord } from "./kit/members";
 
-const TOL = 1e-11;
+const TOL = 1e-12;
 
 function root(f: (b: number) => number, lo: number, hi: number): number {
   let a = lo;
