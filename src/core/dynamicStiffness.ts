@@ -94,19 +94,24 @@ export function dynamicEntries(beta: number): DynamicEntries {
   };
 }
 
-/** The 4 x 4 dynamic stiffness matrix (row-major) for the DOFs (w1, theta1, w2, theta2). */
-export function elementMatrix(ei: number, length: number, beta: number): number[] {
+const MATRIX = new Float64Array(16);
+
+/**
+ * The 4 x 4 dynamic stiffness matrix (row-major) for the DOFs (w1, theta1, w2, theta2). The
+ * array is reused by the next call: copy it to keep it.
+ */
+export function elementMatrix(ei: number, length: number, beta: number): Float64Array {
   const { a11, a12, a13, a14, a22, a24 } = dynamicEntries(beta);
   const L = length;
   const k3 = ei / (L * L * L);
   const k2 = k3 * L;
   const k1 = k2 * L;
-  return [
-    a11 * k3, a12 * k2, a13 * k3, a14 * k2,
-    a12 * k2, a22 * k1, -a14 * k2, a24 * k1,
-    a13 * k3, -a14 * k2, a11 * k3, -a12 * k2,
-    a14 * k2, a24 * k1, -a12 * k2, a22 * k1,
-  ];
+  const m = MATRIX;
+  m[0] = a11 * k3; m[1] = a12 * k2; m[2] = a13 * k3; m[3] = a14 * k2;
+  m[4] = a12 * k2; m[5] = a22 * k1; m[6] = -a14 * k2; m[7] = a24 * k1;
+  m[8] = a13 * k3; m[9] = -a14 * k2; m[10] = a11 * k3; m[11] = -a12 * k2;
+  m[12] = a14 * k2; m[13] = a24 * k1; m[14] = -a12 * k2; m[15] = a22 * k1;
+  return m;
 }
 
 /**

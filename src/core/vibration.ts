@@ -20,8 +20,8 @@ export const MAX_MODES = 50;
 
 /**
  * Most elements x modes one call may take (elements: the spans cut at every mass boundary):
- * each mode costs about fifty factorisations of the whole member, so this keeps a call to
- * about a second on a slow machine (for example 2,000 spans and 50 modes, or 10,000 and 10).
+ * each mode costs about fifty factorisations of the whole member (2,000 spans and 50 modes, or
+ * 10,000 and 10, took under 3 s in tests/bench/vibration.bench.ts on a heavily loaded machine).
  */
 export const MAX_VIBRATION_WORK = 100_000;
 
@@ -195,25 +195,34 @@ function betaOf(element: Element, omega: number): number {
   return element.mass > 0 ? element.length * Math.sqrt(omega * Math.sqrt(element.mass / element.ei)) : 0;
 }
 
-/** The assembled dynamic stiffness at omega, as a symmetric band (lower part, row-major). */
-function assembleBand(mesh: Mesh, omega: number, elements: Element[]): Float64Array {
+/**
+ * The assembled dynamic stiffness at omega, as a symmetric band (lower part, row-major), and
+ * the elements' clamped-frequency count J0 at omega (from the same beta).
+ */
+function assembleBand(mesh: Mesh, omega: number, elements: Element[]): { band: Float64Array; j0: number } {
   const b = mesh.bandwidth;
   const w = b + 1;
   const band = new Float64Array(mesh.size * w);
+  let j0 = 0;
   for (const element of elements) {
-    const k = elementMatrix(element.ei, element.length, betaOf(element, omega));
+    const beta = betaOf(element, omega);
+    if (beta > 0) j0 += clampedCount(beta);
     const d = element.dofs;
+    if (d[0] < 0 && d[1] < 0 && d[2] < 0 && d[3] < 0) continue;
+    const k = elementMatrix(element.ei, element.length, beta);
     for (let r = 0; r < 4; r++) {
-      if (d[r] < 0) continue;
+      const dr = d[r];
+      if (dr < 0) continue;
       for (let c = 0; c < 4; c++) {
-        if (d[c] < 0 || d[c] > d[r]) continue;
-        band[d[r] * w + (d[r] - d[c])] += k[r * 4 + c];
+        const dc = d[c];
+        if (dc < 0 || dc > dr) continue;
+        band[dr * w + (dr - dc)] += k[r * 4 + c];
       }
     }
   }
   for (const s of mesh.springs) band[s.dof * w] += s.stiffness;
   for (const p of mesh.pointMasses) band[p.dof * w] -= omega * omega * p.mass;
-  return band;
+  return { band, j0 };
 }
 
 /** Negative pivots of the symmetric band's LDL^T factorisation (its count of negative eigenvalues). */
@@ -240,10 +249,8 @@ function negativePivots(band: Float64Array, n: number, b: number): number {
 
 /** The Wittrick-Williams count: natural frequencies strictly below omega. */
 function countBelow(mesh: Mesh, omega: number): number {
-  let j0 = 0;
-  for (const element of mesh.elements) if (element.mass > 0) j0 += clampedCount(betaOf(element, omega));
-  if (mesh.size === 0) return j0;
-  return j0 + negativePivots(assembleBand(mesh, omega, mesh.elements), mesh.size, mesh.bandwidth);
+  const { band, j0 } = assembleBand(mesh, omega, mesh.elements);
+  return mesh.size === 0 ? j0 : j0 + negativePivots(band, mesh.size, mesh.bandwidth);
 }
 
 function prepare(model: VibrationModel): Mesh {
@@ -500,7 +507,7 @@ export function modeShape(model: VibrationModel, mode: number): ModeShape {
     throw invalid(`mode ${mode}: its frequency equals a neighbouring mode's to 8 digits (a repeated frequency), so its shape is not unique`);
   }
   const fine = refined(mesh, omega);
-  const band = assembleBand(fine, omega, fine.elements);
+  const { band } = assembleBand(fine, omega, fine.elements);
   let d: Float64Array = new Float64Array(fine.size);
   let seed = 12345;
   for (let i = 0; i < d.length; i++) {
