@@ -234,6 +234,7 @@ function negativePivots(band: Float64Array, n: number, b: number): number {
   const tiny = scale * 1e-300 || 1e-300;
   for (let j = 0; j < n; j++) {
     let d = band[j * w];
+    if (!Number.isFinite(d)) throw tooFar();
     if (d === 0) d = tiny;
     if (d < 0) negatives++;
     const last = Math.min(n - 1, j + b);
@@ -247,10 +248,16 @@ function negativePivots(band: Float64Array, n: number, b: number): number {
   return negatives;
 }
 
+function tooFar() {
+  return invalid("the natural frequencies cannot be computed reliably with these numbers (check the units of spans, EI, springs and mass)");
+}
+
 /** The Wittrick-Williams count: natural frequencies strictly below omega. */
 function countBelow(mesh: Mesh, omega: number): number {
   const { band, j0 } = assembleBand(mesh, omega, mesh.elements);
-  return mesh.size === 0 ? j0 : j0 + negativePivots(band, mesh.size, mesh.bandwidth);
+  const count = mesh.size === 0 ? j0 : j0 + negativePivots(band, mesh.size, mesh.bandwidth);
+  if (!Number.isSafeInteger(count)) throw tooFar();
+  return count;
 }
 
 function prepare(model: VibrationModel): Mesh {
@@ -259,6 +266,9 @@ function prepare(model: VibrationModel): Mesh {
   if (member.stiffness === null) throw unavailable("EI: natural frequencies need the flexural stiffness; give EI for the member or each span");
   checkStability(member);
   const mesh = buildMesh(model);
+  for (const e of mesh.elements) {
+    if (!(Number.isFinite(Math.sqrt(e.mass / e.ei)) && Number.isFinite(e.ei / e.length ** 3) && e.ei / e.length ** 3 > 0)) throw tooFar();
+  }
   const massive = mesh.elements.some((e) => e.mass > 0) || mesh.pointMasses.length > 0;
   if (!massive) throw invalid("mass: the member carries no mass that can move; give a mass per length or loads that give one");
   return mesh;
@@ -292,7 +302,7 @@ function search(mesh: Mesh, count: number): number[] {
   let hi = reference;
   for (let i = 0; sample(hi) < count; i++) {
     hi *= 2;
-    if (!Number.isFinite(hi) || i > 2200) throw invalid("the natural frequencies are too large or too small to compute reliably (check the units of spans, EI and mass)");
+    if (!Number.isFinite(hi) || i > 2200) throw tooFar();
   }
   const out: number[] = [];
   for (let k = 1; k <= count; k++) {
@@ -308,7 +318,9 @@ function search(mesh: Mesh, count: number): number[] {
       if (sample(mid) >= k) up = mid;
       else lo = mid;
     }
-    out.push(0.5 * (lo + up));
+    const omega = 0.5 * (lo + up);
+    if (!(Number.isFinite(omega) && omega > 0 && up - lo <= 1e-12 * up)) throw tooFar();
+    out.push(omega);
   }
   return out;
 }

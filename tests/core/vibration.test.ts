@@ -92,6 +92,14 @@ describe("single spans: omega_n = (beta_n L)^2 sqrt(EI/(m L^4))", () => {
   });
 });
 
+describe("scale: one member in N, m, kg and in N, mm, t (mass per length in N s^2/mm^2 = t/mm)", () => {
+  test("gives one frequency", () => {
+    const si = naturalFrequencies(model([6, 4], ["fixed", "pin", 5e6], [2e7, 1.2e7], [150, 90]), 3);
+    const mm = naturalFrequencies(model([6000, 4000], ["fixed", "pin", 5e3], [2e13, 1.2e13], [150e-6, 90e-6]), 3);
+    mm.forEach((w, i) => expect(rel(w, si[i])).toBeLessThan(1e-12));
+  });
+});
+
 describe("continuous members", () => {
   const EI = 1.7e5;
   const m = 2.4;
@@ -264,6 +272,8 @@ describe("masses from loads and bad input", () => {
     ["a mechanism", () => naturalFrequencies(model([5], ["pin", "free"], 1e4, 1), 1), /./],
     ["too many modes", () => naturalFrequencies(model([5], ["pin", "pin"], 1e4, 1), MAX_MODES + 1), /modes: give a whole number of modes from 1 to 50/],
     ["too much work for one call", () => naturalFrequencies(model(Array.from({ length: 2001 }, () => 1), Array.from({ length: 2002 }, () => "pin" as const), 1e4, 1), 50), /modes: 50 modes of a member of 2001 elements .* ask for at most 48 modes/],
+    ["EI and mass beyond double precision", () => naturalFrequencies(model([5], ["pin", "pin"], 1e-300, 1e300), 1), /cannot be computed reliably/],
+    ["a huge EI and a tiny mass", () => naturalFrequencies(model([5], ["pin", "pin"], 1e300, 1e-300), 3), /cannot be computed reliably/],
     ["a negative mass", () => naturalFrequencies(model([5], ["pin", "pin"], 1e4, 0, [{ kind: "distributed", from: 0, to: 5, perLength: -1, row: 2 }]), 1), /negative/],
   ])("%s", (_name, call, message) => {
     expect(call).toThrow(message);
