@@ -382,7 +382,7 @@ export function caseReactions(spans: any[][], loads: any[][], supports?: any[][]
  * @param spans Span lengths left to right: a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param EI Flexural stiffness, one value or one per span (force x length^2, or the EI unit of units). Required.
  * @param mass Mass per length, one value or one per span, in force x s^2 / length^2 (t/m with kN and m, kg/m with N and m), so sqrt(EI/(m L^4)) is 1/s. Blank = 0 (mass from loads).
- * @param [modes] How many frequencies, lowest first: a whole number from 1 to 50. Blank = 1.
+ * @param [modes] How many frequencies, lowest first: a whole number from 1 to 50. Blank = 1. Floor vibration acceptance is the governing guide's and the engineer's call, not checked here.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
  * @param [loads] Loads whose weight adds mass (load / g): point loads give point masses, uniform loads uniform mass; couples and varying linear loads are refused. Table or text.
  * @param [combo] Combination that gives the mass loads, such as D+0.1L. Blank = every load at factor 1.

@@ -47,11 +47,18 @@ export function spanSolution(solution: Solution, index: number): Solution {
   return { ...solution, pieces };
 }
 
-/** The peaks of every span, left to right. */
+/** The peaks of every span, left to right (the pieces are swept once: linear in their number). */
 export function spanPeaks(solution: Solution): SpanPeak[] {
   const out: SpanPeak[] = [];
+  const tol = POSITION_TOLERANCE * solution.length;
+  const all = solution.pieces;
+  let start = 0;
   for (let i = 0; i + 1 < solution.nodeX.length; i++) {
-    const span = spanSolution(solution, i);
+    const b = solution.nodeX[i + 1];
+    let end = start;
+    while (end < all.length && (end === start || all[end].x1 <= b + tol) && all[end].x0 < b - tol) end++;
+    const span: Solution = { ...solution, pieces: all.slice(start, end) };
+    start = end;
     const of = (quantity: Quantity) => extremes(span, quantity);
     const moment = of("moment");
     const shear = signedPeak(of("shear"));

@@ -8,7 +8,7 @@
  * (more exactly at x = 0.4215 L) as a propped cantilever, case 12. A simple span with a point
  * load P at a: M = P a b / L at a, V = P b / L, deflection peak at x = sqrt((L^2 - b^2)/3) for a > b.
  */
-import { extremes, solve, spanPeaks, signedPeak } from "../../src/core";
+import { extremes, solve, spanPeaks, spanSolution, signedPeak } from "../../src/core";
 import { beam, point, udl } from "./kit/members";
 
 const rel = (a: number, b: number, scale = Math.abs(b)) => Math.abs(a - b) / (scale || 1);
@@ -73,6 +73,16 @@ describe("invariants", () => {
         expect(at).toBeGreaterThanOrEqual(p.momentMin - 1e-9);
       }
     }
+  });
+  test("the single sweep picks each span's pieces as filtering by position does", () => {
+    const many = beam([4, 7, 3, 5, 2], ["fixed", "pin", 900, "hinge", "pin", "free"], [udl(3, 0, 21), point(20, 9), point(-4, 13.5), point(5, 11), point(2, 4)], 2e4);
+    const s = solve(many);
+    spanPeaks(s).forEach((p, i) => {
+      const alone = spanSolution(s, i);
+      const m = extremes(alone, "moment");
+      expect([p.momentMax, p.xMomentMax, p.momentMin, p.xMomentMin]).toEqual([m.max, m.xMax, m.min, m.xMin]);
+      expect(p.shear).toBe(signedPeak(extremes(alone, "shear")).value);
+    });
   });
   test("without EI the deflection is NaN (shown blank by the sheet)", () => {
     const [p] = spanPeaks(solve(beam([5], ["pin", "pin"], [udl(1, 0, 5)])));
