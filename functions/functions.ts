@@ -28,6 +28,7 @@ import {
   sheetUtilisation,
   sheetValuesAt,
 } from "../src/sheet";
+import { sheetCaseReactions, sheetFrequencies, sheetModeShape, sheetSpanPeaks } from "../src/sheet";
 
 /**
  * Reactions at every node of a continuous beam: one row per node (span end) with x, the vertical reaction (up +) and the moment reaction (counter-clockwise +); unsupported nodes give 0, a spring gives its force. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.REACTIONS("6 8 6", "udl 2.5 D; point 10 at 3 L")
@@ -338,4 +339,76 @@ export function convertUnits(value: any[][], from: any, to: any): any[][] {
  */
 export function stiffness(E: any[][], I: any[][], EUnit?: any, IUnit?: any, resultUnit?: any): any[][] {
   return sheetStiffness(E, I, EUnit, IUnit, resultUnit);
+}
+
+// ---------------------------------------------------------------------------------------
+// Results per span and per load case; natural frequencies and mode shapes.
+// ---------------------------------------------------------------------------------------
+
+/**
+ * Each span's peaks: span, length, max M, x, min M, x, largest |V|, x, largest |deflection|, x ("" without EI); loads down +, sagging M +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.SPANPEAKS("6 8", "udl 2")
+ * @customfunction SPANPEAKS
+ * @param spans Span lengths left to right: a row or column with one cell per span, or one text cell such as "6 8 6".
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
+ * @param [EI] Flexural stiffness, one value or one per span. Adds the deflection columns; without it the member is taken as uniform.
+ * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels. Blank = every load at factor 1.
+ * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in", as for SPAN.REACTIONS. Blank = consistent units.
+ * @returns One row per span: span, length, largest M, x, smallest M, x, largest |V|, x, largest |deflection|, x.
+ */
+export function spanPeaks(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
+  return sheetSpanPeaks(spans, loads, supports, EI, combo, units);
+}
+
+/**
+ * Reactions per load case, unfactored: rows x, one column per case (in first-use order), then the combo's; loads down +, reactions up +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.CASEREACTIONS("6 8", A2:F9)
+ * @customfunction CASEREACTIONS
+ * @param spans Span lengths left to right: a row or column with one cell per span, or one text cell such as "6 8 6".
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell such as "udl 2.5 D; point 10 at 3 L". One column per case label; at most 50 labels.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
+ * @param [EI] Flexural stiffness, one value or one per span. Needed for springs; without it the member is taken as uniform.
+ * @param [combo] Load combination such as 1.2D+1.6L: adds a last column with the factored reactions. Blank = no combination column.
+ * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2", as for SPAN.REACTIONS. Blank = consistent units.
+ * @param [reaction] vertical (blank: vertical force, up +) or moment (moment reactions, counter-clockwise +; 0 where a node is not fixed).
+ * @returns One row per node: x, one reaction per case, and the combination's.
+ */
+export function caseReactions(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], reaction?: any): any[][] {
+  return sheetCaseReactions(spans, loads, supports, EI, combo, units, reaction);
+}
+
+/**
+ * Natural frequencies in bending (exact, Euler-Bernoulli): rows mode, Hz, rad/s; loads down + (load/g adds mass). Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.FREQUENCIES("6 6", 2e5, 0.3, 3)
+ * @customfunction FREQUENCIES
+ * @param spans Span lengths left to right: a row or column with one cell per span, or one text cell such as "6 8 6".
+ * @param EI Flexural stiffness, one value or one per span (force x length^2, or the EI unit of units). Required.
+ * @param mass Mass per length, one value or one per span, in force x s^2 / length^2 (t/m with kN and m, kg/m with N and m), so sqrt(EI/(m L^4)) is 1/s. Blank = 0 (mass from loads).
+ * @param [modes] How many frequencies, lowest first: a whole number from 1 to 50. Blank = 1. Floor vibration acceptance is the governing guide's and the engineer's call, not checked here.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
+ * @param [loads] Loads whose weight adds mass (load / g): point loads give point masses, uniform loads uniform mass; couples and varying linear loads are refused. Table or text.
+ * @param [combo] Combination that gives the mass loads, such as D+0.1L. Blank = every load at factor 1.
+ * @param [units] Unit labels such as "length=m, force=kN, EI=kN*m^2": lengths, loads and EI in these units; mass in force x s^2 / length^2 of them. Blank = consistent units.
+ * @param [g] Acceleration of gravity for loads/g, in the length unit per s^2 (9.80665 for m, 32.174 for ft). Blank = standard gravity in the units' length unit; needed with loads and no units.
+ * @returns One row per mode: mode, frequency (Hz), circular frequency (rad/s). Floor vibration acceptance is the governing guide's and the engineer's call.
+ */
+export function frequencies(spans: any[][], EI: any[][], mass: any[][], modes?: any, supports?: any[][], loads?: any[][], combo?: any, units?: any[][], g?: any): any[][] {
+  return sheetFrequencies(spans, EI, mass, modes, supports, loads, combo, units, g);
+}
+
+/**
+ * Mode shape: one mode's deflection at each x, scaled to a largest |w| of 1 (leftmost peak +); loads down + (load/g adds mass). Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.MODESHAPE("6 6", 2e5, 0.3, 1, A2:A40)
+ * @customfunction MODESHAPE
+ * @param spans Span lengths left to right: a row or column with one cell per span, or one text cell such as "6 8 6".
+ * @param EI Flexural stiffness, one value or one per span (force x length^2, or the EI unit of units). Required.
+ * @param mass Mass per length, one value or one per span, in force x s^2 / length^2 (t/m with kN and m, kg/m with N and m). Blank = 0 (mass from loads).
+ * @param mode Which mode: 1 for the lowest frequency, up to 50. A repeated frequency has no unique shape and is refused.
+ * @param x Positions from the member's left end: a cell, row, column or block (at most 10001 cells); the result has its shape, blank cells give blanks.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
+ * @param [loads] Loads whose weight adds mass (load / g), as for SPAN.FREQUENCIES. Table or text.
+ * @param [combo] Combination that gives the mass loads, such as D+0.1L. Blank = every load at factor 1.
+ * @param [units] Unit labels such as "length=m, force=kN, EI=kN*m^2", as for SPAN.FREQUENCIES. Blank = consistent units.
+ * @param [g] Acceleration of gravity for loads/g in the length unit per s^2. Blank = standard gravity in the units' length unit.
+ * @returns The normalised mode deflection at each x, in the shape of x.
+ */
+export function modeShape(spans: any[][], EI: any[][], mass: any[][], mode: any, x: any[][], supports?: any[][], loads?: any[][], combo?: any, units?: any[][], g?: any): any[][] {
+  return sheetModeShape(spans, EI, mass, mode, x, supports, loads, combo, units, g);
 }

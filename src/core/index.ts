@@ -29,3 +29,10 @@ export { sectionProperties, validateSection, blockProperties, blocksOf, SECTION_
 export type { SectionShape, SectionKind, SectionProperties, Block } from "./section";
 export { bendingStress, averageShearStress, peakShearStress, fibreStresses, largestMagnitude, parseDeflectionLimit, deflectionRatio, spanDeflections, utilisation } from "./checks";
 export type { FibreStress, SpanDeflection } from "./checks";
+export { spanPeaks, spanSolution, signedPeak } from "./spanPeaks";
+export type { SpanPeak } from "./spanPeaks";
+export { caseReactions, caseOrder, MAX_CASES } from "./caseReactions";
+export type { CaseReactions } from "./caseReactions";
+export { naturalFrequencies, modeShape, modeValue, spanMasses, massesFromLoads, MAX_MODES, MAX_VIBRATION_WORK } from "./vibration";
+export type { Mass, VibrationModel, ModeShape, ModePiece } from "./vibration";
+export { dynamicEntries, clampedCount } from "./dynamicStiffness";

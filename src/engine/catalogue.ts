@@ -28,7 +28,11 @@ export type SpanExport =
   | "deflectionCheck"
   | "utilisation"
   | "convertUnits"
-  | "stiffness";
+  | "stiffness"
+  | "spanPeaks"
+  | "caseReactions"
+  | "frequencies"
+  | "modeShape";
 
 /** The function table the engine calls: the real exports, or a stand-in in tests. */
 export type SpanFunctions = Record<SpanExport, SheetFunction>;
@@ -106,6 +110,24 @@ const CHECKS: SpanFunctionEntry[] = [
   { sheetName: "SPAN.STIFFNESS", exportName: "stiffness", arguments: [block("E"), block("I"), value("EUnit", true), value("IUnit", true), value("resultUnit", true)], sizeRule: "learned" },
 ];
 
+/** Results per span and per load case, natural frequencies and mode shapes. */
+const RESULTS: SpanFunctionEntry[] = [
+  { sheetName: "SPAN.SPANPEAKS", exportName: "spanPeaks", arguments: [...member, ...withUnits], sizeRule: "learned" },
+  { sheetName: "SPAN.CASEREACTIONS", exportName: "caseReactions", arguments: [...member, ...withUnits, value("reaction", true)], sizeRule: "learned" },
+  {
+    sheetName: "SPAN.FREQUENCIES",
+    exportName: "frequencies",
+    arguments: [block("spans"), block("EI"), block("mass"), value("modes", true), block("supports", true), block("loads", true), value("combo", true), block("units", true), value("g", true)],
+    sizeRule: "learned",
+  },
+  {
+    sheetName: "SPAN.MODESHAPE",
+    exportName: "modeShape",
+    arguments: [block("spans"), block("EI"), block("mass"), value("mode"), block("x"), block("supports", true), block("loads", true), value("combo", true), block("units", true), value("g", true)],
+    sizeRule: "shapeOfX",
+  },
+];
+
 export const SPAN_FUNCTIONS: readonly SpanFunctionEntry[] = [
   { sheetName: "SPAN.REACTIONS", exportName: "reactions", arguments: [...member, ...withUnits], sizeRule: "perNode" },
   { sheetName: "SPAN.SHEAR", exportName: "shear", arguments: atX, sizeRule: "shapeOfX" },
@@ -122,6 +144,7 @@ export const SPAN_FUNCTIONS: readonly SpanFunctionEntry[] = [
   },
   ...STUDIES,
   ...CHECKS,
+  ...RESULTS,
 ];
 
 export function entryFor(sheetName: string): SpanFunctionEntry | undefined {

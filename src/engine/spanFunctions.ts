@@ -21,6 +21,7 @@ import {
   stress,
   utilisation,
 } from "../../functions/functions";
+import { caseReactions, frequencies, modeShape, spanPeaks } from "../../functions/functions";
 import type { SpanFunctions } from "./catalogue";
 
 export const SPAN_EXPORTS: SpanFunctions = {
@@ -44,4 +45,8 @@ export const SPAN_EXPORTS: SpanFunctions = {
   utilisation,
   convertUnits,
   stiffness,
+  spanPeaks,
+  caseReactions,
+  frequencies,
+  modeShape,
 };

@@ -20,3 +20,5 @@ export { sheetStress, sheetShearStress, sheetDeflectionCheck, sheetUtilisation, 
 export { sheetEnvelope, sheetPeaks, sheetInfluence, sheetMoving, sheetCombinationSet, readPattern, readTrain } from "./studies";
 export { readCombinations, readPsi0 } from "./combinations";
 export { readEffect } from "./effect";
+export { sheetSpanPeaks, sheetCaseReactions, readReactionKind } from "./spanResults";
+export { sheetFrequencies, sheetModeShape, readMass, readModeCount, readVibrationModel, STANDARD_GRAVITY, MAX_MODE_POSITIONS } from "./vibration";

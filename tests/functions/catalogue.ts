@@ -58,6 +58,19 @@ export const CATALOGUE: CatalogueEntry[] = [
   { id: "UTILISATION", exportName: "utilisation", parameters: [["demand", "matrix", false], ["capacity", "matrix", false], ["demandUnit", "scalar", true], ["capacityUnit", "scalar", true]] },
   { id: "CONVERT", exportName: "convertUnits", parameters: [["value", "matrix", false], ["from", "scalar", false], ["to", "scalar", false]] },
   { id: "STIFFNESS", exportName: "stiffness", parameters: [["E", "matrix", false], ["I", "matrix", false], ["EUnit", "scalar", true], ["IUnit", "scalar", true], ["resultUnit", "scalar", true]] },
+  // results per span and per load case, natural frequencies and mode shapes
+  { id: "SPANPEAKS", exportName: "spanPeaks", parameters: [...member, ...analysis] },
+  { id: "CASEREACTIONS", exportName: "caseReactions", parameters: [...member, ...analysis, ["reaction", "scalar", true]] },
+  {
+    id: "FREQUENCIES",
+    exportName: "frequencies",
+    parameters: [["spans", "matrix", false], ["EI", "matrix", false], ["mass", "matrix", false], ["modes", "scalar", true], ["supports", "matrix", true], ["loads", "matrix", true], ["combo", "scalar", true], ["units", "matrix", true], ["g", "scalar", true]],
+  },
+  {
+    id: "MODESHAPE",
+    exportName: "modeShape",
+    parameters: [["spans", "matrix", false], ["EI", "matrix", false], ["mass", "matrix", false], ["mode", "scalar", false], ["x", "matrix", false], ["supports", "matrix", true], ["loads", "matrix", true], ["combo", "scalar", true], ["units", "matrix", true], ["g", "scalar", true]],
+  },
 ];
 
 interface MetadataParameter {

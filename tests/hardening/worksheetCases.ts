@@ -139,6 +139,10 @@ function broadcast(a: unknown, b: unknown): { rows: number; cols: number } {
   return sa.rows === 1 && sa.cols === 1 ? shapeOfArg(b) : sa;
 }
 
+const massArg = fc.oneof({ weight: 4, arbitrary: fc.constantFrom<unknown>(1, 0.25, [[2.5]], "0.5 1", 1e-3) }, { weight: 1, arbitrary: fc.constantFrom<unknown>(null, "", 0, -1) }, { weight: 1, arbitrary: anyArg() });
+const modesArg = fc.oneof({ weight: 4, arbitrary: fc.constantFrom<unknown>(null, 1, 2, 3, 12) }, { weight: 1, arbitrary: fc.constantFrom<unknown>(0, 51, 2.5, "3", "") }, { weight: 1, arbitrary: anyCell });
+const gArg = fc.oneof({ weight: 3, arbitrary: fc.constantFrom<unknown>(null, 9.81, 32.17) }, { weight: 1, arbitrary: anyCell });
+
 /** Every worksheet function, in the order of functions/functions.ts. */
 export const SPECS: FunctionSpec[] = [
   {
@@ -278,5 +282,41 @@ export const SPECS: FunctionSpec[] = [
     cases: fc.tuple(numbersBlock, fc.oneof(anyNumber, numbersBlock), unitText, unitText, unitText).map((args) => ({ args, spanCount: null })),
     call: call(fx.stiffness),
     shape: (c) => ({ ...broadcast(c.args[0], c.args[1]), cells: numbersOrBlank }),
+  },
+  {
+    name: "spanPeaks",
+    cases: memberWith(() => unitsArg.map((u) => [u]), (m, [units]) => [m.spans.value, m.loads, m.supports.value, m.EI, m.combo, units]),
+    call: call(fx.spanPeaks),
+    shape: (c) => ({ cols: 10, ...(c.spanCount === null ? { minRows: 1 } : { rows: c.spanCount }), cells: both(...[0, 1, 2, 3, 4, 5, 6, 7].map((i) => numericColumn(i, "peak")), numbersOrBlank) }),
+  },
+  {
+    name: "caseReactions",
+    cases: memberWith(
+      () => fc.tuple(fc.oneof({ weight: 3, arbitrary: fc.constant<unknown>(null) }, { weight: 1, arbitrary: unitsArg }), fc.oneof({ weight: 4, arbitrary: fc.constantFrom<unknown>(null, "", "vertical", "moment", "Moment ") }, { weight: 1, arbitrary: anyCell })),
+      (m, [units, reaction]) => [m.spans.value, m.loads, m.supports.value, m.EI, m.combo, units, reaction],
+      labelledMemberArgs,
+    ),
+    call: call(fx.caseReactions),
+    shape: (c) => ({ ...(c.spanCount === null ? { minRows: 2 } : { rows: c.spanCount + 1 }), cells: allNumeric }),
+  },
+  {
+    name: "frequencies",
+    cases: memberWith(
+      (m) => fc.tuple(massArg, modesArg, fc.oneof({ weight: 3, arbitrary: fc.constant<unknown>(null) }, { weight: 1, arbitrary: fc.constant(m.loads) }), unitsArg, gArg),
+      (m, [mass, modes, loads, units, g]) => [m.spans.value, m.EI, mass, modes, m.supports.value, loads, m.combo, units, g],
+      stiffMemberArgs,
+    ),
+    call: call(fx.frequencies),
+    shape: () => ({ cols: 3, minRows: 1, cells: allNumeric }),
+  },
+  {
+    name: "modeShape",
+    cases: memberWith(
+      (m) => fc.tuple(massArg, modesArg, fc.oneof({ weight: 2, arbitrary: positionsArg(m.plan, false) }, { weight: 1, arbitrary: positionsArg(m.plan) }), fc.oneof({ weight: 4, arbitrary: fc.constant<unknown>(null) }, { weight: 1, arbitrary: fc.constant(m.loads) }), fc.oneof({ weight: 3, arbitrary: fc.constant<unknown>(null) }, { weight: 1, arbitrary: unitsArg }), gArg),
+      (m, [mass, mode, x, loads, units, g]) => [m.spans.value, m.EI, mass, mode, x, m.supports.value, loads, m.combo, units, g],
+      stiffMemberArgs,
+    ),
+    call: call(fx.modeShape),
+    shape: (c) => ({ ...shapeOfArg(c.args[4]), cells: numbersOrBlank }),
   },
 ];
