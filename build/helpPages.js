@@ -36,6 +36,7 @@ const CONVENTIONS = [
   "Reactions: vertical force up positive; moment reaction counter-clockwise positive.",
   "Where V or M jumps (point load, couple, support) a function returns the value just right of x; at the member's right end, the value just left. SPAN.DIAGRAM gives both sides as two rows.",
   "Units are yours, consistently: results come out in the units that went in, or label them with the optional units argument (pairs such as length=ft, force=kip, EI=kip*in^2, deflection=in).",
+  "With units labelled: spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its own unit, default the length unit). length and force are required when any label is given.",
   "Without EI the member is taken as uniform: forces and moments of indeterminate members need only relative stiffness; slope and deflection need EI and return #N/A saying so.",
   "Load table: one load per row: type (point, moment, udl, linear), magnitude, x start (blank = 0), x end (blank = member end), magnitude at end (linear only), case label. Wholly blank rows are skipped.",
   "Load notation, a whole load table in one cell, loads joined by ';': point P at X | moment C at X | udl W [from A] [to B] | linear W1 to W2 [from A] [to B], each with an optional case label last.",
@@ -182,8 +183,8 @@ class HelpPagesPlugin {
       compilation.hooks.processAssets.tap({ name: "SpanwiseHelp", stage: Compilation.PROCESS_ASSETS_STAGE_ADDITIONAL }, () => {
         const docs = readFunctionDocs(fs.readFileSync(this.input, "utf8"), this.input);
         if (docs.length === 0) compilation.errors.push(new compiler.webpack.WebpackError(`${this.input}: no @customfunction blocks for the help pages`));
-        for (const doc of docs) compilation.emitAsset(helpFile(doc.id), new sources.RawSource(helpPage(doc)));
-        compilation.emitAsset("support.html", new sources.RawSource(supportPage(docs)));
+        for (const doc of docs) compilation.emitAsset(helpFile(doc.id), new sources.RawSource(helpPage(doc)), { minimized: true });
+        compilation.emitAsset("support.html", new sources.RawSource(supportPage(docs)), { minimized: true });
       });
     });
   }
