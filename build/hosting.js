@@ -57,10 +57,14 @@ function rebaseText(text, hosting, what) {
  */
 function hostedPage(html, name) {
   let out = html;
-  for (const file of OFFICE_SCRIPTS) out = out.split(`src="office-js/${file}"`).join(`src="${OFFICE_CDN}${file}"`);
+  // The pages may be minified (html-webpack-plugin drops optional quotes in production).
+  for (const file of OFFICE_SCRIPTS) {
+    const local = new RegExp(`src=(["']?)office-js/${file.replace(/[.]/g, "\\.")}\\1(?=[\\s>])`, "g");
+    out = out.replace(local, `src="${OFFICE_CDN}${file}"`);
+  }
   if (/office-js\//.test(out)) throw new Error(`${name}: a local office-js/ reference is left`);
   if (out.includes(OFFICE_CDN)) {
-    const policy = /(<meta[^>]+http-equiv="Content-Security-Policy"[^>]+content="[^"]*script-src 'self')(;)/i;
+    const policy = /(<meta[^>]+http-equiv=["']?Content-Security-Policy["']?[^>]+content="[^"]*script-src 'self')(;)/i;
     if (!policy.test(out)) throw new Error(`${name}: no Content-Security-Policy with "script-src 'self';" to extend`);
     out = out.replace(policy, `$1 ${OFFICE_CDN_ORIGIN}$2`);
   }
