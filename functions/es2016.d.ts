@@ -8,9 +8,9 @@ interface Array<T> {
 }
 interface ObjectConstructor {
   entries<T>(o: { [s: string]: T } | ArrayLike<T>): [string, T][];
-  entries(o: {}): [string, any][];
+  entries(o: object): [string, any][];
   values<T>(o: { [s: string]: T } | ArrayLike<T>): T[];
-  values(o: {}): any[];
+  values(o: object): any[];
 }
 interface String {
   trimStart(): string;
