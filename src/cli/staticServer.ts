@@ -74,8 +74,10 @@ export function responseHeaders(relative: string, origin: string | undefined): R
     "Content-Type": TYPES[ext] ?? "application/octet-stream",
     "Cache-Control": "no-store",
     "X-Content-Type-Options": "nosniff",
-    "Referrer-Policy": "no-referrer",
   };
+  // No Referrer-Policy: office.js reads the referrer to tell which host it runs in; with
+  // `no-referrer` the standalone pane's office.js took another path and framed a remote
+  // telemetry page (seen in tests/hardening/network.test.ts).
   if (ext === ".html") headers["Content-Security-Policy"] = PAGE_POLICY;
   if (crossOriginReadable(relative)) {
     headers["Vary"] = "Origin";

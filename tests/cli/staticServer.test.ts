@@ -103,6 +103,8 @@ describe("response headers (pure)", () => {
     expect(html["Content-Security-Policy"]).toMatch(/frame-ancestors 'self' https:\/\/\*\.officeapps\.live\.com/);
     expect(html["Content-Security-Policy"]).not.toMatch(/frame-ancestors[^;]*\s\*(\s|;|$)/);
     expect(html["X-Content-Type-Options"]).toBe("nosniff");
+    // office.js reads the referrer to find its host: no Referrer-Policy (see staticServer.ts).
+    expect(html["Referrer-Policy"]).toBeUndefined();
     expect(responseHeaders("functions.json", undefined)["Content-Security-Policy"]).toBeUndefined();
   });
 });
