@@ -84,7 +84,9 @@ function common(env, argv, level = "es2020", tsconfig = "tsconfig.json") {
   return {
     mode: production ? "production" : "development",
     target: ["web", level],
-    devtool: production ? "source-map" : "cheap-module-source-map", // never eval: the pages forbid it (Content-Security-Policy)
+    // never eval: the pages forbid it (Content-Security-Policy); no source maps in a hosted
+    // production build (they would publish the whole source beside the add-in).
+    devtool: hostingOf(env) ? false : production ? "source-map" : "cheap-module-source-map",
     resolve: { extensions: [".ts", ".js"] },
     module: {
       rules: [

@@ -54,6 +54,14 @@ describe("the base URL", () => {
     expect(hosting.parseBase(BASE)).toEqual({ base: BASE, origin: "https://addins.example.com" });
   });
 
+  test("a hosted build writes no source maps (they would publish the whole source)", () => {
+    // eslint-disable-next-line @typescript-eslint/no-require-imports
+    const config = require("../../webpack.config.js");
+    expect(config.addinConfig({ base: BASE }, { mode: "production" }).devtool).toBe(false);
+    expect(config.paneConfig({ base: BASE }, { mode: "production" }).devtool).toBe(false);
+    expect(config.addinConfig({}, { mode: "production" }).devtool).toBe("source-map");
+  });
+
   test("control: rebasing refuses to leave a localhost URL, and a page without the expected script tag", () => {
     expect(() => hosting.rebaseText('<a href="http://localhost:8080/x"/>', hosting.parseBase(BASE), "manifest.xml")).toThrow(/localhost URL is left/);
     expect(() => hosting.hostedPage('<script src="office-js/office_strings.js"></script>', "x.html")).toThrow(/local office-js/);
