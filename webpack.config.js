@@ -2,27 +2,57 @@
 /**
  * Build of every page Spanwise ships, as an exported array of webpack configurations.
  *
- * - addinConfig: the custom-functions bundle (functions.js + functions.html) with the
+ * - addinConfig ("addin"): the custom-functions bundle (functions.js + functions.html) with the
  *   generated functions.json (custom-functions-metadata-plugin writes it from the JSDoc in
- *   functions/functions.ts and appends the CustomFunctions.associate calls itself), the
- *   manifest, the icons from assets/ and an unmodified local copy of office.js.
+ *   functions/functions.ts and appends the CustomFunctions.associate calls itself), the help
+ *   pages and support page generated from the same JSDoc (build/helpPages.js), the manifest,
+ *   the icons and, in development, an unmodified local copy of office.js.
+ * - paneConfig ("pane"): the diagram pane (taskpane.js + taskpane.html).
+ * - workbenchConfig ("workbench"): the standalone workbench (development only: it bundles the
+ *   GPL-3.0 formula engine, which is not part of the add-in).
+ *
+ * Language levels (tests/functions/languageLevel.test.ts parses the bundles at these levels):
+ * - functions.js: ECMAScript 2016. With separate runtimes, Windows runs it in the
+ *   JavaScript-only custom-functions runtime, which the maintainers state supports ECMAScript
+ *   2016 (OfficeDev/office-js-docs-pr#4496). TypeScript compiles to ES2016
+ *   (tsconfig.functions.json also type-checks the entry against the ES2016 library), and
+ *   `target: ["web", "es2016"]` keeps webpack's own runtime code at that level too.
+ * - taskpane.js: ECMAScript 2017. The pane runs in the host's webview: Edge WebView2 or the
+ *   legacy EdgeHTML control on Windows, Safari's WKWebView on the Mac, the browser on the
+ *   web ("Browsers and webview controls used by Office Add-ins",
+ *   learn.microsoft.com/office/dev/add-ins/concepts/browsers-used-by-office-web-add-ins);
+ *   all of them run ES2017. Older Windows and volume-licensed Office through 2019 may still
+ *   use Trident (Internet Explorer 11, ES5), for which the documentation recommends, but
+ *   does not require, at least a graceful failure message ("Support older Microsoft webviews
+ *   and Office versions", learn.microsoft.com/office/dev/add-ins/develop/support-ie-11):
+ *   the pane is not built for Trident; the functions, which do not run in a webview on
+ *   Windows, are unaffected.
+ * - workbench.js: the developer's own browser (ES2020, unchanged).
+ *
+ * Production: `npm run build -- --env base=https://host/path/` writes release/ for that origin
+ * (build/hosting.js: manifest and metadata rebased, office.js from its hosted location, the
+ * policy widened by exactly that origin, no workbench, no local office.js, no screenshots).
  *
  * To add a page, write a function `fooConfig(env, argv)` returning one configuration with
- * its own `name` and add it to the array at the bottom. Every configuration writes into
- * dist/ (`output.clean` is off so the configurations do not wipe each other's files).
+ * its own `name` and add it to the array at the bottom.
  *
- *   npx webpack --mode production                # every configuration
+ *   npx webpack --mode production                # every configuration, into dist/
  *   npx webpack --mode production --config-name addin
+ *   npx webpack --mode production --env base=https://example.com/spanwise/   # into release/
  */
+const fs = require("fs");
 const path = require("path");
 const HtmlWebpackPlugin = require("html-webpack-plugin");
 const CopyWebpackPlugin = require("copy-webpack-plugin");
 const CustomFunctionsMetadataPlugin = require("custom-functions-metadata-plugin");
+const { HostingPlugin, parseBase } = require("./build/hosting");
+const { HelpPagesPlugin } = require("./build/helpPages");
 
 const root = __dirname;
 const officeDist = path.join(root, "node_modules", "@microsoft", "office-js", "dist");
+const functionsSource = path.join(root, "functions", "functions.ts");
 
-/** Files of @microsoft/office-js copied unmodified (its licence allows only that). */
+/** Files of @microsoft/office-js copied unmodified (its licence allows only that); development builds only. */
 const officeFiles = [
   "office.js",
   "o15apptofilemappingtable.js",
@@ -37,34 +67,53 @@ const officeFiles = [
   "excel-mac-16.00-core.js",
 ];
 
-/** Shared pieces every configuration may use. */
-function common(env, argv) {
+/** The production hosting from `--env base=...`, or null for development. */
+function hostingOf(env) {
+  return env && env.base ? parseBase(env.base) : null;
+}
+
+/** Output folder: dist/ for development, release/ (or --env out=...) for production. */
+function outputPath(env) {
+  if (!hostingOf(env)) return path.join(root, "dist");
+  return path.resolve(root, (env && env.out) || "release");
+}
+
+/** Shared pieces every configuration may use; `level` is the ECMAScript target of the bundle. */
+function common(env, argv, level = "es2020", tsconfig = "tsconfig.json") {
   const production = (argv && argv.mode) === "production";
   return {
     mode: production ? "production" : "development",
-    devtool: production ? "source-map" : "cheap-module-source-map", // never eval: the pages forbid it (Content-Security-Policy)
+    target: ["web", level],
+    // never eval: the pages forbid it (Content-Security-Policy); no source maps in a hosted
+    // production build (they would publish the whole source beside the add-in).
+    devtool: hostingOf(env) ? false : production ? "source-map" : "cheap-module-source-map",
     resolve: { extensions: [".ts", ".js"] },
     module: {
       rules: [
         {
           test: /\.ts$/,
           exclude: /node_modules/,
-          use: { loader: "ts-loader", options: { transpileOnly: true, compilerOptions: { sourceMap: true } } },
+          use: {
+            loader: "ts-loader",
+            options: { transpileOnly: true, configFile: path.join(root, tsconfig), compilerOptions: { sourceMap: true, noEmit: false, target: level.toUpperCase() } },
+          },
         },
       ],
     },
-    output: { path: path.join(root, "dist"), clean: false },
+    output: { path: outputPath(env), clean: false },
     performance: { hints: false },
   };
 }
 
-/** The custom-functions add-in: functions.js, functions.html, functions.json, manifest, icons. */
+/** The custom-functions add-in: functions.js, functions.html, functions.json, help, manifest, icons. */
 function addinConfig(env, argv) {
-  const base = common(env, argv);
+  const hosting = hostingOf(env);
+  const base = common(env, argv, "es2016", "tsconfig.functions.json");
   return {
     ...base,
     name: "addin",
-    entry: { functions: "./functions/functions.ts", taskpane: "./src/pane/taskpane.ts" },
+    // es2016.ts first: the few newer built-ins the shared code calls, where the runtime lacks them.
+    entry: { functions: ["./functions/es2016.ts", "./functions/functions.ts"] },
     output: { ...base.output, filename: "[name].js" },
     plugins: [
       new CustomFunctionsMetadataPlugin({ input: "./functions/functions.ts", output: "functions.json" }),
@@ -73,20 +122,36 @@ function addinConfig(env, argv) {
         template: "./functions/functions.html",
         chunks: ["functions"],
       }),
-      // The diagram pane, the page the manifest's DefaultSettings names.
-      new HtmlWebpackPlugin({ filename: "taskpane.html", template: "./src/pane/taskpane.html", chunks: ["taskpane"] }),
+      new HelpPagesPlugin(functionsSource),
       new CopyWebpackPlugin({
         patterns: [
-          { from: "assets/*.png", to: "assets/[name][ext]" },
+          // Only the icons: the screenshots in assets/ are documentation, not add-in files.
+          { from: "assets/icon-*.png", to: "assets/[name][ext]" },
           { from: "manifest.xml", to: "manifest.xml" },
-          ...officeFiles.map((file) => ({
-            from: path.join(officeDist, file),
-            to: path.join("office-js", file),
-            info: { minimized: true },
-          })),
+          ...(hosting
+            ? []
+            : officeFiles.map((file) => ({
+                from: path.join(officeDist, file),
+                to: path.join("office-js", file),
+                info: { minimized: true },
+              }))),
         ],
       }),
+      new HostingPlugin(hosting),
     ],
+  };
+}
+
+/** The diagram pane, the page the manifest's DefaultSettings names. */
+function paneConfig(env, argv) {
+  const hosting = hostingOf(env);
+  const base = common(env, argv, "es2017");
+  return {
+    ...base,
+    name: "pane",
+    entry: { taskpane: "./src/pane/taskpane.ts" },
+    output: { ...base.output, filename: "[name].js" },
+    plugins: [new HtmlWebpackPlugin({ filename: "taskpane.html", template: "./src/pane/taskpane.html", chunks: ["taskpane"] }), new HostingPlugin(hosting)],
   };
 }
 
@@ -104,7 +169,16 @@ function workbenchConfig(env, argv) {
   };
 }
 
-module.exports = (env, argv) => [addinConfig(env, argv), workbenchConfig(env, argv)];
+module.exports = (env, argv) => {
+  if (hostingOf(env)) {
+    // A production build starts from an empty folder, so nothing from an earlier build ships.
+    fs.rmSync(outputPath(env), { recursive: true, force: true });
+    return [addinConfig(env, argv), paneConfig(env, argv)];
+  }
+  return [addinConfig(env, argv), paneConfig(env, argv), workbenchConfig(env, argv)];
+};
 module.exports.workbenchConfig = workbenchConfig;
 module.exports.addinConfig = addinConfig;
+module.exports.paneConfig = paneConfig;
 module.exports.common = common;
+module.exports.outputPath = outputPath;

@@ -31,14 +31,16 @@ import {
 import { sheetCaseReactions, sheetFrequencies, sheetModeShape, sheetSpanPeaks } from "../src/sheet";
 
 /**
- * Reactions at every node of a continuous beam: one row per node (span end) with x, the vertical reaction (up +) and the moment reaction (counter-clockwise +); unsupported nodes give 0, a spring gives its force. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.REACTIONS("6 8 6", "udl 2.5 D; point 10 at 3 L")
+ * Reactions at every node of a continuous beam: rows x, vertical reaction (up +), moment reaction (counter-clockwise +). An aid to a qualified engineer; local codes govern. Example: =SPAN.REACTIONS("6 8 6", "udl 2.5 D; point 10 at 3 L")
  * @customfunction REACTIONS
+ * @helpurl https://localhost:3000/help/reactions.html
+ * @remarks Reactions at every node of a continuous beam: one row per node (span end) with x, the vertical reaction (up +) and the moment reaction (counter-clockwise +); unsupported nodes give 0, a spring gives its force. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one load per row: type (point, moment, udl, linear), magnitude, x start (blank = 0), x end (blank = member end), magnitude at end (linear only), case label. Or one text cell, loads joined by ";": point P at X | moment C at X | udl W [from A] [to B] | linear W1 to W2 [from A] [to B], each with an optional case label last. Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
- * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns One row per node: x, vertical reaction, moment reaction.
  */
 export function reactions(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
@@ -46,15 +48,17 @@ export function reactions(spans: any[][], loads: any[][], supports?: any[][], EI
 }
 
 /**
- * Shear force V at each x (V = dM/dx, so a simple span's left reaction gives positive shear). Where V jumps (point load, support) the value just right of x is returned; at the right end, just left. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.SHEAR("6 8 6", "udl 2.5", A2:A20)
+ * Shear force V at each x (V = dM/dx; just right of a jump). An aid to a qualified engineer; local codes govern. Example: =SPAN.SHEAR("6 8 6", "udl 2.5", A2:A20)
  * @customfunction SHEAR
+ * @helpurl https://localhost:3000/help/shear.html
+ * @remarks Shear force V at each x (V = dM/dx, so a simple span's left reaction gives positive shear). Where V jumps (point load, support) the value just right of x is returned; at the right end, just left. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one load per row: type (point, moment, udl, linear), magnitude, x start (blank = 0), x end (blank = member end), magnitude at end (linear only), case label. Or one text cell, loads joined by ";": point P at X | moment C at X | udl W [from A] [to B] | linear W1 to W2 [from A] [to B], each with an optional case label last. Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
- * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Shear at each x, in the shape of x.
  */
 export function shear(spans: any[][], loads: any[][], x: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
@@ -62,15 +66,17 @@ export function shear(spans: any[][], loads: any[][], x: any[][], supports?: any
 }
 
 /**
- * Bending moment M at each x (sagging +). Where M jumps (a couple) the value just right of x is returned; at the right end, just left. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.MOMENT(A2:C2, E2:J5, 3)
+ * Bending moment M at each x (sagging +; just right of a jump). An aid to a qualified engineer; local codes govern. Example: =SPAN.MOMENT(A2:C2, E2:J5, 3)
  * @customfunction MOMENT
+ * @helpurl https://localhost:3000/help/moment.html
+ * @remarks Bending moment M at each x (sagging +). Where M jumps (a couple) the value just right of x is returned; at the right end, just left. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one load per row: type (point, moment, udl, linear), magnitude, x start (blank = 0), x end (blank = member end), magnitude at end (linear only), case label. Or one text cell, loads joined by ";": point P at X | moment C at X | udl W [from A] [to B] | linear W1 to W2 [from A] [to B], each with an optional case label last. Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
- * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Moment at each x, in the shape of x.
  */
 export function moment(spans: any[][], loads: any[][], x: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
@@ -78,15 +84,17 @@ export function moment(spans: any[][], loads: any[][], x: any[][], supports?: an
 }
 
 /**
- * Slope at each x in radians: slope = d(deflection)/dx with deflection down +. Needs EI (#N/A without it). Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.SLOPE("6 8 6", "udl 2.5", 0, , 20000)
+ * Slope at each x in radians, d(deflection)/dx with deflection down +; needs EI. An aid to a qualified engineer; local codes govern. Example: =SPAN.SLOPE("6 8 6", "udl 2.5", 0, , 20000)
  * @customfunction SLOPE
+ * @helpurl https://localhost:3000/help/slope.html
+ * @remarks Slope at each x in radians: slope = d(deflection)/dx with deflection down +. Needs EI (#N/A without it). Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one load per row: type (point, moment, udl, linear), magnitude, x start (blank = 0), x end (blank = member end), magnitude at end (linear only), case label. Or one text cell, loads joined by ";": point P at X | moment C at X | udl W [from A] [to B] | linear W1 to W2 [from A] [to B], each with an optional case label last. Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Required here.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
- * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Slope at each x, in the shape of x.
  */
 export function slope(spans: any[][], loads: any[][], x: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
@@ -94,15 +102,17 @@ export function slope(spans: any[][], loads: any[][], x: any[][], supports?: any
 }
 
 /**
- * Deflection at each x, positive downward, in the length unit of spans when EI is in consistent units. Needs EI (#N/A without it). Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.DEFLECTION("6 8 6", "udl 2.5", 3, , 20000)
+ * Deflection at each x, down +; needs EI. An aid to a qualified engineer; local codes govern. Example: =SPAN.DEFLECTION("6 8 6", "udl 2.5", 3, , 20000)
  * @customfunction DEFLECTION
+ * @helpurl https://localhost:3000/help/deflection.html
+ * @remarks Deflection at each x, positive downward, in the length unit of spans when EI is in consistent units. Needs EI (#N/A without it). Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one load per row: type (point, moment, udl, linear), magnitude, x start (blank = 0), x end (blank = member end), magnitude at end (linear only), case label. Or one text cell, loads joined by ";": point P at X | moment C at X | udl W [from A] [to B] | linear W1 to W2 [from A] [to B], each with an optional case label last. Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Required here.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
- * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Deflection at each x, in the shape of x.
  */
 export function deflection(spans: any[][], loads: any[][], x: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
@@ -110,14 +120,16 @@ export function deflection(spans: any[][], loads: any[][], x: any[][], supports?
 }
 
 /**
- * Largest (sagging) and smallest (hogging) bending moment along the member and where they occur, found exactly from the moment curve: [[largest M, x], [smallest M, x]]. Sagging moment +. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.MAXMOMENT("6 8 6", "udl 2.5 D; point 10 at 3 L", , , "1.2D+1.6L")
+ * Largest (sagging) and smallest (hogging) moment and where they occur: [[largest M, x], [smallest M, x]]. An aid to a qualified engineer; local codes govern. Example: =SPAN.MAXMOMENT("6 8 6", "udl 2.5 D; point 10 at 3 L", , , "1.2D+1.6L")
  * @customfunction MAXMOMENT
+ * @helpurl https://localhost:3000/help/maxmoment.html
+ * @remarks Largest (sagging) and smallest (hogging) bending moment along the member and where they occur, found exactly from the moment curve: [[largest M, x], [smallest M, x]]. Sagging moment +. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one load per row: type (point, moment, udl, linear), magnitude, x start (blank = 0), x end (blank = member end), magnitude at end (linear only), case label. Or one text cell, loads joined by ";": point P at X | moment C at X | udl W [from A] [to B] | linear W1 to W2 [from A] [to B], each with an optional case label last. Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
- * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Two rows: largest moment and its x; smallest moment and its x.
  */
 export function maxMoment(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
@@ -125,14 +137,16 @@ export function maxMoment(spans: any[][], loads: any[][], supports?: any[][], EI
 }
 
 /**
- * Extremes of each quantity: rows label, max, x at max, min, x at min for shear and moment, and for slope and deflection when EI is given. Found exactly from the curves, never by sampling. Signs: loads down +, couples clockwise +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.EXTREMES(A2:C2, E2:J5, A3:D3, 20000)
+ * Rows label, max, x, min, x for shear and moment (slope and deflection with EI), found exactly. An aid to a qualified engineer; local codes govern. Example: =SPAN.EXTREMES(A2:C2, E2:J5, A3:D3, 20000)
  * @customfunction EXTREMES
+ * @helpurl https://localhost:3000/help/extremes.html
+ * @remarks Extremes of each quantity: rows label, max, x at max, min, x at min for shear and moment, and for slope and deflection when EI is given. Found exactly from the curves, never by sampling. Signs: loads down +, couples clockwise +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one load per row: type (point, moment, udl, linear), magnitude, x start (blank = 0), x end (blank = member end), magnitude at end (linear only), case label. Or one text cell, loads joined by ";": point P at X | moment C at X | udl W [from A] [to B] | linear W1 to W2 [from A] [to B], each with an optional case label last. Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Adds the slope and deflection rows; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
- * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Rows shear, moment (then slope, deflection with EI): label, max, x at max, min, x at min.
  */
 export function extremes(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
@@ -140,15 +154,17 @@ export function extremes(spans: any[][], loads: any[][], supports?: any[][], EI?
 }
 
 /**
- * Diagram table: rows x, V, M, slope, deflection at evenly spaced stations plus every support, load point and extreme, with two rows (just left, just right) at every jump. Slope and deflection are blank without EI. Signs: loads down +, couples clockwise +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.DIAGRAM("6 8 6", "udl 2.5", 61)
+ * Diagram table x, V, M, slope, deflection at even stations plus supports, loads and extremes, two rows at each jump. An aid to a qualified engineer; local codes govern. Example: =SPAN.DIAGRAM("6 8 6", "udl 2.5", 61)
  * @customfunction DIAGRAM
+ * @helpurl https://localhost:3000/help/diagram.html
+ * @remarks Diagram table: rows x, V, M, slope, deflection at evenly spaced stations plus every support, load point and extreme, with two rows (just left, just right) at every jump. Slope and deflection are blank without EI. Signs: loads down +, couples clockwise +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one load per row: type (point, moment, udl, linear), magnitude, x start (blank = 0), x end (blank = member end), magnitude at end (linear only), case label. Or one text cell, loads joined by ";": point P at X | moment C at X | udl W [from A] [to B] | linear W1 to W2 [from A] [to B], each with an optional case label last. Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param [points] Number of evenly spaced stations including both ends: a whole number from 2 to 10001. Blank (or 0) = 101.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Fills the slope and deflection columns; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
- * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in": spans, x and load positions in the length unit, loads in the force unit (force/length for distributed loads, force x length for couples), EI in its unit; results in the length and force units (moments in force x length, deflection in its unit, default the length unit). Blank = consistent units.
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Rows x, shear, moment, slope, deflection.
  */
 export function diagram(spans: any[][], loads: any[][], points?: any, supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
@@ -161,10 +177,12 @@ export function diagram(spans: any[][], loads: any[][], points?: any, supports?:
 // ---------------------------------------------------------------------------------------
 
 /**
- * Envelope of shear, moment or deflection over a list of load combinations: for each x, the largest and smallest value and the combination that produces it (with pattern live load, also the loaded spans). Combinations may be written out (1.2D+1.6L) or named as sets: ASCE7-2.3.1 (strength), ASCE7-2.4.1 (allowable stress), EN1990-6.10 (needs psi0). Signs: loads down +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.ENVELOPE("6 8 6", A2:F9, H2:H40, "ASCE7-2.3.1", , , "moment", "full L")
+ * Envelope over combinations: per x, largest and smallest shear, moment or deflection and the governing combination. An aid to a qualified engineer; local codes govern. Example: =SPAN.ENVELOPE("6 8 6", A2:F9, H2:H40, "ASCE7-2.3.1", , , "moment", "full L")
  * @customfunction ENVELOPE
+ * @helpurl https://localhost:3000/help/envelope.html
+ * @remarks Envelope of shear, moment or deflection over a list of load combinations: for each x, the largest and smallest value and the combination that produces it (with pattern live load, also the loaded spans). Combinations may be written out (1.2D+1.6L) or named as sets: ASCE7-2.3.1 (strength), ASCE7-2.4.1 (allowable stress), EN1990-6.10 (needs psi0). Signs: loads down +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit): a row or column, or one text cell such as "6 8 6".
- * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation; every load needs a case label.
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation; every load needs a case label. Forces down +, couples clockwise +.
  * @param x Positions from the member's left end: a cell, row, column or block; one result row per cell, in reading order (blank cells give blank rows).
  * @param combos Combinations: a cell or range of texts such as 1.2D+1.6L+0.5S, and/or set names ASCE7-2.3.1, ASCE7-2.4.1, EN1990-6.10 (each expanded to its individual combinations).
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
@@ -179,10 +197,12 @@ export function envelope(spans: any[][], loads: any[][], x: any[][], combos: any
 }
 
 /**
- * Governing peaks over a list of load combinations: for shear, moment and (with EI) slope and deflection, the largest and smallest value anywhere on the member, where it occurs and the combination (and, with pattern live load, the loaded spans) that produces it. Found exactly from each combination's curves. Signs: loads down +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.PEAKS("6 8 6", A2:F9, "ASCE7-2.3.1", , 20000, "standard L")
+ * Governing peaks over combinations: largest and smallest shear, moment (slope, deflection with EI), where and which combination. An aid to a qualified engineer; local codes govern. Example: =SPAN.PEAKS("6 8 6", A2:F9, "ASCE7-2.3.1", , 20000, "standard L")
  * @customfunction PEAKS
+ * @helpurl https://localhost:3000/help/peaks.html
+ * @remarks Governing peaks over a list of load combinations: for shear, moment and (with EI) slope and deflection, the largest and smallest value anywhere on the member, where it occurs and the combination (and, with pattern live load, the loaded spans) that produces it. Found exactly from each combination's curves. Signs: loads down +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit): a row or column, or one text cell such as "6 8 6".
- * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation; every load needs a case label.
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation; every load needs a case label. Forces down +, couples clockwise +.
  * @param combos Combinations: a cell or range of texts such as 1.2D+1.6L+0.5S, and/or set names ASCE7-2.3.1, ASCE7-2.4.1, EN1990-6.10.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
  * @param [EI] Flexural stiffness: one value or one per span. Adds the slope and deflection rows.
@@ -195,8 +215,10 @@ export function peaks(spans: any[][], loads: any[][], combos: any[][], supports?
 }
 
 /**
- * Influence line ordinates: the value of an effect caused by a unit downward load at each position, from an exact solve of the member (continuous spans, springs and hinges included). For shear at a section, a unit load exactly at the section counts as just left of it. Signs: reactions up +, moment reactions counter-clockwise +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.INFLUENCE("10 10", "moment at 10", A2:A42)
+ * Influence line: an effect (reaction, shear, moment, deflection) for a unit downward load at each position. An aid to a qualified engineer; local codes govern. Example: =SPAN.INFLUENCE("10 10", "moment at 10", A2:A42)
  * @customfunction INFLUENCE
+ * @helpurl https://localhost:3000/help/influence.html
+ * @remarks Influence line ordinates: the value of an effect caused by a unit downward load at each position, from an exact solve of the member (continuous spans, springs and hinges included). For shear at a section, a unit load exactly at the section counts as just left of it. Signs: reactions up +, moment reactions counter-clockwise +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit): a row or column, or one text cell such as "10 10".
  * @param effect What is measured: "reaction 2" (vertical reaction at node 2, nodes numbered from 1 at the left end), "moment reaction 1", "shear at 4.5", "moment at 6" or "deflection at 3" (needs EI).
  * @param positions Unit-load positions from the left end: a cell, row, column or block; the result has the same shape.
@@ -209,8 +231,10 @@ export function influence(spans: any[][], effect: any, positions: any[][], suppo
 }
 
 /**
- * Moving loads: a train of axle loads crossing the member in both directions; the largest and smallest value of an effect and where the train stands. Between positions where an axle meets a node or the section the effect is a polynomial in the train position, so peaks are found exactly, not by stepping. Signs: loads down +, sagging M +, reactions up +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.MOVING("12", "35 145 145", "4.3 4.3", "absolute moment")
+ * Moving axle loads in both directions: largest and smallest effect and where the train stands, found exactly. An aid to a qualified engineer; local codes govern. Example: =SPAN.MOVING("12", "35 145 145", "4.3 4.3", "absolute moment")
  * @customfunction MOVING
+ * @helpurl https://localhost:3000/help/moving.html
+ * @remarks Moving loads: a train of axle loads crossing the member in both directions; the largest and smallest value of an effect and where the train stands. Between positions where an axle meets a node or the section the effect is a polynomial in the train position, so peaks are found exactly, not by stepping. Signs: loads down +, sagging M +, reactions up +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit): a row or column, or one text cell such as "12".
  * @param axles Axle loads, first axle first (force, down +): a row or column, or one text cell such as "35 145 145".
  * @param spacings Distances between consecutive axles (length): one fewer than the axles; blank for one axle.
@@ -224,8 +248,10 @@ export function moving(spans: any[][], axles: any[][], spacings: any[][], effect
 }
 
 /**
- * The individual combinations of a named set, one per row, ready to feed ENVELOPE or PEAKS or to inspect: ASCE7-2.3.1 (ASCE/SEI 7 strength design basic combinations), ASCE7-2.4.1 (allowable stress design), EN1990-6.10 (EN 1990 expression 6.10 with gamma G 1.35 or 1.0 and gamma Q 1.5, each variable case leading in turn). "Lr or S or R" alternatives become separate combinations. Results are an aid to a qualified engineer: check them; local codes govern, and decide which combinations apply. Example: =SPAN.COMBOS("EN1990-6.10", "Q 0.7, S 0.5", "Q S")
+ * The individual combinations of a named set (ASCE7-2.3.1, ASCE7-2.4.1, EN1990-6.10), one per row. An aid to a qualified engineer; local codes govern. Example: =SPAN.COMBOS("EN1990-6.10", "Q 0.7, S 0.5", "Q S")
  * @customfunction COMBOS
+ * @helpurl https://localhost:3000/help/combos.html
+ * @remarks The individual combinations of a named set, one per row, ready to feed ENVELOPE or PEAKS or to inspect: ASCE7-2.3.1 (ASCE/SEI 7 strength design basic combinations), ASCE7-2.4.1 (allowable stress design), EN1990-6.10 (EN 1990 expression 6.10 with gamma G 1.35 or 1.0 and gamma Q 1.5, each variable case leading in turn). "Lr or S or R" alternatives become separate combinations. Results are an aid to a qualified engineer: check them; local codes govern, and decide which combinations apply.
  * @param set The set name: ASCE7-2.3.1, ASCE7-2.4.1 or EN1990-6.10.
  * @param [psi0] EN 1990 only: psi0 for the accompanying variable cases, one number or pairs such as "Q 0.7, S 0.5".
  * @param [cases] EN 1990 only: the variable case labels (default Q); G is the permanent case.
@@ -242,8 +268,10 @@ export function combos(set: any, psi0?: any, cases?: any[][]): any[][] {
 // ---------------------------------------------------------------------------------------
 
 /**
- * Section properties of a rectangle, solid circle, box (hollow rectangle), tube (hollow circle), symmetric I, channel or tee, sharp-cornered: rows property, value, unit (area, Ix, Iy, Sx top, Sx bottom, Sy left, Sy right, Zx, Zy, rx, ry, Qx, width at axis, Q/t max, centroid x, centroid y). Axes: x horizontal (bending about x is the usual, strong-axis case), y vertical; centroid from the left and bottom edges; tee flange at the top, channel web at the left. S = I / (distance to that fibre); Z plastic (equal areas); Qx first moment of the area above the neutral axis. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.SECTION("I", "400 180 13.5 8.6", "mm")
+ * Section properties (area, I, S, Z, r, Q, centroid) of a rectangle, circle, box, tube, I, channel or tee, sharp-cornered. An aid to a qualified engineer; local codes govern. Example: =SPAN.SECTION("I", "400 180 13.5 8.6", "mm")
  * @customfunction SECTION
+ * @helpurl https://localhost:3000/help/section.html
+ * @remarks Section properties of a rectangle, solid circle, box (hollow rectangle), tube (hollow circle), symmetric I, channel or tee, sharp-cornered: rows property, value, unit (area, Ix, Iy, Sx top, Sx bottom, Sy left, Sy right, Zx, Zy, rx, ry, Qx, width at axis, Q/t max, centroid x, centroid y). Axes: x horizontal (bending about x is the usual, strong-axis case), y vertical; centroid from the left and bottom edges; tee flange at the top, channel web at the left. S = I / (distance to that fibre); Z plastic (equal areas); Qx first moment of the area above the neutral axis. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param shape rectangle, circle, box, tube, I, channel or tee (also rect, round, hollow rectangle, pipe, hollow circle).
  * @param dimensions In order, a row, column or one text cell: rectangle b h; circle d; box b h t (wall); tube d t (wall); I, channel, tee: d (overall depth) bf (flange width) tf (flange thickness) tw (web or stem thickness).
  * @param [unit] Length unit of the dimensions, such as mm, cm, m, in or ft. Blank = no unit: results in the dimensions' unit.
@@ -255,8 +283,10 @@ export function section(shape: any, dimensions: any[][], unit?: any, resultUnit?
 }
 
 /**
- * Extreme-fibre bending stress M/S from the member's largest and smallest moments: rows top and bottom with the largest stress, its x, the smallest stress, its x. Tension +, compression -; sagging moment (+) compresses the top. Signs: loads down +, couples clockwise +. A check of the stated section only: the governing code and a qualified engineer decide the allowable stress. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.STRESS("20 15", "udl 1.2 D; point 8 at 10 L", G2:I17, , , "1.2D+1.6L", "length=ft, force=kip, stress=ksi")
+ * Bending stress M/S at the top and bottom fibres: largest and smallest, with x (tension +). An aid to a qualified engineer; local codes govern. Example: =SPAN.STRESS("20 15", "udl 1.2 D; point 8 at 10 L", G2:I17, , , "1.2D+1.6L")
  * @customfunction STRESS
+ * @helpurl https://localhost:3000/help/stress.html
+ * @remarks Extreme-fibre bending stress M/S from the member's largest and smallest moments: rows top and bottom with the largest stress, its x, the smallest stress, its x. Tension +, compression -; sagging moment (+) compresses the top. Signs: loads down +, couples clockwise +. A check of the stated section only: the governing code and a qualified engineer decide the allowable stress. Results are an aid to a qualified engineer: check them; local codes govern. With unit labels, Example: =SPAN.STRESS("20 15", "udl 1.2 D; point 8 at 10 L", G2:I17, , , "1.2D+1.6L", "length=ft, force=kip, stress=ksi")
  * @param spans Span lengths left to right (the length unit of units, or any consistent unit): a row or column, or one text cell such as "20 15".
  * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation. Forces down +, couples clockwise +; forces in the force unit, intensities in force/length, couples in force x length.
  * @param section Section modulus S (one value, both fibres), or S top and S bottom; or a SPAN.SECTION result (its Sx top and Sx bottom rows, with their units). In section-unit^3.
@@ -271,8 +301,10 @@ export function stress(spans: any[][], loads: any[][], section: any[][], support
 }
 
 /**
- * Shear stress at the largest shear force |V|: the average V/A and the peak V Q/(I t), with x. With a SPAN.SECTION result the peak uses its Q/t max row (the largest Q/t over the depth: at the neutral axis except in a tee whose axis is in its flange). Sign follows V (V = dM/dx). Signs: loads down +, couples clockwise +. A check of the stated section only: the governing code and a qualified engineer decide the allowable stress. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.SHEARSTRESS("6", "udl 20", "0.015 2.8e-5 2.8e-4 0.1", , , , "length=m, force=kN, stress=MPa")
+ * Shear stress at the largest |V|: average V/A and peak VQ/(It), with x. An aid to a qualified engineer; local codes govern. Example: =SPAN.SHEARSTRESS("6", "udl 20", "0.015 2.8e-5 2.8e-4 0.1", , , , "length=m, force=kN, stress=MPa")
  * @customfunction SHEARSTRESS
+ * @helpurl https://localhost:3000/help/shearstress.html
+ * @remarks Shear stress at the largest shear force |V|: the average V/A and the peak V Q/(I t), with x. With a SPAN.SECTION result the peak uses its Q/t max row (the largest Q/t over the depth: at the neutral axis except in a tee whose axis is in its flange). Sign follows V (V = dM/dx). Signs: loads down +, couples clockwise +. A check of the stated section only: the governing code and a qualified engineer decide the allowable stress. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (the length unit of units, or any consistent unit): a row or column, or one text cell such as "20 15".
  * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation. Forces down +, couples clockwise +.
  * @param section A (area: average only), or A I Q t (area, second moment, first moment about the neutral axis of the area beyond the point, width there), in section-unit powers; or a SPAN.SECTION result.
@@ -287,8 +319,10 @@ export function shearStress(spans: any[][], loads: any[][], section: any[][], su
 }
 
 /**
- * Deflection check per span: the largest deflection in each span (by magnitude, down +, from the undeflected axis, spring settlement included), span/deflection, and pass when span/deflection >= the stated limit's divisor. The limit is the engineer's: typical floor limits (such as L/360 live, L/240 total) come from the governing building code's table of deflection limits, which also says how cantilevers count; the code and a qualified engineer decide. Needs EI (#N/A without it). Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.DEFLECTIONCHECK("20 15", "udl 0.8 L", "L/360", , 2.4e6, , "length=ft, force=kip, EI=kip*in^2, deflection=in")
+ * Per span: largest deflection, span/deflection, pass/fail against your limit. An aid to a qualified engineer; local codes govern. Example: =SPAN.DEFLECTIONCHECK("20 15", "udl 0.8 L", "L/360", , 2.4e6, , "length=ft, force=kip, EI=kip*in^2, deflection=in")
  * @customfunction DEFLECTIONCHECK
+ * @helpurl https://localhost:3000/help/deflectioncheck.html
+ * @remarks Deflection check per span: the largest deflection in each span (by magnitude, down +, from the undeflected axis, spring settlement included), span/deflection, and pass when span/deflection >= the stated limit's divisor. The limit is the engineer's: typical floor limits (such as L/360 live, L/240 total) come from the governing building code's table of deflection limits, which also says how cantilevers count; the code and a qualified engineer decide. Needs EI (#N/A without it). Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (the length unit of units, or any consistent unit): a row or column, or one text cell such as "20 15".
  * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation. Forces down +, couples clockwise +.
  * @param limit The stated limit as L/360, span/360 or 360: one for the member or one per span (a row, column or text such as "L/360 L/180").
@@ -303,8 +337,10 @@ export function deflectionCheck(spans: any[][], loads: any[][], limit: any[][], 
 }
 
 /**
- * Utilisation |demand| / capacity, cell by cell (one capacity for all, or one per demand); at most 1 means the demand is within the stated capacity. The capacity is the engineer's: the governing code and a qualified engineer decide it. Signs: loads down +, so demands may be negative; the ratio uses the magnitude. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.UTILISATION(B4, 250, "kip*ft", "kN*m")
+ * Utilisation |demand| / capacity, cell by cell, with optional units. An aid to a qualified engineer; local codes govern. Example: =SPAN.UTILISATION(B4, 250, "kip*ft", "kN*m")
  * @customfunction UTILISATION
+ * @helpurl https://localhost:3000/help/utilisation.html
+ * @remarks Utilisation |demand| / capacity, cell by cell (one capacity for all, or one per demand); at most 1 means the demand is within the stated capacity. The capacity is the engineer's: the governing code and a qualified engineer decide it. Signs: loads down +, so demands may be negative; the ratio uses the magnitude. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param demand Demand values (moment, shear, stress, deflection...): a cell or range; the result has its shape.
  * @param capacity Capacity (> 0) in the same quantity: one cell, or a range the size of demand.
  * @param [demandUnit] Unit of the demand, such as kip*ft. Give both units or neither.
@@ -316,8 +352,10 @@ export function utilisation(demand: any[][], capacity: any[][], demandUnit?: any
 }
 
 /**
- * Converts values between units of the same quantity: length (m, mm, cm, ft, in), force (N, kN, lbf, kip), force/length (kN/m, kip/ft, plf, klf), moment (kN*m, kip*ft, kip*in), stress (Pa, kPa, MPa, GPa, psi, ksi, psf), I (mm^4, in^4), EI (kN*m^2, kip*in^2) and any product of these; factors from NIST SP 811. Signs: loads down + is kept (values keep their sign). Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.CONVERT(1.2, "kip/ft", "kN/m")
+ * Converts values between units of the same quantity (NIST SP 811 factors). An aid to a qualified engineer; local codes govern. Example: =SPAN.CONVERT(1.2, "kip/ft", "kN/m")
  * @customfunction CONVERT
+ * @helpurl https://localhost:3000/help/convert.html
+ * @remarks Converts values between units of the same quantity: length (m, mm, cm, ft, in), force (N, kN, lbf, kip), force/length (kN/m, kip/ft, plf, klf), moment (kN*m, kip*ft, kip*in), stress (Pa, kPa, MPa, GPa, psi, ksi, psf), I (mm^4, in^4), EI (kN*m^2, kip*in^2) and any product of these; factors from NIST SP 811. Signs: loads down + is kept (values keep their sign). Results are an aid to a qualified engineer: check them; local codes govern.
  * @param value The values: a cell or range; the result has its shape.
  * @param from Unit of the values, such as kip*ft (no spaces inside a unit).
  * @param to Unit wanted, such as kN*m: must measure the same quantity.
@@ -328,8 +366,10 @@ export function convertUnits(value: any[][], from: any, to: any): any[][] {
 }
 
 /**
- * Flexural stiffness EI from E and I given separately, optionally in their own units and converted to the unit wanted (for example E in ksi and I in in^4 to EI in kip*ft^2), ready for the EI argument. Signs: loads down + (EI is positive). Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.STIFFNESS(29000, 510, "ksi", "in^4", "kip*ft^2")
+ * Flexural stiffness EI from E and I, optionally in their own units and converted. An aid to a qualified engineer; local codes govern. Example: =SPAN.STIFFNESS(29000, 510, "ksi", "in^4", "kip*ft^2")
  * @customfunction STIFFNESS
+ * @helpurl https://localhost:3000/help/stiffness.html
+ * @remarks Flexural stiffness EI from E and I given separately, optionally in their own units and converted to the unit wanted (for example E in ksi and I in in^4 to EI in kip*ft^2), ready for the EI argument. Signs: loads down + (EI is positive). Results are an aid to a qualified engineer: check them; local codes govern.
  * @param E Modulus of elasticity (> 0): a cell or range.
  * @param I Second moment of area (> 0): one cell, or a range the size of E (one per span).
  * @param [EUnit] Unit of E, such as ksi, MPa or GPa. Give the units of both E and I, or neither.

@@ -1,6 +1,7 @@
 /**
  * The `spanwise` command: `calc` evaluates workbooks headless, `demo` writes the demo
- * workbook, `start` builds and serves the add-in and the workbench (see start.ts).
+ * workbook, `start` builds and serves the add-in and the workbench (see start.ts), `stop`
+ * stops it and removes the sideload registration (stop.ts).
  */
 import { optionText, parseArgs } from "./args";
 import { calc } from "./calc";
@@ -15,6 +16,8 @@ export const USAGE = `usage:
       writes the demo workbook (default ${DEMO_WORKBOOK}).
   spanwise start [--port <n>]
       builds and serves the add-in and the workbench over HTTPS on localhost.
+  spanwise stop
+      stops that server and removes the add-in's sideload registration.
 `;
 
 const defaultIo: Io = { stdout: process.stdout, stderr: process.stderr };
@@ -36,6 +39,11 @@ export async function main(argv: readonly string[], io: Io = defaultIo): Promise
         const args = parseArgs(rest, ["port"], []);
         const { start } = await import("./start");
         return await start({ port: Number(optionText(args, "port") ?? 3000) }, io);
+      }
+      case "stop": {
+        parseArgs(rest, [], []);
+        const { stop } = await import("./stop");
+        return await stop(io);
       }
       case undefined:
       case "help":

@@ -58,3 +58,36 @@ export function applySideload(plan: SideloadPlan): string {
       return `Not sideloaded: ${plan.reason}. Open the workbench instead.`;
   }
 }
+
+export type UnsideloadPlan =
+  | { kind: "registry"; key: string; name: string }
+  | { kind: "remove"; file: string }
+  | { kind: "none"; reason: string };
+
+/** Undoing `sideloadPlan` for `npm run stop` (pure): the same registry value or copied file. */
+export function unsideloadPlan(platform: string, home: string, manifestXml: string, exists: (file: string) => boolean): UnsideloadPlan {
+  if (platform === "win32") return { kind: "registry", key: DEVELOPER_KEY, name: manifestId(manifestXml) };
+  if (platform === "darwin") {
+    const file = path.join(home, MAC_CONTAINER, "Data", "Documents", "wef", `spanwise-${manifestId(manifestXml)}.xml`);
+    return exists(file) ? { kind: "remove", file } : { kind: "none", reason: "no sideloaded copy of the manifest" };
+  }
+  return { kind: "none", reason: `no desktop spreadsheet host on ${platform}` };
+}
+
+/** Carries out an unsideload plan; returns a line saying what was done. */
+export function applyUnsideload(plan: UnsideloadPlan): string {
+  switch (plan.kind) {
+    case "registry":
+      try {
+        execFileSync("reg", ["delete", plan.key, "/v", plan.name, "/f"], { stdio: "pipe" });
+        return `Removed the sideload registration ${plan.key}\\${plan.name}; restart the host to drop the add-in.`;
+      } catch {
+        return `No sideload registration to remove (${plan.key}\\${plan.name}).`;
+      }
+    case "remove":
+      fs.rmSync(plan.file, { force: true });
+      return `Removed the sideloaded manifest ${plan.file}; restart the host to drop the add-in.`;
+    case "none":
+      return `Nothing to unsideload: ${plan.reason}.`;
+  }
+}

@@ -48,11 +48,36 @@ export function parseCombination(text: string | null | undefined): Combination {
   return { text: source.trim(), terms };
 }
 
+/**
+ * The exact decimal digits of an integer-valued double of any size, without BigInt (the
+ * functions' runtime on Windows supports ECMAScript 2016 only): halve exactly down to a safe
+ * integer, then double the digit string back up.
+ */
+export function integerDigits(value: number): string {
+  let halvings = 0;
+  let m = value;
+  while (m > Number.MAX_SAFE_INTEGER) {
+    m /= 2;
+    halvings++;
+  }
+  const digits = String(m).split("").reverse().map(Number);
+  for (let k = 0; k < halvings; k++) {
+    let carry = 0;
+    for (let i = 0; i < digits.length; i++) {
+      const d = digits[i] * 2 + carry;
+      digits[i] = d % 10;
+      carry = d >= 10 ? 1 : 0;
+    }
+    if (carry) digits.push(carry);
+  }
+  return digits.reverse().join("");
+}
+
 /** A factor written without an exponent, so that the text parses back to the same factor. */
 function plainDecimal(value: number): string {
   const text = String(value);
   if (!/e/i.test(text)) return text;
-  if (value >= 1e21) return BigInt(value).toString();
+  if (value >= 1e21) return integerDigits(value);
   const digits = Math.min(100, Math.max(0, 20 - Math.floor(Math.log10(value))));
   return value.toFixed(digits).replace(/\.?0+$/, "");
 }

@@ -14,8 +14,11 @@ interface RuntimeErrors {
   ErrorCode: { invalidValue: string; notAvailable: string };
 }
 
+/** The host's global (no `globalThis`: the functions' runtime on Windows supports ECMAScript 2016 only). */
+declare const CustomFunctions: Partial<RuntimeErrors> | undefined;
+
 function runtime(): RuntimeErrors | null {
-  const candidate = (globalThis as { CustomFunctions?: Partial<RuntimeErrors> }).CustomFunctions;
+  const candidate = typeof CustomFunctions === "undefined" ? undefined : CustomFunctions;
   if (candidate && typeof candidate.Error === "function" && candidate.ErrorCode) return candidate as RuntimeErrors;
   return null;
 }

@@ -110,8 +110,10 @@ export function catalogueMismatches(functions: MetadataFunction[]): string[] {
     if (!f.description || !/aid to a qualified engineer/.test(f.description) || !/local codes govern/.test(f.description)) {
       out.push(`${entry.id}: help lacks the caution`);
     }
-    const takesLoads = entry.parameters.some(([name]) => name === "loads");
-    if (!f.description || (takesLoads && !/loads down \+/.test(f.description)) || !/Example: =SPAN\./.test(f.description)) {
+    // The load sign convention sits in the loads argument's own help (the description is kept
+    // within 255 characters; the full conventions are on the function's help page).
+    const loads = f.parameters.find((p) => p.name === "loads");
+    if (!f.description || (loads && !/down \+/.test(loads.description ?? "")) || !/Example: =SPAN\./.test(f.description)) {
       out.push(`${entry.id}: help lacks the sign convention or an example`);
     }
   }

@@ -1,8 +1,9 @@
 /**
  * manifest.xml checked offline: well-formed XML (the strict sax parser that office-addin-manifest
- * reads XML manifests with, plus a single root element), the custom-functions extension point as the add-in
- * needs it, and the schema check of its unified-JSON conversion (office-addin-manifest-converter
- * then office-addin-manifest validate, which checks .json manifests against bundled schemas).
+ * reads XML manifests with, plus a single root element), the custom-functions extension point as
+ * the add-in needs it, and validation with xmllint against Microsoft's XSDs for the add-in-only
+ * manifest (../shared/office-schemas, build/validate.js, the same check as `npm run validate`).
+ * The built and production manifests are validated in tests/functions/production.test.ts.
  */
 import { execFileSync } from "child_process";
 import * as fs from "fs";
@@ -15,7 +16,12 @@ const manifestPath = path.join(root, "manifest.xml");
 const converterDir = path.dirname(require.resolve("office-addin-manifest-converter/package.json"));
 const load = createRequire(__filename);
 const { DOMParser } = load(require.resolve("@xmldom/xmldom", { paths: [converterDir] }));
-const bin = (name: string) => path.join(root, "node_modules", ".bin", name);
+// eslint-disable-next-line @typescript-eslint/no-require-imports
+const { findSchemas, validateManifest, MAIN_SCHEMA } = require("../../build/validate") as {
+  findSchemas: () => string | null;
+  validateManifest: (file: string) => { ok: boolean; output: string };
+  MAIN_SCHEMA: string;
+};
 
 const manifestToolDir = path.dirname(require.resolve("office-addin-manifest/package.json"));
 const xml2jsDir = path.dirname(require.resolve("xml2js/package.json", { paths: [manifestToolDir] }));
@@ -72,6 +78,10 @@ describe("manifest.xml", () => {
     expect(sets).toContain("CustomFunctionsRuntime");
   });
 
+  test("the support page is a page of its own (support.html), not the functions' runtime page", () => {
+    expect(byTag(doc, "SupportUrl")[0].getAttribute("DefaultValue")).toBe("https://localhost:3000/support.html");
+  });
+
   test("asks for the least permission and uses only our own icons from assets/", () => {
     // ReadWriteDocument: the pane reads the member's ranges and writes diagram tables and
     // charts (with consent); nothing needs more (no mailbox, no document-level settings).
@@ -93,38 +103,55 @@ describe("manifest.xml", () => {
     expect(byTag(doc, "Id")[0].textContent).toMatch(/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/);
   });
 
-  describe("conversion to the unified JSON manifest passes the offline schema check", () => {
+  describe("schema validation with xmllint against Microsoft's XSDs (../shared/office-schemas)", () => {
+    // The XSDs of the add-in-only manifest, from the Office Add-ins documentation repository
+    // (../shared/office-schemas/README.md). The unified-JSON conversion that was checked here
+    // before drops the custom functions, so it proved nothing about them.
     const work = fs.mkdtempSync(path.join(os.tmpdir(), "spanwise-manifest-"));
-    let json = "";
-    beforeAll(() => {
-      fs.copyFileSync(manifestPath, path.join(work, "manifest.xml"));
-      execFileSync(bin("office-addin-manifest-converter"), ["convert", "manifest.xml", "--output", "out"], { cwd: work, stdio: "pipe", timeout: 60000 });
-      json = path.join(work, "out", "manifest.json");
-    }, 90000);
     afterAll(() => fs.rmSync(work, { recursive: true, force: true }));
-
-    const validate = (file: string) => {
-      try {
-        const output = execFileSync(bin("office-addin-manifest"), ["validate", file], { cwd: work, stdio: "pipe", timeout: 60000 }).toString();
-        return { ok: !/error/i.test(output), output };
-      } catch (e) {
-        return { ok: false, output: String((e as { stdout?: Buffer }).stdout ?? e) };
-      }
+    const variant = (name: string, text: string) => {
+      const file = path.join(work, name);
+      fs.writeFileSync(file, text);
+      return file;
     };
 
-    test("the converted manifest validates", () => {
-      const manifest = JSON.parse(fs.readFileSync(json, "utf8"));
-      expect(manifest.id).toBe(byTag(doc, "Id")[0].textContent);
-      expect(validate(json)).toEqual({ ok: true, output: "" });
-    }, 90000);
+    test("the schemas are found beside the repository", () => {
+      expect(findSchemas()).not.toBeNull();
+      expect(fs.existsSync(path.join(findSchemas() as string, MAIN_SCHEMA))).toBe(true);
+    });
 
-    test("the schema check rejects a broken manifest (control)", () => {
-      const manifest = JSON.parse(fs.readFileSync(json, "utf8"));
-      manifest.id = "not a guid";
-      manifest.version = 7;
-      const broken = path.join(work, "broken.json");
-      fs.writeFileSync(broken, JSON.stringify(manifest));
-      expect(validate(broken).ok).toBe(false);
-    }, 90000);
+    test("manifest.xml validates", () => {
+      expect(validateManifest(manifestPath)).toEqual({ ok: true, output: "" });
+    });
+
+    test.each([
+      ["an unknown element", xml.replace("<Permissions>", "<Permission>x</Permission><Permissions>")],
+      ["a wrong permission value", xml.replace("<Permissions>ReadWriteDocument<", "<Permissions>Everything<")],
+      ["an extension point of an unknown type", xml.replace('xsi:type="CustomFunctions"', 'xsi:type="CustomFunctionz"')],
+      ["a custom-functions point with an unknown child", xml.replace(/<Namespace resid="Functions.Namespace"\/>/, '<Namespace resid="Functions.Namespace"/><Runtime/>')],
+      ["a Script without a SourceLocation", xml.replace(/<Script>\s*<SourceLocation resid="Functions.Script.Url"\/>\s*<\/Script>/, "<Script></Script>")],
+      ["a missing Id", xml.replace(/<Id>[^<]*<\/Id>/, "")],
+      ["elements out of order", xml.replace(/(<Version>[^<]*<\/Version>)(\s*)(<ProviderName>[^<]*<\/ProviderName>)/, "$3$2$1")],
+    ])("control: %s is rejected", (_what, broken) => {
+      expect(broken).not.toBe(xml);
+      const result = validateManifest(variant("broken.xml", broken));
+      expect(result.ok).toBe(false);
+      expect(result.output).toMatch(/fails to validate|error/i);
+    });
+
+    test("npm run validate checks manifest.xml and exits 0, and exits 1 on a broken one", () => {
+      const script = path.join(root, "build", "validate.js");
+      expect(execFileSync(process.execPath, [script, manifestPath], { encoding: "utf8" })).toMatch(/valid against/);
+      const broken = variant("broken-cli.xml", xml.replace("<Permissions>ReadWriteDocument<", "<Permissions>Everything<"));
+      let status = 0;
+      try {
+        execFileSync(process.execPath, [script, broken], { stdio: "pipe" });
+      } catch (e) {
+        status = (e as { status: number }).status;
+      }
+      expect(status).toBe(1);
+      const pkg = JSON.parse(fs.readFileSync(path.join(root, "package.json"), "utf8"));
+      expect(pkg.scripts.validate).toBe("node build/validate.js");
+    });
   });
 });

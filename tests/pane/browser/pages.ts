@@ -17,10 +17,11 @@ export function buildPages(): Promise<void> {
   // eslint-disable-next-line @typescript-eslint/no-require-imports
   const config = require(path.join(ROOT, "webpack.config.js")) as {
     addinConfig(env: unknown, argv: unknown): webpack.Configuration;
+    paneConfig(env: unknown, argv: unknown): webpack.Configuration;
     workbenchConfig(env: unknown, argv: unknown): webpack.Configuration;
   };
   const argv = { mode: "development" };
-  const configs = [config.addinConfig({}, argv), config.workbenchConfig({}, argv)].map((c) => ({
+  const configs = [config.addinConfig({}, argv), config.paneConfig({}, argv), config.workbenchConfig({}, argv)].map((c) => ({
     ...c,
     devtool: false as const,
     output: { ...c.output, path: OUT },
