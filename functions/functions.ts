@@ -388,6 +388,8 @@ export function stiffness(E: any[][], I: any[][], EUnit?: any, IUnit?: any, resu
 /**
  * Each span's peaks: span, length, max M, x, min M, x, largest |V|, x, largest |deflection|, x ("" without EI); loads down +, sagging M +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.SPANPEAKS("6 8", "udl 2")
  * @customfunction SPANPEAKS
+ * @helpurl https://localhost:3000/help/spanpeaks.html
+ * @remarks Peaks of each span, one row per span: span number, length, largest moment and its x, smallest moment and its x, largest |V| (signed) and its x, largest |deflection| (signed) and its x (blank without EI). Each span's own exact pieces are searched, both ends included, so a hogging moment over an interior support is the smallest moment of both spans beside it; moment peaks come from the roots of V, deflection peaks from the roots of the slope, never from sampling. Signs: loads down +, couples clockwise +, sagging moment +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right: a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
@@ -403,8 +405,10 @@ export function spanPeaks(spans: any[][], loads: any[][], supports?: any[][], EI
 /**
  * Reactions per load case, unfactored: rows x, one column per case (in first-use order), then the combo's; loads down +, reactions up +. Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.CASEREACTIONS("6 8", A2:F9)
  * @customfunction CASEREACTIONS
+ * @helpurl https://localhost:3000/help/casereactions.html
+ * @remarks Reactions by load case, unfactored: one row per node with its x, then one column per case label in the order the loads first use the labels (loads without a label form one case of their own), then, when combo is given, the combination's reactions (the same numbers as SPAN.REACTIONS with that combination). reaction: blank or vertical for vertical reactions (up +), moment for moment reactions (counter-clockwise +). At most 50 case labels. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right: a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell such as "udl 2.5 D; point 10 at 3 L". One column per case label; at most 50 labels.
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +. One column per case label; at most 50 labels.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
  * @param [EI] Flexural stiffness, one value or one per span. Needed for springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L: adds a last column with the factored reactions. Blank = no combination column.
@@ -419,12 +423,14 @@ export function caseReactions(spans: any[][], loads: any[][], supports?: any[][]
 /**
  * Natural frequencies in bending (exact, Euler-Bernoulli): rows mode, Hz, rad/s; loads down + (load/g adds mass). Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.FREQUENCIES("6 6", 2e5, 0.3, 3)
  * @customfunction FREQUENCIES
+ * @helpurl https://localhost:3000/help/frequencies.html
+ * @remarks Natural frequencies in bending of the member, lowest first: mode number, frequency in Hz, circular frequency in rad/s. Exact for an Euler-Bernoulli beam (no shear deformation, no rotary inertia): exact dynamic-stiffness elements with the Wittrick-Williams count, so no mode is missed. Mass per length in force x s^2 / length^2, plus the weight of the given loads divided by g. Whether a floor's vibration is acceptable is for the governing guide and the engineer to decide. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right: a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param EI Flexural stiffness, one value or one per span (force x length^2, or the EI unit of units). Required.
  * @param mass Mass per length, one value or one per span, in force x s^2 / length^2 (t/m with kN and m, kg/m with N and m), so sqrt(EI/(m L^4)) is 1/s. Blank = 0 (mass from loads).
  * @param [modes] How many frequencies, lowest first: a whole number from 1 to 50. Blank = 1. Floor vibration acceptance is the governing guide's and the engineer's call, not checked here.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
- * @param [loads] Loads whose weight adds mass (load / g): point loads give point masses, uniform loads uniform mass; couples and varying linear loads are refused. Table or text.
+ * @param [loads] Loads whose weight adds mass (load / g): point loads give point masses, uniform loads uniform mass; couples and varying linear loads are refused. Table or text; forces down +.
  * @param [combo] Combination that gives the mass loads, such as D+0.1L. Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=m, force=kN, EI=kN*m^2": lengths, loads and EI in these units; mass in force x s^2 / length^2 of them. Blank = consistent units.
  * @param [g] Acceleration of gravity for loads/g, in the length unit per s^2 (9.80665 for m, 32.174 for ft). Blank = standard gravity in the units' length unit; needed with loads and no units.
@@ -437,13 +443,15 @@ export function frequencies(spans: any[][], EI: any[][], mass: any[][], modes?: 
 /**
  * Mode shape: one mode's deflection at each x, scaled to a largest |w| of 1 (leftmost peak +); loads down + (load/g adds mass). Results are an aid to a qualified engineer: check them; local codes govern. Example: =SPAN.MODESHAPE("6 6", 2e5, 0.3, 1, A2:A40)
  * @customfunction MODESHAPE
+ * @helpurl https://localhost:3000/help/modeshape.html
+ * @remarks The shape of one natural mode at each x, scaled so that its largest |w| is 1 with the leftmost such peak positive (down +). A mode whose frequency equals a neighbour's to 8 digits has no unique shape and is refused. Mass as for SPAN.FREQUENCIES. Whether a floor's vibration is acceptable is for the governing guide and the engineer to decide. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right: a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param EI Flexural stiffness, one value or one per span (force x length^2, or the EI unit of units). Required.
  * @param mass Mass per length, one value or one per span, in force x s^2 / length^2 (t/m with kN and m, kg/m with N and m). Blank = 0 (mass from loads).
  * @param mode Which mode: 1 for the lowest frequency, up to 50. A repeated frequency has no unique shape and is refused.
  * @param x Positions from the member's left end: a cell, row, column or block (at most 10001 cells); the result has its shape, blank cells give blanks.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
- * @param [loads] Loads whose weight adds mass (load / g), as for SPAN.FREQUENCIES. Table or text.
+ * @param [loads] Loads whose weight adds mass (load / g), as for SPAN.FREQUENCIES. Table or text; forces down +.
  * @param [combo] Combination that gives the mass loads, such as D+0.1L. Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=m, force=kN, EI=kN*m^2", as for SPAN.FREQUENCIES. Blank = consistent units.
  * @param [g] Acceleration of gravity for loads/g in the length unit per s^2. Blank = standard gravity in the units' length unit.
