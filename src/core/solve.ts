@@ -103,7 +103,7 @@ export function solve(member: Member): Solution {
     nodeForce[e + 1] += end[2];
     nodeMoment[e + 1] += end[3];
     const start = { shear: -end[0], moment: end[1], slope: local[1], deflection: local[0] };
-    integrateSpan(start, spanLoads[e], span, layout.nodeX[e], 1 / ei, pieces);
+    integrateSpan(start, spanLoads[e], span, layout.nodeX[e], layout.nodeX[e + 1], 1 / ei, pieces);
   }
   const loadScale = loadScaleOf(member, layout.length);
   const forceScale = loadScale;
