@@ -11,18 +11,27 @@ export interface SpanStart {
 
 /** The span's breakpoints in t, ascending and distinct, and the absolute x of each (a node's or a load's own x). */
 function breakpoints(loads: SpanLoad[], span: number, xLeft: number, xRight: number): { t: number[]; x: number[] } {
-  const points: Array<[number, number]> = [[0, xLeft], [span, xRight]];
+  if (loads.length === 0) return { t: [0, span], x: [xLeft, xRight] };
+  const ts = [0, span];
+  const xs = [xLeft, xRight];
   for (const load of loads) {
-    if (load.kind === "distributed") points.push([load.from, load.xFrom], [load.to, load.xTo]);
-    else points.push([load.at, load.x]);
+    if (load.kind === "distributed") {
+      ts.push(load.from, load.to);
+      xs.push(load.xFrom, load.xTo);
+    } else {
+      ts.push(load.at);
+      xs.push(load.x);
+    }
   }
-  points.sort((a, b) => a[0] - b[0]);
+  const order = ts.map((_, i) => i);
+  order.sort((a, b) => ts[a] - ts[b]);
   const t: number[] = [];
   const x: number[] = [];
-  for (const [pt, px] of points) {
+  for (const i of order) {
+    const pt = ts[i];
     if (pt < 0 || pt > span || (t.length > 0 && pt <= t[t.length - 1])) continue;
     t.push(pt);
-    x.push(pt === 0 ? xLeft : pt === span ? xRight : px);
+    x.push(pt === 0 ? xLeft : pt === span ? xRight : xs[i]);
   }
   return { t, x };
 }

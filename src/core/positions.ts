@@ -54,15 +54,11 @@ export function spanIndexAt(nodeX: readonly number[], x: number): number {
 export function nodeIndexAt(nodeX: readonly number[], x: number): number {
   const tol = positionTolerance(nodeX[nodeX.length - 1]);
   const i = spanIndexAt(nodeX, x);
-  let best = -1;
-  let gap = Infinity;
-  for (const j of [i, i + 1]) {
-    if (j < nodeX.length && Math.abs(x - nodeX[j]) <= tol && Math.abs(x - nodeX[j]) < gap) {
-      best = j;
-      gap = Math.abs(x - nodeX[j]);
-    }
-  }
-  return best;
+  const below = Math.abs(x - nodeX[i]);
+  const above = i + 1 < nodeX.length ? Math.abs(x - nodeX[i + 1]) : Infinity;
+  if (below <= tol && below <= above) return i;
+  if (above <= tol) return i + 1;
+  return -1;
 }
 
 /** x on the member: the node's own x when x is at a node, otherwise x itself (clamped to the ends). */

@@ -25,8 +25,6 @@ function loadScaleOf(member: Member, length: number): number {
 }
 
 const QUANTITIES: Quantity[] = ["shear", "moment", "slope", "deflection"];
-/** Where each piece is sampled for the quantities' own scales (its ends, quarter points and middle). */
-const SAMPLES = [0, 0.25, 0.5, 0.75, 1];
 
 /** The sum of the magnitudes of a quantity's terms at the end of a piece: the size its rounding is relative to. */
 function termsAtEnd(p: Piece, quantity: Quantity): number {
@@ -45,8 +43,7 @@ function termsAtEnd(p: Piece, quantity: Quantity): number {
 
 /**
  * Each quantity's own scale: its largest magnitude on the member (sampled at every piece's
- * ends, quarter points and middle, within a small factor of the true largest for these low
- * polynomials), but never below 1% of the size of the terms it is computed from, so that a
+ * ends and middle, within a small factor of the true largest for these low polynomials), but never below 1% of the size of the terms it is computed from, so that a
  * quantity that is zero throughout (to rounding) is not judged against its own noise.
  * cleanZero against this scale zeroes only values below 1e-11 of it.
  */
@@ -55,9 +52,12 @@ function scalesOf(pieces: Piece[]): Record<Quantity, number> {
   for (const quantity of QUANTITIES) {
     let largest = 0;
     let terms = 0;
+    // Shear is linear in a piece without a varying load, so its ends hold its largest value.
+    const middle = quantity !== "shear";
     for (const p of pieces) {
       const span = p.x1 - p.x0;
-      for (const u of SAMPLES) largest = Math.max(largest, Math.abs(pieceValue(p, quantity, u * span)));
+      largest = Math.max(largest, Math.abs(pieceValue(p, quantity, 0)), Math.abs(pieceValue(p, quantity, span)));
+      if (middle || p.q1 !== 0) largest = Math.max(largest, Math.abs(pieceValue(p, quantity, 0.5 * span)));
       terms = Math.max(terms, termsAtEnd(p, quantity));
     }
     scales[quantity] = Math.max(largest, 0.01 * terms);
