@@ -47,8 +47,9 @@ function termsAtEnd(p: Piece, quantity: Quantity): number {
  * quantity that is zero throughout (to rounding) is not judged against its own noise.
  * cleanZero against this scale zeroes only values below 1e-11 of it.
  */
-function scalesOf(pieces: Piece[]): Record<Quantity, number> {
+function scalesOf(pieces: Piece[], answer: StiffnessAnswer): Record<Quantity, number> {
   const scales: Record<Quantity, number> = { shear: 0, moment: 0, slope: 0, deflection: 0 };
+  const solveTerms: Record<Quantity, number> = { shear: answer.forceTerms, moment: answer.momentTerms, slope: 0, deflection: 0 };
   for (const quantity of QUANTITIES) {
     let largest = 0;
     let terms = 0;
@@ -60,7 +61,7 @@ function scalesOf(pieces: Piece[]): Record<Quantity, number> {
       if (middle || p.q1 !== 0) largest = Math.max(largest, Math.abs(pieceValue(p, quantity, 0.5 * span)));
       terms = Math.max(terms, termsAtEnd(p, quantity));
     }
-    scales[quantity] = Math.max(largest, 0.01 * terms);
+    scales[quantity] = Math.max(largest, 0.01 * Math.max(terms, solveTerms[quantity]));
   }
   return scales;
 }
@@ -116,6 +117,9 @@ const CANCELLATION_FOR_DOUBLE = 1e3;
 interface StiffnessAnswer {
   d: Float64Array;
   endForces: number[][];
+  /** The largest sums of magnitudes of the terms the end forces and end moments came from: the size of their rounding. */
+  forceTerms: number;
+  momentTerms: number;
 }
 
 /** The double solve, or null when its accuracy is not assured (a pivot lost digits, or the end forces cancel). */
@@ -133,6 +137,7 @@ function solveInDouble(member: Member, assembly: ReturnType<typeof assembleMembe
   const endForces: number[][] = [];
   let forceTerms = 0;
   let momentTerms = 0;
+  let momentTermsRaw = 0;
   let forces = 0;
   let moments = 0;
   for (let e = 0; e < member.spans.length; e++) {
@@ -148,6 +153,7 @@ function solveInDouble(member: Member, assembly: ReturnType<typeof assembleMembe
         forces = Math.max(forces, Math.abs(end[r]));
       } else {
         momentTerms = Math.max(momentTerms, terms / member.spans[e]);
+        momentTermsRaw = Math.max(momentTermsRaw, terms);
         moments = Math.max(moments, Math.abs(end[r]) / member.spans[e]);
       }
     }
@@ -155,7 +161,13 @@ function solveInDouble(member: Member, assembly: ReturnType<typeof assembleMembe
   }
   const scale = Math.max(forces, moments);
   if (forceTerms > CANCELLATION_FOR_DOUBLE * scale || momentTerms > CANCELLATION_FOR_DOUBLE * scale) return null;
-  return { d, endForces };
+  return { d, endForces, forceTerms, momentTerms: momentTermsRaw };
+}
+
+/** The double-double solve; its results are rounded once, so their rounding is relative to themselves. */
+function preciseAnswer(member: Member, assembly: ReturnType<typeof assembleMember>): StiffnessAnswer {
+  const precise = solvePrecise(member, assembly.layout, assembly.spanLoads, assembly.system.halfBandwidth);
+  return { d: precise.displacements, endForces: precise.endForces, forceTerms: 0, momentTerms: 0 };
 }
 
 /**
@@ -171,8 +183,8 @@ export function solve(member: Member): Solution {
   checkStability(member);
   const assembly = assembleMember(member);
   const { layout, spanLoads } = assembly;
-  const answer = solveInDouble(member, assembly) ?? solvePrecise(member, layout, spanLoads, assembly.system.halfBandwidth);
-  const d = "d" in answer ? answer.d : answer.displacements;
+  const answer = solveInDouble(member, assembly) ?? preciseAnswer(member, assembly);
+  const d = answer.d;
   const value = (dof: number): number => (dof >= 0 ? d[dof] : 0);
   const nodeCount = layout.nodeX.length;
   const nodeForce = new Array<number>(nodeCount).fill(0);
@@ -205,7 +217,7 @@ export function solve(member: Member): Solution {
     }
   });
   const reactions = cleanReactions(raw, loadScale, layout.length);
-  const scales = scalesOf(pieces);
+  const scales = scalesOf(pieces, answer);
   requireFinite(d, pieces, reactions, scales);
   requireEquilibrium(member, reactions, loadScale, layout.length);
   return {
