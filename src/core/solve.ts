@@ -1,6 +1,6 @@
 import { isCollapsedPivot, type PivotStats } from "./banded";
 import { elementDofs } from "./layout";
-import { solvePrecise } from "./precise";
+import { solvePrecise, worstStiffnessRatio } from "./precise";
 import type { Member, Piece, Quantity, Reaction, Solution } from "./model";
 import { pieceValue } from "./polynomial";
 import { cleanZero, EQUILIBRIUM_TOLERANCE } from "./tolerance";
@@ -101,7 +101,7 @@ function requireEquilibrium(member: Member, reactions: Reaction[], loadScale: nu
   const { force, moment } = staticsResidual(member.loads, reactions);
   if (force <= EQUILIBRIUM_TOLERANCE * loadScale && moment <= EQUILIBRIUM_TOLERANCE * loadScale * length) return;
   throw invalid(
-    "the reactions do not balance the loads to rounding (extreme ratios of span, EI or spring stiffness make the stiffness system ill-conditioned); results would not be trustworthy",
+    `the reactions do not balance the loads to rounding (${worstStiffnessRatio(member)}: the stiffness system is too ill-conditioned); results would not be trustworthy`,
   );
 }
 
