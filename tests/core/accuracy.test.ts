@@ -5,6 +5,8 @@
  * load: deflection 7PL^3/768EI under the load, end slope PL^2/32EI; from memory), confirmed
  * by the exact force method in BigInt fixed point (kit/exactForceMethod.ts).
  */
+import { readFileSync } from "fs";
+import { join } from "path";
 import { diagram, solve, valueAt, type Member, type Quantity } from "../../src/core";
 import { exactForceMethodSolve } from "./kit/exactForceMethod";
 import { beam, point, udl } from "./kit/members";
@@ -71,5 +73,14 @@ describe("a refusal names the ratio that causes it", () => {
       message = (error as Error).message;
     }
     expect(message).toMatch(/spring at node \d is .* times the EI\/L\^3 of the span beside it/);
+  });
+});
+
+describe("extended precision stays within the functions bundle's language level", () => {
+  // The bundle must run where the host's custom-functions runtime offers ES2016 (BigInt is
+  // ES2020): double-double needs only + - * / on doubles. Tests may use BigInt (kit/fixed.ts).
+  test.each(["doubleDouble.ts", "precise.ts", "solve.ts", "banded.ts", "refine.ts", "positions.ts", "section.ts", "elementLoads.ts", "pieces.ts"])("src/core/%s uses no BigInt", (name) => {
+    const text = readFileSync(join(__dirname, "..", "..", "src", "core", name), "utf8").replace(/\/\*[\s\S]*?\*\/|\/\/.*$/gm, "");
+    expect(/\bBigInt\b|\bbigint\b|\b\d+n\b/.test(text)).toBe(false);
   });
 });
