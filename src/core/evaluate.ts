@@ -1,8 +1,8 @@
 import { unavailable } from "./errors";
-import { checkedPosition } from "./positions";
+import { checkedPosition, positionTolerance } from "./positions";
 import type { Piece, Quantity, Solution } from "./model";
 import { pieceValue } from "./polynomial";
-import { cleanZero, POSITION_TOLERANCE } from "./tolerance";
+import { cleanZero } from "./tolerance";
 
 /** Index of the piece holding the value just right of x (the last piece at the member end). */
 export function pieceIndexAt(pieces: Piece[], x: number): number {
@@ -38,7 +38,7 @@ function snapToPiece(pieces: Piece[], index: number, x: number, tol: number): [n
 export function valueAt(solution: Solution, quantity: Quantity, x: number): number {
   requireStiffness(solution, quantity);
   const position = checkedPosition(solution.nodeX, x, "x");
-  const tol = POSITION_TOLERANCE * solution.length;
+  const tol = positionTolerance(solution.length);
   const { pieces } = solution;
   const [index, snapped] = snapToPiece(pieces, pieceIndexAt(pieces, position), position, tol);
   const piece = pieces[index];
