@@ -10,7 +10,7 @@
 import { invalid } from "./errors";
 import { extremes } from "./extremes";
 import type { Extreme, Solution } from "./model";
-import { POSITION_TOLERANCE } from "./tolerance";
+import { positionTolerance } from "./positions";
 
 function positive(value: number, what: string): void {
   if (!(Number.isFinite(value) && value > 0)) throw invalid(`${what} must be a positive number, got ${value}`);
@@ -109,7 +109,7 @@ export function spanDeflections(solution: Solution, limits: number[]): SpanDefle
   if (limits.length !== 1 && limits.length !== spanCount) {
     throw invalid(`limit: give one limit for the member or one per span (${spanCount}), got ${limits.length}`);
   }
-  const tol = POSITION_TOLERANCE * solution.length;
+  const tol = positionTolerance(solution.length);
   const out: SpanDeflection[] = [];
   for (let i = 0; i < spanCount; i++) {
     const a = solution.nodeX[i];

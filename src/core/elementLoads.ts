@@ -1,65 +1,51 @@
 import type { Load } from "./model";
-import { POSITION_TOLERANCE } from "./tolerance";
-
-/** A load as one span sees it, in local coordinates t from the span's left node. */
-export type SpanLoad =
-  | { kind: "force"; at: number; value: number }
-  | { kind: "couple"; at: number; value: number }
-  | { kind: "distributed"; from: number; to: number; q0: number; q1: number };
-
-function spanIndexAt(nodeX: number[], x: number): number {
-  let lo = 0;
-  let hi = nodeX.length - 2;
-  while (lo < hi) {
-    const mid = (lo + hi + 1) >> 1;
-    if (nodeX[mid] <= x) lo = mid;
-    else hi = mid - 1;
-  }
-  return lo;
-}
-
-/** Moves a position that is within rounding of a node onto the node. */
-function snap(nodeX: number[], x: number, length: number): number {
-  const tol = POSITION_TOLERANCE * length;
-  const i = spanIndexAt(nodeX, x);
-  if (Math.abs(x - nodeX[i]) <= tol) return nodeX[i];
-  if (i + 1 < nodeX.length && Math.abs(x - nodeX[i + 1]) <= tol) return nodeX[i + 1];
-  return x;
-}
+import { locate, snapToNode } from "./positions";
 
 /**
- * Splits the member's loads onto its spans. A point force or couple exactly at a node
- * belongs to the span on its right (the last span at the member end); a distributed load
- * crossing nodes is cut there, its intensity interpolated.
+ * A load as one span sees it, in local coordinates t from the span's left node (exactly 0 or
+ * the span length at a node), with the absolute positions it came from (`x`, `xFrom`, `xTo`:
+ * the node's own x at a node), so that results there report the position as given.
  */
-export function loadsBySpan(nodeX: number[], loads: Load[]): SpanLoad[][] {
-  const spanCount = nodeX.length - 1;
-  const length = nodeX[spanCount];
+export type SpanLoad =
+  | { kind: "force"; at: number; x: number; value: number }
+  | { kind: "couple"; at: number; x: number; value: number }
+  | { kind: "distributed"; from: number; to: number; xFrom: number; xTo: number; q0: number; q1: number };
+
+/**
+ * Splits the member's loads onto its spans. A point force or couple at a node (by the one
+ * position rule of positions.ts) belongs to the span on its right (the last span at the
+ * member end); a distributed load crossing nodes is cut there, its intensity interpolated.
+ */
+export function loadsBySpan(nodeX: number[], spans: number[], loads: Load[]): SpanLoad[][] {
+  const spanCount = spans.length;
   const result: SpanLoad[][] = [];
   for (let e = 0; e < spanCount; e++) result.push([]);
   for (const load of loads) {
     if (load.kind === "point" || load.kind === "moment") {
       if (load.magnitude === 0) continue;
-      const x = snap(nodeX, load.xStart, length);
-      const e = spanIndexAt(nodeX, x);
+      const place = locate(nodeX, spans, load.xStart);
+      const x = place.node >= 0 ? nodeX[place.node] : load.xStart;
       const kind = load.kind === "point" ? "force" : "couple";
-      result[e].push({ kind, at: x - nodeX[e], value: load.magnitude });
+      result[place.span].push({ kind, at: place.t, x, value: load.magnitude });
       continue;
     }
     const qStart = load.magnitude;
     const qEnd = load.kind === "linear" ? load.magnitudeEnd : load.magnitude;
     if (qStart === 0 && qEnd === 0) continue;
-    const a = snap(nodeX, load.xStart, length);
-    const b = snap(nodeX, load.xEnd, length);
+    const a = snapToNode(nodeX, load.xStart);
+    const b = snapToNode(nodeX, load.xEnd);
     const slope = (qEnd - qStart) / (b - a);
-    const first = spanIndexAt(nodeX, a);
+    const first = locate(nodeX, spans, a).span;
     for (let e = first; e < spanCount && nodeX[e] < b; e++) {
-      const from = Math.max(a, nodeX[e]);
-      const to = Math.min(b, nodeX[e + 1]);
+      const xFrom = Math.max(a, nodeX[e]);
+      const xTo = Math.min(b, nodeX[e + 1]);
+      if (xTo <= xFrom) continue;
+      const from = xFrom === nodeX[e] ? 0 : xFrom - nodeX[e];
+      const to = xTo === nodeX[e + 1] ? spans[e] : Math.min(xTo - nodeX[e], spans[e]);
       if (to <= from) continue;
-      const q0 = qStart + slope * (from - a);
-      const q1 = to === b ? qEnd : qStart + slope * (to - a);
-      result[e].push({ kind: "distributed", from: from - nodeX[e], to: to - nodeX[e], q0, q1 });
+      const q0 = qStart + slope * (xFrom - a);
+      const q1 = xTo === b ? qEnd : qStart + slope * (xTo - a);
+      result[e].push({ kind: "distributed", from, to, xFrom, xTo, q0, q1 });
     }
   }
   return result;

@@ -1,7 +1,8 @@
-import { invalid, unavailable } from "./errors";
+import { unavailable } from "./errors";
+import { checkedPosition, positionTolerance } from "./positions";
 import type { Piece, Quantity, Solution } from "./model";
 import { pieceValue } from "./polynomial";
-import { cleanZero, POSITION_TOLERANCE } from "./tolerance";
+import { cleanZero } from "./tolerance";
 
 /** Index of the piece holding the value just right of x (the last piece at the member end). */
 export function pieceIndexAt(pieces: Piece[], x: number): number {
@@ -29,15 +30,6 @@ function snapToPiece(pieces: Piece[], index: number, x: number, tol: number): [n
   return [index, x];
 }
 
-function checkedPosition(solution: Solution, x: number): number {
-  const tol = POSITION_TOLERANCE * solution.length;
-  if (typeof x !== "number" || !Number.isFinite(x)) throw invalid(`x must be a finite number, got ${String(x)}`);
-  if (x < -tol || x > solution.length + tol) {
-    throw invalid(`x = ${x} is outside the member, which runs from 0 to ${solution.length}`);
-  }
-  return Math.min(Math.max(x, 0), solution.length);
-}
-
 /**
  * The value of a quantity at x: the value just right of x where it jumps, and just left at
  * the member's right end. Throws #VALUE! for x off the member and #N/A for slope or
@@ -45,8 +37,8 @@ function checkedPosition(solution: Solution, x: number): number {
  */
 export function valueAt(solution: Solution, quantity: Quantity, x: number): number {
   requireStiffness(solution, quantity);
-  const position = checkedPosition(solution, x);
-  const tol = POSITION_TOLERANCE * solution.length;
+  const position = checkedPosition(solution.nodeX, x, "x");
+  const tol = positionTolerance(solution.length);
   const { pieces } = solution;
   const [index, snapped] = snapToPiece(pieces, pieceIndexAt(pieces, position), position, tol);
   const piece = pieces[index];

@@ -3,6 +3,7 @@ export type { Member, Support, Load, LoadKind, Quantity, Reaction, Piece, Soluti
 export { SpanError, invalid, unavailable, isSpanError } from "./errors";
 export type { ErrorCode } from "./errors";
 export { validateMember, MAX_LOADS } from "./validate";
+export { nodePositions, memberLength, isOnMember, snapToNode, nodeIndexAt, checkedPosition, positionTolerance, shownLength } from "./positions";
 export { checkStability } from "./stability";
 export { assemble, toDense } from "./stiffness";
 export type { StiffnessSystem } from "./stiffness";

@@ -2,7 +2,7 @@ import { invalid } from "./errors";
 import { valueAt } from "./evaluate";
 import type { Load, Member, Solution } from "./model";
 import { solve } from "./solve";
-import { memberLength } from "./validate";
+import { checkedPosition, nodePositions } from "./positions";
 
 /** What an influence line or a moving load measures. */
 export type Effect =
@@ -16,19 +16,17 @@ function unitLoad(x: number): Load {
   return { kind: "point", magnitude: 1, xStart: x, xEnd: x, magnitudeEnd: 0, loadCase: "", row: 1 };
 }
 
-/** Checks an effect against a member; returns a human name for messages. */
-export function checkEffect(member: Member, effect: Effect): void {
-  const length = memberLength(member.spans);
+/** Checks an effect against a member; returns it with its x on the member (a node's own x at a node). */
+export function checkEffect(member: Member, effect: Effect): Effect {
   if (effect.kind === "reaction" || effect.kind === "moment-reaction") {
     if (!Number.isInteger(effect.node) || effect.node < 1 || effect.node > member.spans.length + 1) {
       throw invalid(`effect: node ${effect.node} does not exist; nodes are numbered 1 to ${member.spans.length + 1}`);
     }
-    return;
+    return effect;
   }
-  if (!Number.isFinite(effect.x) || effect.x < 0 || effect.x > length) {
-    throw invalid(`effect: x = ${effect.x} is outside the member, which runs from 0 to ${length}`);
-  }
+  const x = checkedPosition(nodePositions(member.spans), effect.x, "effect: x");
   if (effect.kind === "deflection" && member.stiffness === null) throw invalid("effect: deflection needs EI");
+  return { ...effect, x };
 }
 
 /** The value of an effect in a solved member. */
@@ -50,12 +48,7 @@ export function measure(solution: Solution, effect: Effect): number {
  * (the value just right of x is measured), so the ordinate there is the lower one.
  */
 export function influenceLine(member: Member, effect: Effect, positions: number[]): number[] {
-  checkEffect(member, effect);
-  const length = memberLength(member.spans);
-  return positions.map((p) => {
-    if (!Number.isFinite(p) || p < 0 || p > length) {
-      throw invalid(`unit load position ${p} is outside the member, which runs from 0 to ${length}`);
-    }
-    return measure(solve({ ...member, loads: [unitLoad(p)] }), effect);
-  });
+  const checked = checkEffect(member, effect);
+  const nodeX = nodePositions(member.spans);
+  return positions.map((p) => measure(solve({ ...member, loads: [unitLoad(checkedPosition(nodeX, p, "unit load position", " "))] }), checked));
 }

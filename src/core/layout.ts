@@ -1,4 +1,7 @@
 import type { Member } from "./model";
+import { nodePositions } from "./positions";
+
+export { nodePositions };
 
 /**
  * Where the member's nodes are and which degrees of freedom are free. Free DOFs are numbered
@@ -14,17 +17,6 @@ export interface Layout {
   rotationRightDof: number[];
   size: number;
   stiffness: number[];
-}
-
-export function nodePositions(spans: number[]): number[] {
-  const nodeX = new Array<number>(spans.length + 1);
-  let x = 0;
-  nodeX[0] = 0;
-  for (let i = 0; i < spans.length; i++) {
-    x += spans[i];
-    nodeX[i + 1] = x;
-  }
-  return nodeX;
 }
 
 export function buildLayout(member: Member): Layout {

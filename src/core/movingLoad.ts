@@ -2,7 +2,7 @@ import { invalid } from "./errors";
 import { valueAt } from "./evaluate";
 import { chebyshevPoints, fitPolynomial } from "./fit";
 import { checkEffect, measure, type Effect } from "./influence";
-import { nodePositions } from "./layout";
+import { isOnMember, nodePositions, snapToNode } from "./positions";
 import type { Load, Member, Solution } from "./model";
 import { derivative, evaluatePolynomial } from "./polynomial";
 import { rootsBetween } from "./roots";
@@ -90,8 +90,8 @@ export function movingLoad(member: Member, train: Train, effect: MovingEffect): 
   const solveAt = (leadX: number, direction: Direction): Solution => {
     const loads: Load[] = [];
     axlePositions(train, leadX, direction).forEach((x, i) => {
-      if (x >= -tol && x <= length + tol && train.loads[i] !== 0) {
-        const at = Math.min(Math.max(x, 0), length);
+      if (isOnMember(x, length) && train.loads[i] !== 0) {
+        const at = snapToNode(nodeX, x);
         loads.push({ kind: "point", magnitude: train.loads[i], xStart: at, xEnd: at, magnitudeEnd: 0, loadCase: "", row: i + 1 });
       }
     });

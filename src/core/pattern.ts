@@ -1,5 +1,5 @@
 import type { Load, Member } from "./model";
-import { nodePositions } from "./layout";
+import { nodePositions, snapToNode } from "./positions";
 
 /** The part of a load that lies on [a, b] (null when none does). */
 export function clipLoad(load: Load, a: number, b: number, lastSpan: boolean): Load | null {
@@ -29,7 +29,8 @@ export function loadsPerSpan(member: Member, loads: Load[]): Load[][] {
   return member.spans.map((_, i) => {
     const last = i === member.spans.length - 1;
     const out: Load[] = [];
-    for (const load of loads) {
+    for (const given of loads) {
+      const load = { ...given, xStart: snapToNode(nodeX, given.xStart), xEnd: snapToNode(nodeX, given.xEnd) };
       const part = clipLoad(load, nodeX[i], nodeX[i + 1], last);
       if (part) out.push(part);
     }

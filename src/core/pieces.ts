@@ -9,16 +9,31 @@ export interface SpanStart {
   deflection: number;
 }
 
-function breakpoints(loads: SpanLoad[], span: number): number[] {
-  const points = [0, span];
+/** The span's breakpoints in t, ascending and distinct, and the absolute x of each (a node's or a load's own x). */
+function breakpoints(loads: SpanLoad[], span: number, xLeft: number, xRight: number): { t: number[]; x: number[] } {
+  if (loads.length === 0) return { t: [0, span], x: [xLeft, xRight] };
+  const ts = [0, span];
+  const xs = [xLeft, xRight];
   for (const load of loads) {
-    if (load.kind === "distributed") points.push(load.from, load.to);
-    else points.push(load.at);
+    if (load.kind === "distributed") {
+      ts.push(load.from, load.to);
+      xs.push(load.xFrom, load.xTo);
+    } else {
+      ts.push(load.at);
+      xs.push(load.x);
+    }
   }
-  points.sort((a, b) => a - b);
-  const unique: number[] = [];
-  for (const t of points) if (t >= 0 && t <= span && (unique.length === 0 || t > unique[unique.length - 1])) unique.push(t);
-  return unique;
+  const order = ts.map((_, i) => i);
+  order.sort((a, b) => ts[a] - ts[b]);
+  const t: number[] = [];
+  const x: number[] = [];
+  for (const i of order) {
+    const pt = ts[i];
+    if (pt < 0 || pt > span || (t.length > 0 && pt <= t[t.length - 1])) continue;
+    t.push(pt);
+    x.push(pt === 0 ? xLeft : pt === span ? xRight : xs[i]);
+  }
+  return { t, x };
 }
 
 function indexOf(points: number[], t: number): number {
@@ -36,18 +51,20 @@ function indexOf(points: number[], t: number): number {
  * Integrates one span exactly by the area method: from the values at its left node, V
  * falls by the area under the load and by each point force, M rises by the area under V and
  * by each clockwise couple, slope falls by the area under M/EI and deflection rises by the
- * area under the slope. Appends the span's pieces to `out`. The loads are swept once in
+ * area under the slope. Pieces start and end at the nodes' and loads' own x (xLeft, xRight:
+ * the span's nodes). Appends the span's pieces to `out`. The loads are swept once in
  * order of position, so the cost grows as n log n in the number of loads.
  */
 export function integrateSpan(
   start: SpanStart,
   loads: SpanLoad[],
   span: number,
-  offset: number,
+  xLeft: number,
+  xRight: number,
   flexibility: number,
   out: Piece[],
 ): void {
-  const points = breakpoints(loads, span);
+  const { t: points, x: places } = breakpoints(loads, span, xLeft, xRight);
   const count = points.length;
   const force = new Float64Array(count);
   const couple = new Float64Array(count);
@@ -89,8 +106,8 @@ export function integrateSpan(
       q1 = 0;
     }
     const piece: Piece = {
-      x0: offset + t0,
-      x1: k + 2 === count ? offset + span : offset + t1,
+      x0: places[k],
+      x1: places[k + 1],
       shear0: shear,
       moment0: moment,
       slope0: slope,

@@ -8,7 +8,7 @@
  * - `staticsResidual`: the member's equilibrium (vertical forces, moments about x = 0) from
  *   the final reactions against the loads, which the solver refuses to report when it fails.
  */
-import { solveBanded } from "./banded";
+import { solveBanded, type PivotStats } from "./banded";
 import type { Load, Reaction } from "./model";
 import type { StiffnessSystem } from "./stiffness";
 
@@ -59,8 +59,8 @@ const REFINEMENT_STEPS = 3;
 const SETTLED = 1e-13;
 
 /** Solves K d = f and refines d while the residual is above rounding and shrinks (a few steps; O(n b^2) each). */
-export function solveRefined(system: StiffnessSystem): Float64Array {
-  const d = solveBanded(system);
+export function solveRefined(system: StiffnessSystem, stats?: PivotStats): Float64Array {
+  const d = solveBanded(system, stats);
   let load = 0;
   for (const v of system.rhs) load = Math.max(load, Math.abs(v));
   let size = Infinity;

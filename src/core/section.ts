@@ -270,10 +270,48 @@ function ringProperties(D: number, d: number): SectionProperties {
   };
 }
 
-/** Properties of a validated shape (throws #VALUE! naming the dimension otherwise). */
-export function sectionProperties(s: SectionShape): SectionProperties {
-  validateSection(s);
+/** The power of length each property carries (area 2, I 4, S, Z and Q 3, the rest 1). */
+export const SECTION_POWERS: Record<keyof SectionProperties, number> = {
+  area: 2, Ix: 4, Iy: 4, SxTop: 3, SxBottom: 3, SyLeft: 3, SyRight: 3, Zx: 3, Zy: 3,
+  rx: 1, ry: 1, Qx: 3, tx: 1, shearFactor: 2, xBar: 1, yBar: 1, width: 1, depth: 1,
+};
+
+/** Smallest positive normal double: below it a value has lost digits (or become 0). */
+const SMALLEST_NORMAL = 2.2250738585072014e-308;
+
+function propertiesOf(s: SectionShape): SectionProperties {
   if (s.shape === "circle") return ringProperties(s.d, 0);
   if (s.shape === "tube") return ringProperties(s.d, s.d - 2 * s.t);
   return blockProperties(blocksOf(s));
+}
+
+/**
+ * Properties of a validated shape (throws #VALUE! naming the dimension otherwise). They are
+ * computed on the shape scaled by a power of two near its largest dimension (exact), then
+ * scaled back, so dimensions of any size give full precision; a property whose value lies
+ * outside the range of numbers (overflow, or underflow below 2.2e-308) is a #VALUE! naming it.
+ */
+export function sectionProperties(s: SectionShape): SectionProperties {
+  validateSection(s);
+  const dimensions = Object.entries(s).filter(([key]) => key !== "shape") as [string, number][];
+  const largest = Math.max(...dimensions.map(([, v]) => v));
+  const exponent = Math.round(Math.log2(largest));
+  if (exponent === 0) return propertiesOf(s);
+  const unit = (power: number): number => Math.pow(2, exponent * power);
+  const scaled = { ...s } as Record<string, number | string>;
+  for (const [key, v] of dimensions) scaled[key] = v * Math.pow(2, -exponent);
+  const base = propertiesOf(scaled as unknown as SectionShape);
+  const out = {} as SectionProperties;
+  for (const key of Object.keys(SECTION_POWERS) as (keyof SectionProperties)[]) {
+    const power = SECTION_POWERS[key];
+    // Two steps so the scale itself never overflows when the product would not.
+    const value = base[key] * unit(power / 2) * unit(power / 2);
+    if (!Number.isFinite(value) || (base[key] !== 0 && Math.abs(value) < SMALLEST_NORMAL)) {
+      throw invalid(
+        `${s.shape}: ${key} (length^${power}) is too ${Number.isFinite(value) ? "small" : "large"} to represent as a number (the dimensions reach ${largest}); give the dimensions in a ${largest > 1 ? "larger" : "smaller"} unit`,
+      );
+    }
+    out[key] = value;
+  }
+  return out;
 }

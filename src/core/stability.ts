@@ -1,5 +1,6 @@
 import { invalid } from "./errors";
 import type { Member } from "./model";
+import { nodePositions } from "./positions";
 
 /**
  * Rigid-body motions still free at the current point of a left-to-right sweep. Each free
@@ -54,7 +55,8 @@ function fail(from: number, to: number): never {
  */
 export function checkStability(member: Member): void {
   const { spans, supports } = member;
-  const length = spans.reduce((sum, span) => sum + span, 0);
+  const nodeX = nodePositions(spans);
+  const length = nodeX[spans.length];
   let free: Freedom = { a: [1, 0], b: [0, 1] };
   let lastFixedX = 0;
   let x = 0;
@@ -74,7 +76,7 @@ export function checkStability(member: Member): void {
       free = { a: [...row, -u], b: [...row.map(() => 0), 1] };
     }
     if (free.a.length === 0) lastFixedX = x;
-    if (node < spans.length) x += spans[node];
+    if (node < spans.length) x = nodeX[node + 1];
   }
   if (free.a.length > 0) fail(lastFixedX, length);
 }

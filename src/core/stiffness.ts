@@ -53,7 +53,7 @@ export function assembleMember(member: Member): Assembly {
   const stride = halfBandwidth + 1;
   const band = new Float64Array(layout.size * stride);
   const rhs = new Float64Array(layout.size);
-  const spanLoads = loadsBySpan(layout.nodeX, member.loads);
+  const spanLoads = loadsBySpan(layout.nodeX, member.spans, member.loads);
   const nodalLoads: number[][] = [];
   for (let e = 0; e < spanCount; e++) {
     const span = member.spans[e];

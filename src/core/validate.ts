@@ -1,6 +1,8 @@
 import { invalid } from "./errors";
 import type { Load, Member } from "./model";
-import { POSITION_TOLERANCE } from "./tolerance";
+import { isOnMember, memberLength, nodeIndexAt, nodePositions, positionTolerance, shownLength } from "./positions";
+
+export { memberLength };
 
 /**
  * Most loads one member may carry. No real member has more; the limit keeps every call quick
@@ -20,13 +22,6 @@ function show(value: unknown): string {
   return typeof value === "number" ? String(value) : JSON.stringify(value);
 }
 
-/** Total length of the member. */
-export function memberLength(spans: number[]): number {
-  let total = 0;
-  for (const span of spans) total += span;
-  return total;
-}
-
 function validateSpans(spans: number[]): void {
   if (!Array.isArray(spans) || spans.length === 0) throw invalid("spans: give at least one span length");
   spans.forEach((span, i) => {
@@ -42,9 +37,9 @@ function validateSupports(member: Member, length: number): void {
     const count = Array.isArray(supports) ? supports.length : 0;
     throw invalid(`supports: need ${spans.length + 1} entries (one per node, spans + 1), got ${count}`);
   }
-  let x = 0;
+  const nodeX = nodePositions(spans);
   supports.forEach((support, i) => {
-    const where = (): string => `support ${i + 1} (x = ${x})`;
+    const where = (): string => `support ${i + 1} (x = ${shownLength(nodeX[i] ?? length)})`;
     if (!support || !SUPPORT_KINDS.has(support.kind)) {
       throw invalid(`${where()}: unknown support ${show(support && support.kind)}; use pin, fixed, free, hinge or a spring stiffness`);
     }
@@ -59,12 +54,7 @@ function validateSupports(member: Member, length: number): void {
     if (support.kind === "hinge" && (i === 0 || i === spans.length)) {
       throw invalid(`${where()}: a hinge joins two spans, so it belongs at an interior node, not at a member end`);
     }
-    x = i < spans.length ? roundPosition(x + spans[i], length) : x;
   });
-}
-
-function roundPosition(x: number, length: number): number {
-  return Math.abs(x - length) <= 1e-12 * length ? length : x;
 }
 
 function validateStiffness(member: Member): void {
@@ -81,28 +71,27 @@ function validateStiffness(member: Member): void {
 
 /** The common case, checked without building any message. */
 function isPlainLoad(load: Load, length: number): boolean {
-  const end = length * (1 + POSITION_TOLERANCE);
   if (!LOAD_KINDS.has(load.kind) || !isFiniteNumber(load.magnitude) || !isFiniteNumber(load.xStart)) return false;
-  if (load.xStart < 0 || load.xStart > end) return false;
+  if (!isOnMember(load.xStart, length)) return false;
   if (load.kind === "point" || load.kind === "moment") return true;
-  if (!isFiniteNumber(load.xEnd) || load.xEnd > end || load.xEnd <= load.xStart) return false;
+  if (!isFiniteNumber(load.xEnd) || !isOnMember(load.xEnd, length) || load.xEnd <= load.xStart) return false;
   return load.kind !== "linear" || isFiniteNumber(load.magnitudeEnd);
 }
 
 function validateLoad(load: Load, length: number): void {
   if (isPlainLoad(load, length)) return;
   const where = `load row ${load.row}`;
-  const end = length * (1 + POSITION_TOLERANCE);
+  const tol = positionTolerance(length);
   if (!LOAD_KINDS.has(load.kind)) {
     throw invalid(`${where}: unknown load type ${show(load.kind)}; use point, moment, udl or linear`);
   }
   if (!isFiniteNumber(load.magnitude)) throw invalid(`${where}: magnitude must be a finite number, got ${show(load.magnitude)}`);
   if (!isFiniteNumber(load.xStart)) throw invalid(`${where}: x start must be a finite number, got ${show(load.xStart)}`);
-  if (load.xStart < 0) throw invalid(`${where}: x start ${load.xStart} is before the member start 0`);
-  if (load.xStart > end) throw invalid(`${where}: x start ${load.xStart} is beyond the member end ${length}`);
+  if (load.xStart < -tol) throw invalid(`${where}: x start ${load.xStart} is before the member start 0`);
+  if (load.xStart > length + tol) throw invalid(`${where}: x start ${load.xStart} is beyond the member end ${shownLength(length)}`);
   if (load.kind === "point" || load.kind === "moment") return;
   if (!isFiniteNumber(load.xEnd)) throw invalid(`${where}: x end must be a finite number, got ${show(load.xEnd)}`);
-  if (load.xEnd > end) throw invalid(`${where}: x end ${load.xEnd} is beyond the member end ${length}`);
+  if (load.xEnd > length + tol) throw invalid(`${where}: x end ${load.xEnd} is beyond the member end ${shownLength(length)}`);
   if (load.xEnd <= load.xStart) throw invalid(`${where}: x end ${load.xEnd} is not beyond x start ${load.xStart}`);
   if (load.kind === "linear" && !isFiniteNumber(load.magnitudeEnd)) {
     throw invalid(`${where}: magnitude at end must be a finite number, got ${show(load.magnitudeEnd)}`);
@@ -110,18 +99,13 @@ function validateLoad(load: Load, length: number): void {
 }
 
 /** A couple exactly at a hinge has no side to act on: the user must say which. */
-function rejectCouplesOnHinges(member: Member, length: number): void {
-  let x = 0;
-  const hinges: number[] = [];
-  member.supports.forEach((support, i) => {
-    if (support.kind === "hinge") hinges.push(x);
-    if (i < member.spans.length) x += member.spans[i];
-  });
-  if (hinges.length === 0) return;
-  const tol = POSITION_TOLERANCE * length;
+function rejectCouplesOnHinges(member: Member): void {
+  if (!member.supports.some((support) => support.kind === "hinge")) return;
+  const nodeX = nodePositions(member.spans);
   for (const load of member.loads) {
     if (load.kind !== "moment") continue;
-    const at = hinges.find((h) => Math.abs(h - load.xStart) <= tol);
+    const node = nodeIndexAt(nodeX, load.xStart);
+    const at = node >= 0 && member.supports[node].kind === "hinge" ? nodeX[node] : undefined;
     if (at !== undefined) {
       throw invalid(`load row ${load.row}: a couple exactly at the hinge at x = ${+at.toPrecision(12)} has no side to act on; place it just left or just right of the hinge`);
     }
@@ -143,5 +127,5 @@ export function validateMember(member: Member): void {
     throw invalid(`loads: ${member.loads.length} loads on one member; at most ${MAX_LOADS} are taken (combine loads that act together)`);
   }
   for (const load of member.loads) validateLoad(load, length);
-  rejectCouplesOnHinges(member, length);
+  rejectCouplesOnHinges(member);
 }

@@ -1,8 +1,10 @@
 /**
  * The check functions' bodies: bending and shear stress, deflection against a stated limit,
  * utilisation, unit conversion and E x I. Arguments as the host passes them; every body runs
- * guarded. With a units argument the member is solved in metres and newtons and results come
- * out in the units asked for; without one, everything is in the user's consistent units.
+ * guarded. With a units argument the member is solved in its own length and force units (see
+ * solvedMember); moments and deflections are brought to metres and newtons here, checked
+ * against the section in SI, and shown in the units asked for. Without one, everything is in
+ * the user's consistent units.
  */
 import {
   averageShearStress,
@@ -87,6 +89,12 @@ function sectionSI(v: SectionValue, units: MemberUnits | null, power: number, na
 
 const out = (value: number, unit: Unit | null) => (unit === null ? value : value / unit.factor);
 
+/** A moment (force x length of the member's own units) in SI, for checks against an SI section. */
+const momentSI = (value: number, units: MemberUnits | null) => (units === null ? value : value * units.force.factor * units.length.factor);
+const forceSI = (value: number, units: MemberUnits | null) => (units === null ? value : value * units.force.factor);
+/** A deflection (in the member's length unit) in the deflection unit asked for. */
+const deflectionShown = (value: number, units: MemberUnits | null) => (units === null ? value : (value * units.length.factor) / units.deflection.factor);
+
 /** SPAN.STRESS: rows [fibre, largest stress, x, smallest stress, x]; tension +. */
 export function sheetStress(spans: unknown, loads: unknown, section: unknown, supports: unknown, EI: unknown, combo: unknown, units: unknown): (number | string)[][] {
   return guarded(() => {
@@ -94,8 +102,10 @@ export function sheetStress(spans: unknown, loads: unknown, section: unknown, su
     const values = readSection(section, [["Sx top", "length^3"], ["Sx bottom", "length^3"]], [1, 2], "S (one value) or S top and S bottom");
     const top = sectionSI(values[0], u, 3, "S top");
     const bottom = values.length > 1 ? sectionSI(values[1], u, 3, "S bottom") : top;
-    const x = (v: number) => out(v, u && u.length);
-    return fibreStresses(extremes(solution, "moment"), top, bottom).map((f) => [
+    const x = (v: number) => v;
+    const m = extremes(solution, "moment");
+    const moment = { ...m, max: momentSI(m.max, u), min: momentSI(m.min, u) };
+    return fibreStresses(moment, top, bottom).map((f) => [
       f.fibre,
       finite(out(f.max, u && u.stress), `the largest ${f.fibre} stress`),
       x(f.xMax),
@@ -110,8 +120,9 @@ export function sheetShearStress(spans: unknown, loads: unknown, section: unknow
   return guarded(() => {
     const { solution, units: u } = solvedWithUnits(spans, loads, supports, EI, combo, units);
     const values = readSection(section, [["area", "length^2"], ["Ix", "length^4"], ["Q/t max", "length^2"]], [1, 4], "A, or A I Q t");
-    const V = largestMagnitude(extremes(solution, "shear"));
-    const x = out(V.x, u && u.length);
+    const peakV = largestMagnitude(extremes(solution, "shear"));
+    const V = { value: forceSI(peakV.value, u), x: peakV.x };
+    const x = V.x;
     const area = sectionSI(values[0], u, 2, "A");
     const average = finite(out(averageShearStress(V.value, area), u && u.stress), "the average shear stress");
     if (values.length === 1) return [["average", average, x], ["peak", "", ""]];
@@ -146,9 +157,9 @@ export function sheetDeflectionCheck(spans: unknown, loads: unknown, limit: unkn
     if (!solution.hasStiffness) throw unavailable("deflection needs EI: give EI for the member or each span");
     return spanDeflections(solution, limits).map((r) => [
       r.span,
-      out(r.length, u && u.length),
-      finite(out(r.deflection, u && u.deflection), `span ${r.span}'s deflection`),
-      out(r.x, u && u.length),
+      r.length,
+      finite(deflectionShown(r.deflection, u), `span ${r.span}'s deflection`),
+      r.x,
       Number.isFinite(r.ratio) ? r.ratio : "",
       r.limit,
       r.pass ? "pass" : "fail",

@@ -2,7 +2,7 @@
  * One load as the user wrote it, in a load-table row or the load notation, before the member
  * length is known: `xEnd` null means "to the member end" (blank or 0 in the table).
  */
-import { invalid, tolerance, type Load, type LoadKind } from "../core";
+import { invalid, positionTolerance, shownLength, type Load, type LoadKind } from "../core";
 
 export interface LoadRow {
   kind: LoadKind;
@@ -39,11 +39,6 @@ export function placeOf(row: number, fromText: boolean, column: ColumnName): str
   return `load row ${row}, column ${COLUMNS.indexOf(column) + 1} (${column})`;
 }
 
-/** The member length as the user typed it: 12 significant digits hide binary rounding of the sum. */
-function shownLength(length: number): number {
-  return Number(length.toPrecision(12));
-}
-
 function isDistributed(kind: LoadKind): boolean {
   return kind === "udl" || kind === "linear";
 }
@@ -56,14 +51,14 @@ function isDistributed(kind: LoadKind): boolean {
  */
 export function toLoad(row: LoadRow, length: number): Load {
   const { xStart } = row;
-  const end = length * (1 + tolerance.POSITION_TOLERANCE);
-  if (xStart < 0) throw invalid(`${placeOf(row.row, row.fromText, "x start")}: ${xStart} is before the member start 0`);
-  if (xStart > end) throw invalid(`${placeOf(row.row, row.fromText, "x start")}: ${xStart} is beyond the member end ${shownLength(length)}`);
+  const tol = positionTolerance(length);
+  if (xStart < -tol) throw invalid(`${placeOf(row.row, row.fromText, "x start")}: ${xStart} is before the member start 0`);
+  if (xStart > length + tol) throw invalid(`${placeOf(row.row, row.fromText, "x start")}: ${xStart} is beyond the member end ${shownLength(length)}`);
   if (!isDistributed(row.kind)) {
     return { kind: row.kind, magnitude: row.magnitude, xStart, xEnd: xStart, magnitudeEnd: 0, loadCase: row.loadCase, row: row.row };
   }
   const xEnd = row.xEnd === null ? length : row.xEnd;
-  if (xEnd > end) throw invalid(`${placeOf(row.row, row.fromText, "x end")}: ${xEnd} is beyond the member end ${shownLength(length)}`);
+  if (xEnd > length + tol) throw invalid(`${placeOf(row.row, row.fromText, "x end")}: ${xEnd} is beyond the member end ${shownLength(length)}`);
   if (xEnd <= xStart) {
     throw invalid(`${placeOf(row.row, row.fromText, "x end")}: ${xEnd} is not beyond x start ${xStart}, so the load has no length`);
   }

@@ -3,12 +3,12 @@
  * (2-D arrays, blanks as "", null or 0, skipped optional arguments as null) and returning
  * 2-D arrays. Every body runs guarded: only #VALUE! / #N/A host errors escape.
  */
-import { diagram, extremes, invalid, solve, tolerance, unavailable, valueAt, type Quantity, type Solution } from "../core";
+import { diagram, extremes, invalid, solve, unavailable, valueAt, type Quantity, type Solution } from "../core";
 import { errorCodeOf, isEmpty, readNumber } from "./cells";
 import { memberHash, solvedMembers } from "./cache";
 import { guarded } from "./hostError";
 import { readMember, type MemberArgs } from "./member";
-import { memberInSI, readMemberUnits, type MemberUnits } from "./units";
+import { memberInOwnUnits, readMemberUnits, type MemberUnits } from "./units";
 import { singleCell } from "./ranges";
 import { finite, mapPositions, orBlank } from "./shape";
 
@@ -20,7 +20,9 @@ export const MAX_POINTS = 10001;
 /**
  * The solution for the member arguments, from the cache when the same arguments were solved
  * before. `units` is the already-read units argument when the caller has it (read here on a
- * miss otherwise); with units the member is solved in metres and newtons.
+ * miss otherwise). With units the member is solved in its own length and force units (only
+ * EI is brought to force x length^2 of them), so spans, x and load positions are never
+ * converted and a node stays exactly the node the user typed.
  */
 export function solvedMember(args: MemberArgs, units?: MemberUnits | null): Solution {
   const last = solvedMembers.getLast(args);
@@ -32,15 +34,14 @@ export function solvedMember(args: MemberArgs, units?: MemberUnits | null): Solu
   }
   const given = units === undefined ? readMemberUnits(args.units ?? null) : units;
   const member = readMember(args);
-  const solution = solve(given === null ? member : memberInSI(member, given));
+  const solution = solve(given === null ? member : memberInOwnUnits(member, given));
   if (hash !== null) solvedMembers.remember(args, hash, solution);
   return solution;
 }
 
 /**
- * Factors from the solution's units (metres and newtons when the units argument is given,
- * the user's consistent units otherwise) to the units the sheet shows: positions in the
- * length unit, forces in the force unit, moments in force x length, deflection in its unit.
+ * Factors from the solution's units (the member's own length and force units) to the units
+ * the sheet shows: only deflection differs, when the units argument names a deflection unit.
  */
 export interface OutputScale {
   length: number;
@@ -53,9 +54,7 @@ const UNIT_SCALE: OutputScale = { length: 1, force: 1, moment: 1, deflection: 1 
 
 export function outputScale(units: MemberUnits | null): OutputScale {
   if (units === null) return UNIT_SCALE;
-  const length = units.length.factor;
-  const force = units.force.factor;
-  return { length, force, moment: force * length, deflection: units.deflection.factor };
+  return { length: 1, force: 1, moment: 1, deflection: units.deflection.factor / units.length.factor };
 }
 
 /** The solved member and the factors that bring its results into the sheet's units; the units argument is read once. */
@@ -131,12 +130,7 @@ export function sheetValuesAt(
   return guarded(() => {
     const { solution, scale } = solvedWithScale(memberArgs(spans, loads, supports, EI, combo, units));
     if (quantity === "slope" || quantity === "deflection") requireStiffness(solution, quantity);
-    if (scale === UNIT_SCALE) return mapPositions(x, (position) => valueAt(solution, quantity, position));
-    const length = Number((solution.length / scale.length).toPrecision(12));
-    return mapPositions(x, (position) => {
-      if (!(position >= 0 && position <= length * (1 + tolerance.POSITION_TOLERANCE))) throw invalid(`x = ${position} is outside the member, which runs from 0 to ${length}`);
-      return shown(quantity, valueAt(solution, quantity, Math.min(position * scale.length, solution.length)), scale);
-    });
+    return mapPositions(x, (position) => shown(quantity, valueAt(solution, quantity, position), scale));
   });
 }
 

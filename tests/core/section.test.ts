@@ -270,3 +270,29 @@ describe("dimension checks name the dimension", () => {
     expect(e.message).toMatch(message);
   });
 });
+
+describe("extreme dimensions: full precision across the range, or a #VALUE! naming the property", () => {
+  // Expected: b h, b h^3/12, h b^3/12 (the closed forms above); scaling by powers of two is exact.
+  test.each([
+    ["1e-70 x 1e-70", 1e-70, 1e-70],
+    ["1e70 x 2e70", 1e70, 2e70],
+    ["3e-50 x 7e-50", 3e-50, 7e-50],
+  ])("rectangle %s keeps every digit", (_, b, h) => {
+    const p = sectionProperties({ shape: "rectangle", b, h });
+    expect(p.area).toBeCloseTo(b * h, 0);
+    expect(Math.abs(p.area / (b * h) - 1)).toBeLessThan(1e-15);
+    expect(Math.abs(p.Ix / ((b * h * h * h) / 12) - 1)).toBeLessThan(1e-14);
+    expect(Math.abs(p.rx / (h / Math.sqrt(12)) - 1)).toBeLessThan(1e-14);
+  });
+
+  test.each([
+    ["rectangle 1e-200 1e-200 (area 1e-400 underflows)", { shape: "rectangle", b: 1e-200, h: 1e-200 }, /area \(length\^2\) is too small.*smaller unit/],
+    ["rectangle 1e200 1e200 (area 1e400 overflows)", { shape: "rectangle", b: 1e200, h: 1e200 }, /area \(length\^2\) is too large.*larger unit/],
+    ["rectangle 1e-100 1e-100 (Ix 1e-400 underflows)", { shape: "rectangle", b: 1e-100, h: 1e-100 }, /Ix \(length\^4\) is too small/],
+    ["ibeam 1e100 ... (Ix overflows)", { shape: "ibeam", d: 1e100, bf: 5e99, tf: 1e99, tw: 5e98 }, /Ix \(length\^4\) is too large/],
+  ] as [string, SectionShape, RegExp][])("%s: #VALUE! naming the property", (_, shape, message) => {
+    const e = thrown(() => sectionProperties(shape));
+    expect(e.code).toBe("#VALUE!");
+    expect(e.message).toMatch(message);
+  });
+});

@@ -4,7 +4,7 @@
  * (0.45359237 kg x 9.80665 m/s^2), 1 kip = 1000 lbf — written out here, not taken from the code.
  */
 import { tolerance, type Member } from "../../src/core";
-import { memberInSI, readMemberUnits, readUnit } from "../../src/sheet";
+import { memberInOwnUnits, memberInSI, readMemberUnits, readUnit, solvedMember } from "../../src/sheet";
 import { thrown } from "../core/kit/errors";
 
 const FT = 0.3048;
@@ -103,5 +103,36 @@ describe("memberInSI", () => {
     near(si.loads[3].xEnd, 12 * FT);
     expect(si.loads.map((l) => l.loadCase)).toEqual(["L", "", "D", ""]);
     expect(m.spans[0]).toBe(20);
+  });
+});
+
+describe("the units path keeps nodes as nodes: the member is solved in its own length and force units", () => {
+  // Only EI changes: kip*in^2 to kip*ft^2 is a division by 144 (1 ft = 12 in, NIST SP 811).
+  const typedMember: Member = {
+    spans: [12, 8],
+    supports: [{ kind: "pin" }, { kind: "pin" }, { kind: "spring", stiffness: 50 }],
+    stiffness: [144000, 288000],
+    loads: [
+      { kind: "point", magnitude: 3, xStart: 20, xEnd: 20, magnitudeEnd: 0, loadCase: "", row: 1 },
+      { kind: "udl", magnitude: 1.5, xStart: 3.3, xEnd: 12, magnitudeEnd: 1.5, loadCase: "", row: 2 },
+    ],
+  };
+  test.each([
+    ["spans", (m: Member) => m.spans, [12, 8]],
+    ["load positions", (m: Member) => m.loads.flatMap((l) => [l.xStart, l.xEnd]), [20, 20, 3.3, 12]],
+    ["load magnitudes", (m: Member) => m.loads.map((l) => l.magnitude), [3, 1.5]],
+    ["spring stiffness (kip/ft stays kip/ft)", (m: Member) => m.supports.map((s) => (s.kind === "spring" ? s.stiffness : 0)), [0, 0, 50]],
+    ["EI in kip*ft^2 (to rounding of the unit factors)", (m: Member) => m.stiffness!.map((ei) => Number(ei.toPrecision(14))), [1000, 2000]],
+  ] as [string, (m: Member) => unknown, unknown][])("%s", (_, pick, expected) => {
+    const own = memberInOwnUnits(typedMember, readMemberUnits("length=ft, force=kip, EI=kip*in^2")!);
+    expect(pick(own)).toEqual(expected);
+  });
+
+  test("a member read with units has the same nodes, as typed, as without", () => {
+    const args = { spans: [["12 8"]], loads: [["point 3 at 20"]], supports: [["pin pin free"]], EI: null, combo: null };
+    const withUnits = solvedMember({ ...args, units: [["length=ft, force=kip"]] }, readMemberUnits("length=ft, force=kip"));
+    const without = solvedMember({ ...args, units: null }, null);
+    expect(withUnits.nodeX).toEqual(without.nodeX);
+    expect(withUnits.nodeX).toEqual([0, 12, 20]);
   });
 });
