@@ -349,8 +349,8 @@ export class Pane {
 
   private bind(): void {
     const root = this.root;
-    root.querySelector(".write-table")?.addEventListener("click", () => void this.writeTable());
-    root.querySelector(".insert-charts")?.addEventListener("click", () => void this.insertCharts());
+    root.querySelector(".write-table")?.addEventListener("click", () => void this.writeTable().catch((error: unknown) => this.message(error instanceof Error ? error.message : String(error), "error")));
+    root.querySelector(".insert-charts")?.addEventListener("click", () => void this.insertCharts().catch((error: unknown) => this.message(error instanceof Error ? error.message : String(error), "error")));
     root.querySelector(".export-svg")?.addEventListener("click", () => this.exportSvg());
     root.querySelector(".export-png")?.addEventListener("click", () => void this.exportPng());
     root.querySelector(".confirm-yes")?.addEventListener("click", () => this.pendingConfirm?.(true));
