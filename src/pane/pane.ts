@@ -14,6 +14,7 @@ import { MEMBER_ARGUMENTS, classifyArgument, type MemberArgument } from "./formu
 import { qualify, type SheetHost } from "./host";
 import { findMember, resolveSources, solveMember, type MemberSources, type ResolvedMember, type Solved } from "./memberFromSheet";
 import { blockText } from "./addresses";
+import { cellMessage } from "./cellMessage";
 import { chartRequests, planTable, tableInPlace, writeTable } from "./writeBack";
 import { DEFAULT_POINTS } from "../sheet";
 
@@ -132,6 +133,8 @@ export class Pane {
         return;
       }
       this.use(lookup.member);
+      const why = await cellMessage(this.host, selection);
+      if (why && generation === this.generation) this.message(why, "error");
     } catch (error) {
       if (generation === this.generation) this.message(error instanceof Error ? error.message : String(error), "error");
     }

@@ -1,7 +1,7 @@
 /**
  * What a selection change will read, known from the formula text alone, so that a host with
  * round trips (Office) can read it all in one batch: every range the SPAN formula names, the
- * spills of its `A1#` arguments, its named ranges, and the label cells beside each of them
+ * spills of its `A1#` arguments, its named ranges, and the label cells beside the member's
  * (what the pane reads to guess units). Pure; addresses are sheet-qualified A1 text.
  */
 import { blockText, parseBlock } from "./addresses";
@@ -75,23 +75,24 @@ export function planReads(selection: Selection, nameRange: (name: string, scope:
   const add = (list: string[], address: string): void => {
     if (!list.some((known) => addressKey(known, selection.sheet) === addressKey(address, selection.sheet))) list.push(address);
   };
-  for (const argument of MEMBER_ARGUMENTS) {
-    const source = parsed.call.args[argument];
-    if (!source) continue;
+  // Every argument is read (the member's, and x, points... for the cell's own message), and
+  // the label cells of the member's arguments (for the unit guess).
+  for (const [argument, source] of Object.entries(parsed.call.args)) {
+    const labelled = (MEMBER_ARGUMENTS as readonly string[]).includes(argument);
     const sheet = "sheet" in source && source.sheet !== undefined ? source.sheet : selection.sheet;
     if (source.kind === "range") {
       const address = qualify(sheet, source.address);
       add(plan.ranges, address);
-      for (const label of labelWindows(address)) add(plan.ranges, label);
+      if (labelled) for (const label of labelWindows(address)) add(plan.ranges, label);
     } else if (source.kind === "spill") {
       const anchor = qualify(sheet, source.address);
       add(plan.spills, anchor);
       // A spill starts at its anchor, so its label cells are the anchor's.
-      for (const label of labelWindows(anchor)) add(plan.ranges, label);
+      if (labelled) for (const label of labelWindows(anchor)) add(plan.ranges, label);
     } else if (source.kind === "name") {
       if (!plan.names.some((n) => nameKey(n.name, n.scope) === nameKey(source.name, sheet))) plan.names.push({ name: source.name, scope: sheet });
       const known = nameRange(source.name, sheet);
-      if (known !== undefined) for (const label of labelWindows(known)) add(plan.ranges, label);
+      if (labelled && known !== undefined) for (const label of labelWindows(known)) add(plan.ranges, label);
     }
   }
   return plan;
