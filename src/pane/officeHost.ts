@@ -247,13 +247,17 @@ export class OfficeHost implements SheetHost {
     });
   }
 
-  isEmpty(address: string): Promise<boolean> {
-    return this.run(async (context) => {
-      const range = this.range(context, address);
-      range.load("formulas");
-      await context.sync();
-      return range.formulas.every((row) => row.every((cell) => cell === "" || cell === null || cell === undefined));
-    });
+  async isEmpty(address: string): Promise<boolean> {
+    try {
+      return await this.run(async (context) => {
+        const range = this.range(context, address);
+        range.load("formulas");
+        await context.sync();
+        return range.formulas.every((row) => row.every((cell) => cell === "" || cell === null || cell === undefined));
+      });
+    } catch (error) {
+      throw hostFailure(error, `${address} could not be checked before writing`, address);
+    }
   }
 
   async writeBlock(address: string, block: CellInput[][]): Promise<void> {

@@ -263,3 +263,10 @@ describe("OfficeHost: diagram table and charts", () => {
     ]);
   });
 });
+
+describe("OfficeHost: a write aimed at a sheet that is gone", () => {
+  it("the check before writing rejects with ItemNotFound and the range, as a SheetHostError", async () => {
+    const { host } = officeFor(beamBook());
+    await expect(host.isEmpty("Gone!N3:R107")).rejects.toMatchObject({ name: "SheetHostError", code: "ItemNotFound", address: "Gone!N3:R107", message: expect.stringMatching(/^Gone!N3:R107 could not be checked before writing: the sheet or range no longer exists/) });
+  });
+});
