@@ -109,8 +109,9 @@ export class WorkbenchHost implements SheetHost {
   /**
    * Calls back on selection changes. The workbench re-announces its unchanged selection after
    * every write (its grid re-renders); the announcements made by this host's own writes are
-   * dropped, as the spreadsheet host fires no selection event for an add-in's write: otherwise
-   * the pane's table write would re-read the member and wipe the outcome it just showed.
+   * dropped, since they are no selection change (the spreadsheet host's event is named for the
+   * selection; that it stays silent on an add-in's write is on DEVELOPERS.md's list to confirm):
+   * otherwise the pane's table write would re-read the member and wipe the outcome it just showed.
    */
   onSelectionChange(listener: () => void): () => void {
     return this.api.onSelectionChange(() => {

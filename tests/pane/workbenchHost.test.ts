@@ -1,8 +1,9 @@
 /**
  * The workbench adapter passes on the user's selection changes, and drops the re-announcement
- * of the unchanged selection that the workbench makes while this host writes into it: the
- * spreadsheet host fires its DocumentSelectionChanged event for the user's selection, not for
- * an add-in's write (https://learn.microsoft.com/javascript/api/office/office.eventtype).
+ * of the unchanged selection that the workbench makes while this host writes into it (no
+ * selection change: SheetHost.onSelectionChange is about the selection, like the spreadsheet
+ * host's DocumentSelectionChanged; that the spreadsheet host is silent on an add-in's write is
+ * listed in DEVELOPERS.md under "Needs a real host to confirm").
  */
 import type { SelectionInfo } from "../../src/workbench/api";
 import { WorkbenchHost, type WorkbenchLike } from "../../src/pane/workbenchHost";
