@@ -6,6 +6,8 @@
  * (https://learn.microsoft.com/office/dev/add-ins/develop/initialize-add-in, "Initialize with
  * Office.onReady()"); ../shared/TOOLCHAIN.md ("Office libraries") saw the same on this machine.
  */
+import * as fs from "fs";
+import * as path from "path";
 import { SLOW_START_MESSAGE, NO_OFFICE_JS_MESSAGE, SLOW_START_MS, detectHost, type OfficeReady } from "../../src/pane/hostDetection";
 
 /** An Office global whose onReady answers after `ms` with `info` (or never, for Infinity). */
@@ -66,7 +68,7 @@ describe("detectHost", () => {
 
 describe("taskpane.ts start-up", () => {
   it("decides through detectHost, with no race of Office against a timer", () => {
-    const source = require("fs").readFileSync(require("path").join(__dirname, "../../src/pane/taskpane.ts"), "utf8") as string;
+    const source = fs.readFileSync(path.join(__dirname, "../../src/pane/taskpane.ts"), "utf8");
     expect(source).toMatch(/detectHost\(/);
     expect(source).not.toMatch(/Promise\.race|onReady\(/);
   });

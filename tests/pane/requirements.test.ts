@@ -10,6 +10,7 @@
  * The scan uses the TypeScript checker on src/pane/officeHost.ts: a new API call there fails
  * this test until it is listed below with its set, and, above the baseline, guarded.
  */
+import * as fs from "fs";
 import * as path from "path";
 import * as ts from "typescript";
 import { BASELINE, DOCUMENT_EVENTS, OPTIONAL, versionAtLeast } from "../../src/pane/requirements";
@@ -131,17 +132,17 @@ function scan(): Use[] {
 
 /** The optional features a method of officeHost.ts checks (`this.need(OPTIONAL.x)` or `this.has(OPTIONAL.x)`). */
 function guardsOf(method: string, source: string): string[] {
-  const start = source.search(new RegExp(`\\n  (?:async |private |private async )?${method}\\(`));
+  const start = source.search(new RegExp(`\\n {2}(?:async |private |private async )?${method}\\(`));
   if (start < 0) return [];
   const rest = source.slice(start + 1);
-  const end = rest.search(/\n  (?:async |private |private async )?\w+\(/);
+  const end = rest.search(/\n {2}(?:async |private |private async )?\w+\(/);
   const body = end < 0 ? rest : rest.slice(0, end);
   return [...body.matchAll(/this\.(?:need|has)\(OPTIONAL\.(\w+)\)/g)].map((m) => m[1]);
 }
 
 describe("requirement sets of the Office host adapter", () => {
   const uses = scan();
-  const source: string = require("fs").readFileSync(SOURCE, "utf8");
+  const source = fs.readFileSync(SOURCE, "utf8");
 
   it("finds the adapter's API calls (the scan itself works)", () => {
     const apis = new Set(uses.map((u) => u.api));
@@ -167,7 +168,7 @@ describe("requirement sets of the Office host adapter", () => {
   it("Common API sets used are checked at start-up (taskpane.ts checks DOCUMENT_EVENTS and BASELINE)", () => {
     const common = new Set(uses.map((u) => u.set).filter((s) => s !== "-" && !s.startsWith("ExcelApi")));
     expect([...common]).toEqual([DOCUMENT_EVENTS.name]);
-    const taskpane: string = require("fs").readFileSync(path.join(__dirname, "../../src/pane/taskpane.ts"), "utf8");
+    const taskpane = fs.readFileSync(path.join(__dirname, "../../src/pane/taskpane.ts"), "utf8");
     expect(taskpane).toMatch(/\[BASELINE, DOCUMENT_EVENTS\]\.find\(\(set\) => !supports\(set\.name, set\.version\)\)/);
   });
 

@@ -134,14 +134,13 @@ class FakeContext {
   readonly workbook: unknown;
 
   constructor(readonly book: FakeWorkbook) {
-    const context = this;
     this.workbook = {
-      getSelectedRange: () => new RangeProxy(context, () => ({ sheet: book.find(book.selection.sheet), block: parseBlock(book.selection.range) })),
+      getSelectedRange: () => new RangeProxy(this, () => ({ sheet: book.find(book.selection.sheet), block: parseBlock(book.selection.range) })),
       worksheets: {
-        getItem: (name: string) => new SheetProxy(context, () => book.find(name)),
-        getActiveWorksheet: () => new SheetProxy(context, () => book.find(book.selection.sheet)),
+        getItem: (name: string) => new SheetProxy(this, () => book.find(name)),
+        getActiveWorksheet: () => new SheetProxy(this, () => book.find(book.selection.sheet)),
       },
-      names: new NamesProxy(context, undefined),
+      names: new NamesProxy(this, undefined),
     };
   }
 
