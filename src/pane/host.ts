@@ -84,3 +84,21 @@ export function splitAddress(text: string): { sheet?: string; address: string } 
   const sheet = text.slice(0, bang).replace(/^'(.*)'$/, "$1").replace(/''/g, "'");
   return { sheet, address: text.slice(bang + 1) };
 }
+
+/**
+ * A host operation that failed in a way the user can act on: a write into a protected sheet,
+ * part of an array, merged cells; a feature this version of the spreadsheet lacks. `message`
+ * is written for the user (shown as is in the pane); `code` is the host's error code
+ * ("AccessDenied", "MergedRangeConflict", ... or "RequirementNotMet"); `address` is the range
+ * the operation was about, when there was one.
+ */
+export class SheetHostError extends Error {
+  constructor(
+    message: string,
+    readonly code: string,
+    readonly address?: string,
+  ) {
+    super(message);
+    this.name = "SheetHostError";
+  }
+}

@@ -1,21 +1,39 @@
 /**
  * The pane's host in the spreadsheet, over Office.js — the only file that uses `Office` or
- * `Excel`. Both are passed in (the globals by default) so tests can hand in mocks.
+ * `Excel`. Both are passed in (the globals by default) so tests can hand in fakes.
+ *
+ * Round trips: every `context.sync()` is one round trip to the host, slow above all on the
+ * web, and the documentation asks for loads to be batched before one sync
+ * (https://learn.microsoft.com/office/dev/add-ins/excel/performance, "Batch loads and writes";
+ * https://learn.microsoft.com/office/dev/add-ins/develop/application-specific-api-model).
+ * So `getSelection` reads the selection and its formula (sync 1), then, when the formula holds
+ * a SPAN call, everything the member lookup will ask for — every range the formula names,
+ * spills, named ranges and their label cells — in one more batch (sync 2). The lookup that
+ * follows is answered from that read. The read is kept only until the current task ends (the
+ * lookup runs in microtasks right after `getSelection`), and is dropped on any write or
+ * selection change, so it never answers later questions with old cells; anything not in it is
+ * read live.
+ *
+ * Failures: a write or chart the host refuses (protected sheet, part of an array, merged
+ * cells, cell edit mode) rejects with a SheetHostError whose message says what to do, by the
+ * documented error codes (https://learn.microsoft.com/office/dev/add-ins/testing/application-specific-api-error-handling).
+ * Optional requirement sets (requirements.ts) are checked before the API that needs them.
  */
 import { isDarkColour } from "./draw/palette";
-import { splitAddress, type CellInput, type CellValue, type ChartRequest, type Selection, type SheetHost } from "./host";
+import { SheetHostError, splitAddress, type CellInput, type CellValue, type ChartRequest, type Selection, type SheetHost } from "./host";
+import { addressKey, nameKey, planReads, rangeOfNameFormula } from "./readAhead";
+import { BASELINE, OPTIONAL, missingSetMessage, officeRequirements, type Feature, type IsSetSupported } from "./requirements";
 
 export type ExcelRun = <T>(batch: (context: Excel.RequestContext) => Promise<T>) => Promise<T>;
 
+/** The parts of `Office` the host uses (typed from office.js so the requirement-set check sees them). */
 export interface OfficeLike {
   context: {
-    document: {
-      addHandlerAsync(type: unknown, handler: () => void, callback?: (result: unknown) => void): void;
-      removeHandlerAsync(type: unknown, options: unknown, callback?: (result: unknown) => void): void;
-    };
-    officeTheme?: { bodyBackgroundColor?: string };
+    document: Pick<Office.Document, "addHandlerAsync" | "removeHandlerAsync">;
+    officeTheme?: Pick<Office.OfficeTheme, "bodyBackgroundColor">;
+    requirements?: Pick<Office.RequirementSetSupport, "isSetSupported">;
   };
-  EventType: { DocumentSelectionChanged: unknown };
+  EventType: { DocumentSelectionChanged: Office.EventType };
 }
 
 function cellValue(value: unknown): CellValue {
@@ -24,12 +42,75 @@ function cellValue(value: unknown): CellValue {
   return String(value);
 }
 
+/** What the user can do about a host error code, by the codes the error-handling page lists. */
+function advice(code: string): string {
+  switch (code) {
+    case "AccessDenied":
+      return "Excel refused the change: the sheet may be protected or the workbook read-only; unprotect it or choose another sheet";
+    case "InvalidOperation":
+      return "Excel does not allow the change there: the cells may be part of an array or a spilled range, merged, or in a table";
+    case "MergedRangeConflict":
+      return "the cells overlap merged cells, a table or a PivotTable; unmerge them or make room";
+    case "PivotTableRangeConflict":
+      return "the cells overlap a PivotTable; make room beside the member";
+    case "FilteredRangeConflict":
+      return "the cells overlap a filtered range; clear the filter or make room";
+    case "InvalidOperationInCellEditMode":
+      return "Excel is editing a cell; press Enter or Esc, then try again";
+    case "ItemNotFound":
+      return "the sheet or range no longer exists";
+    case "InvalidArgument":
+    case "InvalidReference":
+      return "Excel does not accept that range";
+    case "ApiNotFound":
+    case "NotImplemented":
+      return "this Excel does not support the operation";
+    case "RangeExceedsLimit":
+    case "ResponsePayloadSizeLimitExceeded":
+    case "RequestPayloadSizeLimitExceeded":
+      return "the range is larger than Excel lets an add-in handle at once";
+    default:
+      return "Excel could not do it";
+  }
+}
+
+/** A host failure as the user-facing typed error. */
+export function hostFailure(error: unknown, action: string, address?: string): SheetHostError {
+  if (error instanceof SheetHostError) return error;
+  const code = typeof (error as { code?: unknown })?.code === "string" ? (error as { code: string }).code : "Unknown";
+  const said = error instanceof Error || typeof (error as { message?: unknown })?.message === "string" ? String((error as { message: string }).message) : String(error);
+  return new SheetHostError(`${action}: ${advice(code)} (${code}${said && said !== code ? `: ${said}` : ""})`, code, address);
+}
+
+/** What one selection's batch read: values by address key, spills by anchor key, names by name key. */
+interface ReadAhead {
+  values: Map<string, CellValue[][]>;
+  spills: Map<string, string | undefined>;
+  names: Map<string, string | undefined>;
+}
+
 export class OfficeHost implements SheetHost {
   readonly kind = "office";
+  private readAhead: ReadAhead | undefined;
+  private readonly supports: IsSetSupported;
+
   constructor(
     private readonly run: ExcelRun = (batch) => Excel.run(batch),
     private readonly office: OfficeLike = Office as unknown as OfficeLike,
-  ) {}
+    supports?: IsSetSupported,
+  ) {
+    this.supports = supports ?? officeRequirements(office);
+  }
+
+  /** True when the host has the feature's requirement set. */
+  has(feature: Feature): boolean {
+    return this.supports(feature.name, feature.version);
+  }
+
+  /** Refuses, with the message the pane shows, a feature whose set the host lacks. */
+  private need(feature: Feature): void {
+    if (!this.has(feature)) throw new SheetHostError(missingSetMessage(feature), "RequirementNotMet");
+  }
 
   private range(context: Excel.RequestContext, address: string): Excel.Range {
     const { sheet, address: cells } = splitAddress(address);
@@ -37,27 +118,98 @@ export class OfficeHost implements SheetHost {
     return worksheet.getRange(cells);
   }
 
-  getSelection(): Promise<Selection> {
-    return this.run(async (context) => {
+  private forget(): void {
+    this.readAhead = undefined;
+  }
+
+  async getSelection(): Promise<Selection> {
+    this.forget();
+    const { selection, read } = await this.run(async (context) => {
+      this.need(BASELINE);
       const selected = context.workbook.getSelectedRange();
       selected.load("address");
       const cell = selected.getCell(0, 0);
       cell.load("address, formulas, values");
+      // Names are listed with the selection so that their label cells can join the second batch.
+      const bookNames = context.workbook.names;
+      bookNames.load("items/name, items/type, items/value");
+      const sheetNames = selected.worksheet.names;
+      sheetNames.load("items/name, items/type, items/value");
       await context.sync();
       const whole = splitAddress(selected.address);
       const active = splitAddress(cell.address);
       const formula = cell.formulas?.[0]?.[0];
-      return {
+      const selection: Selection = {
         sheet: active.sheet ?? whole.sheet ?? "",
         cell: active.address,
         formula: typeof formula === "string" && formula.startsWith("=") ? formula : undefined,
         value: cellValue(cell.values?.[0]?.[0]),
         range: whole.address,
       };
+      const listed = (collection: Excel.NamedItemCollection, name: string, scope: string): string | undefined => {
+        const item = collection.items.find((n) => n.name.toUpperCase() === name.toUpperCase());
+        return item && item.type === "Range" ? rangeOfNameFormula(item.value, scope) : undefined;
+      };
+      const plan = planReads(selection, (name, scope) =>
+        scope.toUpperCase() === selection.sheet.toUpperCase() ? (listed(sheetNames, name, scope) ?? listed(bookNames, name, scope)) : listed(bookNames, name, scope),
+      );
+      if (plan.ranges.length + plan.spills.length + plan.names.length === 0) return { selection, read: undefined };
+      return { selection, read: await this.readPlan(context, plan, selection.sheet) };
     });
+    if (read) {
+      this.readAhead = read;
+      // Kept for the lookup that follows in this task only; later questions read live cells.
+      setTimeout(() => {
+        if (this.readAhead === read) this.forget();
+      }, 0);
+    }
+    return selection;
   }
 
-  getValues(address: string): Promise<CellValue[][]> {
+  /** The second batch: every read of the plan queued, one sync. Undefined when the batch fails (then every read goes live and reports its own error). */
+  private async readPlan(context: Excel.RequestContext, plan: ReturnType<typeof planReads>, sheet: string): Promise<ReadAhead | undefined> {
+    const ranges = plan.ranges.map((address) => {
+      const range = this.range(context, address);
+      range.load("values");
+      return { address, range };
+    });
+    const spills = this.has(OPTIONAL.spill)
+      ? plan.spills.map((anchor) => {
+          const spill = this.range(context, anchor).getSpillingToRangeOrNullObject();
+          spill.load("address, values");
+          return { anchor, spill };
+        })
+      : [];
+    const names = plan.names.map(({ name, scope }) => {
+      const local = context.workbook.worksheets.getItem(scope).names.getItemOrNullObject(name).getRangeOrNullObject();
+      const global = context.workbook.names.getItemOrNullObject(name).getRangeOrNullObject();
+      local.load("address, values");
+      global.load("address, values");
+      return { name, scope, local, global };
+    });
+    try {
+      await context.sync();
+    } catch {
+      return undefined;
+    }
+    const read: ReadAhead = { values: new Map(), spills: new Map(), names: new Map() };
+    const rows = (values: unknown[][]): CellValue[][] => values.map((row) => row.map(cellValue));
+    for (const { address, range } of ranges) read.values.set(addressKey(address, sheet), rows(range.values));
+    for (const { anchor, spill } of spills) {
+      read.spills.set(addressKey(anchor, sheet), spill.isNullObject ? undefined : spill.address);
+      if (!spill.isNullObject) read.values.set(addressKey(spill.address, sheet), rows(spill.values));
+    }
+    for (const { name, scope, local, global } of names) {
+      const found = !local.isNullObject ? local : !global.isNullObject ? global : undefined;
+      read.names.set(nameKey(name, scope), found?.address);
+      if (found) read.values.set(addressKey(found.address, sheet), rows(found.values));
+    }
+    return read;
+  }
+
+  async getValues(address: string): Promise<CellValue[][]> {
+    const known = this.readAhead?.values.get(addressKey(address, ""));
+    if (known) return known.map((row) => [...row]);
     return this.run(async (context) => {
       const range = this.range(context, address);
       range.load("values");
@@ -66,7 +218,9 @@ export class OfficeHost implements SheetHost {
     });
   }
 
-  resolveName(name: string, scope: string): Promise<string | undefined> {
+  async resolveName(name: string, scope: string): Promise<string | undefined> {
+    const key = nameKey(name, scope);
+    if (this.readAhead?.names.has(key)) return this.readAhead.names.get(key);
     return this.run(async (context) => {
       const local = context.workbook.worksheets.getItem(scope).names.getItemOrNullObject(name);
       const global = context.workbook.names.getItemOrNullObject(name);
@@ -81,7 +235,10 @@ export class OfficeHost implements SheetHost {
     });
   }
 
-  spillRange(address: string): Promise<string | undefined> {
+  async spillRange(address: string): Promise<string | undefined> {
+    const key = addressKey(address, "");
+    if (this.readAhead?.spills.has(key)) return this.readAhead.spills.get(key);
+    this.need(OPTIONAL.spill);
     return this.run(async (context) => {
       const spill = this.range(context, address).getSpillingToRangeOrNullObject();
       spill.load("address");
@@ -90,55 +247,79 @@ export class OfficeHost implements SheetHost {
     });
   }
 
-  isEmpty(address: string): Promise<boolean> {
-    return this.run(async (context) => {
-      const range = this.range(context, address);
-      range.load("formulas");
-      await context.sync();
-      return range.formulas.every((row) => row.every((cell) => cell === "" || cell === null || cell === undefined));
-    });
-  }
-
-  writeBlock(address: string, block: CellInput[][]): Promise<void> {
-    return this.run(async (context) => {
-      // Office leaves a cell unchanged where the formulas array holds null.
-      this.range(context, address).formulas = block as unknown as string[][];
-      await context.sync();
-    });
-  }
-
-  clear(address: string): Promise<void> {
-    return this.run(async (context) => {
-      this.range(context, address).clear("Contents");
-      await context.sync();
-    });
-  }
-
-  addChart(request: ChartRequest): Promise<void> {
-    return this.run(async (context) => {
-      const sheet = context.workbook.worksheets.getItem(request.sheet);
-      const first = request.series[0];
-      const chart = sheet.charts.add("XYScatterLinesNoMarkers", sheet.getRange(first.y), "Columns");
-      chart.title.text = request.title;
-      request.series.forEach((series, index) => {
-        const item = index === 0 ? chart.series.getItemAt(0) : chart.series.add(series.name);
-        item.name = series.name;
-        item.setXAxisValues(sheet.getRange(request.x));
-        if (index > 0) item.setValues(sheet.getRange(series.y));
+  async isEmpty(address: string): Promise<boolean> {
+    try {
+      return await this.run(async (context) => {
+        const range = this.range(context, address);
+        range.load("formulas");
+        await context.sync();
+        return range.formulas.every((row) => row.every((cell) => cell === "" || cell === null || cell === undefined));
       });
-      chart.axes.categoryAxis.title.text = request.xTitle;
-      chart.axes.valueAxis.title.text = request.yTitle;
-      chart.legend.visible = request.series.length > 1;
-      const [from, to] = request.placeAt.split(":");
-      chart.setPosition(from, to);
-      await context.sync();
-    });
+    } catch (error) {
+      throw hostFailure(error, `${address} could not be checked before writing`, address);
+    }
+  }
+
+  async writeBlock(address: string, block: CellInput[][]): Promise<void> {
+    this.forget();
+    try {
+      await this.run(async (context) => {
+        // Office leaves a cell unchanged where the formulas array holds null.
+        this.range(context, address).formulas = block as unknown as string[][];
+        await context.sync();
+      });
+    } catch (error) {
+      throw hostFailure(error, `Nothing written to ${address}`, address);
+    }
+  }
+
+  async clear(address: string): Promise<void> {
+    this.forget();
+    try {
+      await this.run(async (context) => {
+        this.range(context, address).clear("Contents");
+        await context.sync();
+      });
+    } catch (error) {
+      throw hostFailure(error, `${address} was not cleared`, address);
+    }
+  }
+
+  async addChart(request: ChartRequest): Promise<void> {
+    this.forget();
+    this.need(OPTIONAL.chartSeries);
+    try {
+      await this.run(async (context) => {
+        const sheet = context.workbook.worksheets.getItem(request.sheet);
+        const first = request.series[0];
+        const chart = sheet.charts.add("XYScatterLinesNoMarkers", sheet.getRange(first.y), "Columns");
+        chart.title.text = request.title;
+        request.series.forEach((series, index) => {
+          const item = index === 0 ? chart.series.getItemAt(0) : chart.series.add(series.name);
+          item.name = series.name;
+          item.setXAxisValues(sheet.getRange(request.x));
+          if (index > 0) item.setValues(sheet.getRange(series.y));
+        });
+        chart.axes.categoryAxis.title.text = request.xTitle;
+        chart.axes.valueAxis.title.text = request.yTitle;
+        chart.legend.visible = request.series.length > 1;
+        const [from, to] = request.placeAt.split(":");
+        chart.setPosition(from, to);
+        await context.sync();
+      });
+    } catch (error) {
+      throw hostFailure(error, `The ${request.title.toLowerCase()} chart was not added on ${request.sheet}`, request.placeAt);
+    }
   }
 
   onSelectionChange(listener: () => void): () => void {
     const type = this.office.EventType.DocumentSelectionChanged;
-    this.office.context.document.addHandlerAsync(type, listener);
-    return () => this.office.context.document.removeHandlerAsync(type, { handler: listener });
+    const handler = (): void => {
+      this.forget();
+      listener();
+    };
+    this.office.context.document.addHandlerAsync(type, handler);
+    return () => this.office.context.document.removeHandlerAsync(type, { handler });
   }
 
   theme(): "light" | "dark" | undefined {

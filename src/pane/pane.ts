@@ -15,8 +15,9 @@ import { MEMBER_ARGUMENTS, classifyArgument, type MemberArgument } from "./formu
 import { qualify, type SheetHost } from "./host";
 import { findMember, resolveSources, solveMember, type MemberSources, type ResolvedMember, type Solved } from "./memberFromSheet";
 import { blockText } from "./addresses";
+import { cellMessage } from "./cellMessage";
 import { chartRequests, diagramRows, planTable, tableInPlace, writeTable } from "./writeBack";
-import { DEFAULT_POINTS, describeError } from "../sheet";
+import { DEFAULT_POINTS } from "../sheet";
 import { NO_UNITS, type Units } from "./units";
 
 export const CAUTION = "Results are an aid to a qualified engineer, who checks them; local codes and licensed practice govern.";
@@ -152,8 +153,11 @@ export class Pane {
         return;
       }
       this.use(lookup.member);
+      const why = await cellMessage(this.host, selection);
+      if (generation !== this.generation) return;
       const shows = typeof selection.value === "string" ? /^#(SPILL|CALC|REF|NAME\?|VALUE|N\/A)!?/i.exec(selection.value)?.[0] : undefined;
-      if (shows && el<HTMLElement>(this.root, ".message").hidden) {
+      if (why) this.message(why, "error");
+      else if (shows && el<HTMLElement>(this.root, ".message").hidden) {
         this.message(`${selection.cell} shows ${selection.value}: what is drawn is what its arguments give, not what the cell shows now`, "error");
       }
     } catch (error) {
@@ -448,7 +452,8 @@ export class Pane {
       if ((event.target as HTMLElement).closest?.("button:not(.confirm-yes):not(.confirm-no)")) this.outcome(undefined);
     }, true);
     root.addEventListener("change", () => this.outcome(undefined), true);
-    const failed = (error: unknown): void => this.outcome(`nothing written: ${describeError(error).message}`, "error");
+    // Host refusals (SheetHostError) and the sheet layer's own errors both carry a message for the user.
+    const failed = (error: unknown): void => this.outcome(`nothing written: ${error instanceof Error ? error.message : String(error)}`, "error");
     root.querySelector(".write-table")?.addEventListener("click", () => void this.writeTable().catch(failed));
     root.querySelector(".insert-charts")?.addEventListener("click", () => void this.insertCharts().catch(failed));
     root.querySelector(".export-svg")?.addEventListener("click", () => this.exportSvg());

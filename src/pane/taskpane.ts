@@ -1,13 +1,16 @@
 /**
- * Entry of taskpane.html. In the spreadsheet host the pane talks to the workbook through
- * OfficeHost. Outside it (Office.onReady reports no host), it runs on the workbench: inside a
- * workbench page that embeds it, or, opened on its own, beside the workbench in a frame.
+ * Entry of taskpane.html. Where it runs is decided by hostDetection.ts: in Excel the pane
+ * talks to the workbook through OfficeHost (after waiting for Office however long it takes);
+ * only without a host does it run on the workbench: inside a workbench page that embeds it,
+ * or, opened on its own, beside the workbench in a frame.
  */
 import type { WorkbenchApi } from "../workbench/api";
 import type { Theme } from "./draw/palette";
 import type { SheetHost } from "./host";
+import { detectHost, type Startup } from "./hostDetection";
 import { OfficeHost } from "./officeHost";
 import { Pane } from "./pane";
+import { BASELINE, DOCUMENT_EVENTS, missingSetMessage, officeRequirements } from "./requirements";
 import { WorkbenchHost } from "./workbenchHost";
 
 declare global {
@@ -27,13 +30,14 @@ function parentWorkbench(): WorkbenchApi | undefined {
   return undefined;
 }
 
-/** The host Office reports, or null outside one (or when office.js is absent or silent). */
-function officeHost(): Promise<string | null> {
-  if (typeof Office === "undefined") return Promise.resolve(null);
-  return Promise.race([
-    Office.onReady().then((info) => (info.host ? String(info.host) : null)),
-    new Promise<null>((resolve) => setTimeout(() => resolve(null), 3000)),
-  ]);
+/** True when another page (not the workbench) frames this one, as Excel on the web does. */
+function framedByOtherPage(): boolean {
+  return window.parent !== window && parentWorkbench() === undefined;
+}
+
+function startup(status: (text: string) => void): Promise<Startup> {
+  const office = typeof Office === "undefined" ? undefined : Office;
+  return detectHost({ office, framedByOtherPage: framedByOtherPage(), onSlow: status });
 }
 
 function embeddedWorkbench(): Promise<WorkbenchApi> {
@@ -67,19 +71,31 @@ function themeFor(host: SheetHost): () => Theme {
 async function boot(): Promise<void> {
   const root = document.getElementById("pane");
   if (!root) return;
+  const status = (text: string): void => {
+    const line = root.querySelector("p:last-child");
+    if (line) line.textContent = text;
+  };
   try {
     let host: SheetHost;
     const bench = parentWorkbench();
     if (bench) host = new WorkbenchHost(bench);
-    else if ((await officeHost()) === "Excel") host = new OfficeHost();
-    else host = new WorkbenchHost(await embeddedWorkbench());
+    else {
+      const where = await startup(status);
+      if (where.kind === "refused") return status(where.message);
+      if (where.kind === "excel") {
+        const supports = officeRequirements(Office);
+        const missing = [BASELINE, DOCUMENT_EVENTS].find((set) => !supports(set.name, set.version));
+        if (missing) return status(missingSetMessage(missing));
+        host = new OfficeHost(undefined, undefined, supports);
+      } else host = new WorkbenchHost(await embeddedWorkbench());
+    }
     const pane = new Pane(host, root, themeFor(host));
     window.spanwisePane = pane;
     window.matchMedia?.("(prefers-color-scheme: dark)").addEventListener?.("change", () => pane.redraw());
     pane.start();
     document.body.dataset.paneReady = "true";
   } catch (error) {
-    root.querySelector("p:last-child")!.textContent = `The pane could not start: ${error instanceof Error ? error.message : String(error)}`;
+    status(`The pane could not start: ${error instanceof Error ? error.message : String(error)}`);
   }
 }
 

@@ -24,7 +24,18 @@ function numbers(rows: CellValue[][]): number[] {
 
 export class WorkbenchHost implements SheetHost {
   readonly kind = "workbench";
+  /** True while this host writes into the workbench (see onSelectionChange). */
+  private writing = false;
   constructor(private readonly api: WorkbenchLike) {}
+
+  private write(address: string, block: CellInput[][]): void {
+    this.writing = true;
+    try {
+      this.api.setValues(address, block);
+    } finally {
+      this.writing = false;
+    }
+  }
 
   async getSelection(): Promise<Selection> {
     const s = this.api.getSelection();
@@ -97,14 +108,14 @@ export class WorkbenchHost implements SheetHost {
   }
 
   async writeBlock(address: string, block: CellInput[][]): Promise<void> {
-    this.api.setValues(address, block);
+    this.write(address, block);
   }
 
   async clear(address: string): Promise<void> {
     const block = parseBlock(splitAddress(address).address);
     const rows = block.to.row - block.from.row + 1;
     const cols = block.to.col - block.from.col + 1;
-    this.api.setValues(address, Array.from({ length: rows }, () => Array.from({ length: cols }, () => null)));
+    this.write(address, Array.from({ length: rows }, () => Array.from({ length: cols }, () => null)));
   }
 
   async addChart(request: ChartRequest): Promise<void> {
@@ -115,8 +126,17 @@ export class WorkbenchHost implements SheetHost {
     this.api.addChart({ title: request.title, x, series });
   }
 
+  /**
+   * Calls back on selection changes. The workbench re-announces its unchanged selection after
+   * every write (its grid re-renders); the announcements made by this host's own writes are
+   * dropped, since they are no selection change (the spreadsheet host's event is named for the
+   * selection; that it stays silent on an add-in's write is on DEVELOPERS.md's list to confirm):
+   * otherwise the pane's table write would re-read the member and wipe the outcome it just showed.
+   */
   onSelectionChange(listener: () => void): () => void {
-    return this.api.onSelectionChange(() => listener());
+    return this.api.onSelectionChange(() => {
+      if (!this.writing) listener();
+    });
   }
 
   theme(): "light" | "dark" | undefined {

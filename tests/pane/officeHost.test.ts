@@ -1,14 +1,21 @@
 /**
- * The Office adapter against office-addin-mock: selection to member, writes never over
- * anything without asking, charts requested with the right ranges. Collections (worksheets,
- * names, charts) are plain functions in the mock data, as the adapter only calls methods on them.
+ * The Office adapter against a fake Excel with the real API's batching rules (support/fakeExcel.ts):
+ * selection to member, round trips per selection change, writes never over anything without
+ * asking, failed writes surfaced with the host's error code, charts with the right ranges,
+ * optional requirement sets refused with a message.
+ * Sources: round trips — https://learn.microsoft.com/office/dev/add-ins/excel/performance
+ * ("Batch loads and writes ... then make a single context.sync()") and
+ * https://learn.microsoft.com/office/dev/add-ins/develop/application-specific-api-model;
+ * error codes — https://learn.microsoft.com/office/dev/add-ins/testing/application-specific-api-error-handling
+ * (tables "Error codes and messages" and "Excel-specific error codes and messages").
  */
-import { OfficeMockObject } from "office-addin-mock";
 import { extremes } from "../../src/core";
 import { sheetExtremes } from "../../src/sheet";
-import { findMember, solveMember } from "../../src/pane/memberFromSheet";
-import { OfficeHost, type ExcelRun, type OfficeLike } from "../../src/pane/officeHost";
+import { SheetHostError } from "../../src/pane/host";
+import { findMember, solveMember, type Lookup } from "../../src/pane/memberFromSheet";
+import { OfficeHost, type OfficeLike } from "../../src/pane/officeHost";
 import { chartRequests, planTable, writeTable } from "../../src/pane/writeBack";
+import { FakeWorkbook } from "./support/fakeExcel";
 
 const LOADS = [
   ["udl", 5.8, "", "", "", "D"],
@@ -16,108 +23,42 @@ const LOADS = [
   ["point", 12, 2.5, "", "", "L"],
 ];
 
-interface Calls {
-  written: { address: string; formulas: unknown }[];
-  cleared: string[];
-  charts: { type: string; source: string; seriesBy: string; x?: string; position?: [string, string]; title?: string }[];
+function beamBook(formula = "=SPAN.EXTREMES(B3:C3,loadTable,B4:D4,B5,B6)"): FakeWorkbook {
+  const book = new FakeWorkbook()
+    .put("Beam!A3", [["Spans (m)", 5.5, 5.5]])
+    .put("Beam!A4", [["Supports", "pin", "pin", "pin"]])
+    .put("Beam!A5", [["EI (kN·m²)", 18500]])
+    .put("Beam!A6", [["Combination", "1.2D+1.6L"]])
+    .put("Beam!A10", LOADS)
+    .put("'Load table'!A1", [["type", "magnitude", "x start", "x end", "magnitude at end", "case"], ...LOADS])
+    .putFormula("Beam!H3", formula, "shear")
+    .select("Beam!H3", "H3:H4");
+  book.names.set("LOADTABLE", "Beam!A10:F12");
+  return book;
 }
 
-function officeMock(targetFormulas: string[][]) {
-  const calls: Calls = { written: [], cleared: [], charts: [] };
-  // The mock built from `data` below; collection methods hand out its objects, not the raw data.
-  let mock: any = undefined;
-  const range = (address: string, values: unknown[][], formulas = values) => ({
-    address,
-    values,
-    formulas,
-    where() {
-      return address;
-    },
-    clear(applyTo: string) {
-      calls.cleared.push(`${address} ${applyTo}`);
-    },
-  });
-  const sheetRanges: Record<string, ReturnType<typeof range>> = {
-    "B3:C3": range("Beam!B3:C3", [[5.5, 5.5]]),
-    "A10:F12": range("Beam!A10:F12", LOADS),
-    "B4:D4": range("Beam!B4:D4", [["pin", "pin", "pin"]]),
-    B5: range("Beam!B5", [[18500]]),
-    B6: range("Beam!B6", [["1.2D+1.6L"]]),
-    A3: range("Beam!A3", [["Spans (m)"]]),
-    A5: range("Beam!A5", [["EI (kN·m²)"]]),
-    "B1:B2": range("Beam!B1:B2", [[""], [""]]),
-    "B1:B4": range("Beam!B1:B4", [[""], [""], [5.5], ["pin"]]),
-    "A1:A9": range("Beam!A1:A9", Array.from({ length: 9 }, () => [""])),
-    "N3:R107": range("Beam!N3:R107", targetFormulas),
-    "N3:R4": range("Beam!N3:R4", [[""]]),
-  };
-  for (const column of ["N", "O", "P", "R"]) sheetRanges[`${column}4:${column}107`] = range(`Beam!${column}4:${column}107`, [[0]]);
-  const data = {
-    context: {
-      workbook: {
-        selected: {
-          address: "Beam!H3:H4",
-          cell: { address: "Beam!H3", formulas: [["=SPAN.EXTREMES(B3:C3,loadTable,B4:D4,B5,B6)"]], values: [["shear"]] },
-          getCell() {
-            return this.cell;
-          },
-        },
-        getSelectedRange() {
-          return this.selected;
-        },
-        beam: {
-          ranges: sheetRanges,
-          localName: { range: { address: "", isNullObject: true }, getRangeOrNullObject() { return this.range; } },
-          names: { getItemOrNullObject() { return mock.context.workbook.beam.localName; } },
-          chart: {
-            title: { text: "" },
-            series: { first: { name: "", setXAxisValues(r: { where(): string }) { calls.charts[calls.charts.length - 1].x = r.where(); } }, getItemAt() { return this.first; }, add() { throw new Error("one series per chart"); } },
-            axes: { categoryAxis: { title: { text: "" } }, valueAxis: { title: { text: "" } } },
-            legend: { visible: true },
-            setPosition(from: string, to: string) { calls.charts[calls.charts.length - 1].position = [from, to]; },
-          },
-          charts: {
-            add(type: string, source: { where(): string }, seriesBy: string) {
-              calls.charts.push({ type, source: source.where(), seriesBy });
-              return mock.context.workbook.beam.chart;
-            },
-          },
-          getRange(address: string) {
-            const found = (this as any).ranges[address];
-            if (!found) throw new Error(`the test has no range ${address}`);
-            return found;
-          },
-        },
-        worksheets: {
-          getItem(name: string) {
-            if (name !== "Beam") throw new Error(`no sheet ${name}`);
-            return mock.context.workbook.beam;
-          },
-        },
-        globalName: { range: { address: "Beam!A10:F12", isNullObject: false }, getRangeOrNullObject() { return this.range; } },
-        names: { getItemOrNullObject() { return mock.context.workbook.globalName; } },
-      },
-    },
-    run: async function (batch: (context: unknown) => Promise<unknown>) {
-      return batch(this.context);
-    },
-  };
-  mock = new OfficeMockObject(data) as any;
-  // isNullObject is readable after sync without a load in Office; set it past the mock's load tracking.
-  mock.context.workbook.beam.localName.range.isNullObject = true;
-  mock.context.workbook.globalName.range.isNullObject = false;
+function officeFor(book: FakeWorkbook, supported: (name: string, version: string) => boolean = () => true) {
   const handlers: (() => void)[] = [];
-  const office: OfficeLike = {
-    context: { document: { addHandlerAsync: (_t, h) => void handlers.push(h), removeHandlerAsync: () => handlers.pop() }, officeTheme: { bodyBackgroundColor: "#262626" } },
+  const office = {
+    context: {
+      document: { addHandlerAsync: (_t: unknown, h: () => void) => void handlers.push(h), removeHandlerAsync: () => void handlers.pop() },
+      officeTheme: { bodyBackgroundColor: "#262626" },
+    },
     EventType: { DocumentSelectionChanged: "documentSelectionChanged" },
-  };
-  const run: ExcelRun = (batch) => mock.run(batch);
-  return { host: new OfficeHost(run, office), mock, calls, handlers, ranges: mock.context.workbook.beam.ranges };
+  } as unknown as OfficeLike;
+  return { host: new OfficeHost(book.run, office, supported), handlers };
 }
 
-describe("OfficeHost", () => {
+/** One selection change as the pane handles it: the selection, then the member behind it. */
+async function selectionChange(host: OfficeHost): Promise<Lookup> {
+  return findMember(host, await host.getSelection());
+}
+
+const nextTask = () => new Promise((resolve) => setTimeout(resolve, 5));
+
+describe("OfficeHost: selection to member", () => {
   it("turns the selected formula cell into its member, solved like the sheet function", async () => {
-    const { host } = officeMock([[""]]);
+    const { host } = officeFor(beamBook());
     const selection = await host.getSelection();
     expect(selection).toEqual({ sheet: "Beam", cell: "H3", formula: "=SPAN.EXTREMES(B3:C3,loadTable,B4:D4,B5,B6)", value: "shear", range: "H3:H4" });
     const lookup = await findMember(host, selection);
@@ -132,7 +73,7 @@ describe("OfficeHost", () => {
   });
 
   it("follows selection changes through the document handler and reads the host's theme", () => {
-    const { host, handlers } = officeMock([[""]]);
+    const { host, handlers } = officeFor(beamBook());
     let calls = 0;
     const stop = host.onSelectionChange(() => calls++);
     handlers.forEach((h) => h());
@@ -141,68 +82,193 @@ describe("OfficeHost", () => {
     expect(handlers).toHaveLength(0);
     expect(host.theme()).toBe("dark");
   });
+});
 
+describe("OfficeHost: at most 2 round trips per selection change", () => {
+  const sheetScoped = (book: FakeWorkbook) => book.sheet("Beam").names.set("SPANS", "B3:C3");
+  const spilled = (book: FakeWorkbook) => {
+    book.putFormula("Beam!J3", "=SEQUENCE(1,2)", 5.5).put("Beam!K3", [[5.5]]);
+    book.sheet("Beam").spills.set("J3", "J3:K3");
+  };
+  it.each([
+    ["ranges and a workbook name", "=SPAN.EXTREMES(B3:C3,loadTable,B4:D4,B5,B6)", undefined],
+    ["a sheet-scoped name", "=SPAN.MOMENT(spans,loadTable,2,B4:D4,B5,B6)", sheetScoped],
+    ["a spilled range", "=SPAN.MOMENT(J3#,'Load table'!A2:F4,2,$B$4:$D$4,Beam!B5)", spilled],
+    ["a quoted sheet, literals and an array constant", "=SPAN.DEFLECTION({5.5,5.5},'Load table'!A2:F4,3,B4:D4,18500,\"1.2D+1.6L\")", undefined],
+    ["a saved-workbook form", "=_xldudf_SPAN_MAXMOMENT(B3:C3,loadTable,B4:D4,B5,B6)", undefined],
+  ])("%s: the same member as reading each range live, in at most 2 syncs", async (_name, formula, setup) => {
+    const book = beamBook(formula);
+    setup?.(book);
+    const { host } = officeFor(book);
+    const batched = await selectionChange(host);
+    const batchedSyncs = book.syncs;
+    if (!batched.ok) throw new Error(batched.message);
+    expect(batchedSyncs).toBeLessThanOrEqual(2);
+    // The same lookup with the read-ahead gone (next task): every read is a live round trip.
+    book.syncs = 0;
+    const selection = await host.getSelection();
+    await nextTask();
+    const live = await findMember(host, selection);
+    expect(book.syncs).toBeGreaterThan(2);
+    expect(live).toEqual(batched);
+  });
+
+  it("a cell without a SPAN formula costs one sync", async () => {
+    const book = beamBook();
+    book.select("Beam!B5");
+    const { host } = officeFor(book);
+    const selection = await host.getSelection();
+    expect(selection.formula).toBeUndefined();
+    expect(book.syncs).toBe(1);
+  });
+
+  it("never answers from an old read: a write, a selection change or the next task read live cells", async () => {
+    const book = beamBook();
+    const { host, handlers } = officeFor(book);
+    host.onSelectionChange(() => undefined);
+    await host.getSelection();
+    await host.writeBlock("Beam!B3:C3", [[6, 6]]);
+    expect(await host.getValues("Beam!B3:C3")).toEqual([[6, 6]]);
+    await host.getSelection();
+    book.put("Beam!B3", [[7, 7]]);
+    handlers.forEach((h) => h());
+    expect(await host.getValues("Beam!B3:C3")).toEqual([[7, 7]]);
+    await host.getSelection();
+    book.put("Beam!B3", [[8, 8]]);
+    await nextTask();
+    expect(await host.getValues("Beam!B3:C3")).toEqual([[8, 8]]);
+  });
+
+  it("a formula naming a missing sheet gives the lookup's own message, not an exception", async () => {
+    const book = beamBook("=SPAN.MOMENT(Gone!B3:C3,loadTable,2)");
+    const { host } = officeFor(book);
+    const lookup = await selectionChange(host);
+    expect(lookup.ok).toBe(false);
+    if (lookup.ok) return;
+    expect(lookup.message).toMatch(/Gone/);
+  });
+});
+
+describe("OfficeHost: optional requirement sets", () => {
+  const without = (missing: string) => (name: string, version: string) => `${name} ${version}` !== missing;
+
+  it("without ExcelApi 1.12 a spilled argument is refused with a message naming the set", async () => {
+    const book = beamBook("=SPAN.MOMENT(J3#,loadTable,2)");
+    book.putFormula("Beam!J3", "=SEQUENCE(1,2)", 5.5);
+    book.sheet("Beam").spills.set("J3", "J3:K3");
+    const { host } = officeFor(book, without("ExcelApi 1.12"));
+    const lookup = await selectionChange(host);
+    expect(lookup).toMatchObject({ ok: false, reason: "invalid" });
+    if (!lookup.ok) expect(lookup.message).toMatch(/spilled range.*ExcelApi 1\.12/);
+    expect(book.syncs).toBeLessThanOrEqual(2);
+  });
+
+  it("without ExcelApi 1.7 charts are refused before anything reaches the host", async () => {
+    const book = beamBook();
+    const { host } = officeFor(book, without("ExcelApi 1.7"));
+    const request = { sheet: "Beam", title: "Moment", x: "N4:N107", series: [{ name: "M", y: "P4:P107" }], placeAt: "T3:AA17", xTitle: "x (m)", yTitle: "M (kN·m)" };
+    await expect(host.addChart(request)).rejects.toMatchObject({ code: "RequirementNotMet", message: expect.stringMatching(/inserting charts.*ExcelApi 1\.7/) });
+    expect(book.syncs).toBe(0);
+    expect(book.charts).toEqual([]);
+  });
+
+  it("without the baseline ExcelApi 1.4 the selection is refused with a message", async () => {
+    const { host } = officeFor(beamBook(), without("ExcelApi 1.4"));
+    await expect(host.getSelection()).rejects.toMatchObject({ code: "RequirementNotMet", message: expect.stringMatching(/ExcelApi 1\.4/) });
+  });
+});
+
+describe("OfficeHost: writes the host refuses are surfaced", () => {
+  // Codes from the error-handling page's tables; which one a real host raises for each
+  // situation is listed in DEVELOPERS.md under "Needs a real host to confirm".
+  it.each([
+    ["a protected sheet", "AccessDenied", "You cannot perform the requested operation.", /protected/],
+    ["part of an array", "InvalidOperation", "The operation attempted is invalid on the object.", /part of an array/],
+    ["merged cells", "MergedRangeConflict", "Cannot complete the operation.", /merged cells/],
+    ["a PivotTable", "PivotTableRangeConflict", "The attempted operation causes a conflict with a PivotTable range.", /PivotTable/],
+    ["cell edit mode", "InvalidOperationInCellEditMode", "The operation isn't available while Excel is in Edit cell mode.", /press Enter or Esc/],
+    ["an unknown code", "SomethingNew", "odd", /Excel could not do it/],
+  ])("%s (%s): writeBlock and clear reject with a SheetHostError the pane can show", async (_name, code, hostMessage, advice) => {
+    const book = beamBook().refuse("Beam!N3:R107", code, hostMessage);
+    const { host } = officeFor(book);
+    const write = host.writeBlock("Beam!N3:R4", [["x (m)", "V (kN)", "M (kN·m)", "slope (rad)", "deflection (m)"]]);
+    await expect(write).rejects.toBeInstanceOf(SheetHostError);
+    await expect(write).rejects.toMatchObject({ code, address: "Beam!N3:R4", message: expect.stringMatching(advice) });
+    await expect(write).rejects.toMatchObject({ message: expect.stringContaining(`Nothing written to Beam!N3:R4`) });
+    await expect(host.clear("Beam!N3:R107")).rejects.toMatchObject({ code, message: expect.stringMatching(advice) });
+    expect(book.sheet("Beam").cells.has("N3")).toBe(false);
+  });
+
+  it("a chart on a protected sheet rejects with the code and the chart it is about", async () => {
+    const book = beamBook().refuse("Beam!A1", "AccessDenied", "You cannot perform the requested operation.");
+    const { host } = officeFor(book);
+    const request = { sheet: "Beam", title: "Moment", x: "N4:N107", series: [{ name: "M", y: "P4:P107" }], placeAt: "T3:AA17", xTitle: "x (m)", yTitle: "M (kN·m)" };
+    await expect(host.addChart(request)).rejects.toMatchObject({ code: "AccessDenied", message: expect.stringMatching(/^The moment chart was not added on Beam: .*protected/) });
+    expect(book.charts).toEqual([]);
+  });
+});
+
+describe("OfficeHost: diagram table and charts", () => {
   async function plan(host: OfficeHost) {
-    const lookup = await findMember(host, await host.getSelection());
+    const lookup = await selectionChange(host);
     if (!lookup.ok) throw new Error(lookup.message);
     return planTable(lookup.member, "Beam!H3:L6", 104, 101, undefined);
   }
 
   it("writes the table into empty cells without asking", async () => {
-    const { host, calls, ranges } = officeMock(Array.from({ length: 105 }, () => ["", "", "", "", ""]));
-    const p = await plan(host);
+    const book = beamBook();
+    const { host } = officeFor(book);
     const asked: string[] = [];
-    const outcome = await writeTable(host, p, async (q) => (asked.push(q), true));
+    const outcome = await writeTable(host, await plan(host), async (q) => (asked.push(q), true));
     expect(outcome).toEqual({ written: true, address: "Beam!N3:R107" });
     expect(asked).toEqual([]);
-    expect(calls.cleared).toEqual([]);
-    expect(ranges["N3:R4"].formulas).toEqual([["x", "V", "M", "slope (rad)", "deflection"], ["=SPAN.DIAGRAM(B3:C3,loadTable,101,B4:D4,B5,B6)", null, null, null, null]]);
-  });
-
-  it("never writes over a cell holding anything unless the user agrees", async () => {
-    const target = Array.from({ length: 105 }, () => ["", "", "", "", ""]);
-    target[40][2] = "=A1*2";
-    const refused = officeMock(target);
-    const p = await plan(refused.host);
-    const questions: string[] = [];
-    expect(await writeTable(refused.host, p, async (q) => (questions.push(q), false))).toEqual({ written: false, reason: "nothing written: Beam!N3:R107 holds something" });
-    expect(questions).toEqual(["Beam!N3:R107 already holds something. Write the diagram table over it?"]);
-    // never assigned: the mock still reports the property as not loaded
-    expect(Array.isArray(refused.ranges["N3:R4"].formulas)).toBe(false);
-    const agreed = officeMock(target);
-    expect(await writeTable(agreed.host, await plan(agreed.host), async () => true)).toEqual({ written: true, address: "Beam!N3:R107" });
-    expect(agreed.calls.cleared).toEqual(["Beam!N3:R107 Contents"]);
+    // No units argument in the formula: the headers carry no units (the pane never guesses them).
+    expect(await host.getValues("Beam!N3:R3")).toEqual([["x", "V", "M", "slope (rad)", "deflection"]]);
+    expect(book.sheet("Beam").cells.get("N4")?.formula).toBe("=SPAN.DIAGRAM(B3:C3,loadTable,101,B4:D4,B5,B6)");
   });
 
   it.each([
-    ["a zero in the first cell", 0, 0, 0],
-    ["a formula in the last cell", 104, 4, "=B3"],
-    ["text in the middle", 52, 2, "note"],
-    ["a FALSE", 10, 1, false],
-    ["a single space", 70, 3, " "],
-  ] as const)("%s counts as occupied: the user is asked, and refusing writes and clears nothing", async (_name, row, col, content) => {
-    const target: unknown[][] = Array.from({ length: 105 }, () => ["", "", "", "", ""]);
-    target[row][col] = content;
-    const { host, calls, ranges } = officeMock(target as string[][]);
+    ["a zero in the first cell", "N3", 0],
+    ["a formula in the last cell", "R107", "=B3"],
+    ["text in the middle", "P55", "note"],
+    ["a FALSE", "O13", false],
+    ["a single space", "Q73", " "],
+  ] as const)("%s counts as occupied: the user is asked, and refusing writes and clears nothing", async (_name, at, content) => {
+    const book = beamBook();
+    if (typeof content === "string" && content.startsWith("=")) book.putFormula(`Beam!${at}`, content, 0);
+    else book.put(`Beam!${at}`, [[content]]);
+    const before = JSON.stringify([...book.sheet("Beam").cells]);
+    const { host } = officeFor(book);
     const questions: string[] = [];
     const outcome = await writeTable(host, await plan(host), async (q) => (questions.push(q), false));
-    expect(outcome.written).toBe(false);
-    expect(questions).toHaveLength(1);
-    expect(calls.cleared).toEqual([]);
-    expect(calls.written).toEqual([]);
-    expect(Array.isArray(ranges["N3:R4"].formulas)).toBe(false);
+    expect(outcome).toEqual({ written: false, reason: "nothing written: Beam!N3:R107 holds something" });
+    expect(questions).toEqual(["Beam!N3:R107 already holds something. Write the diagram table over it?"]);
+    expect(JSON.stringify([...book.sheet("Beam").cells])).toBe(before);
+  });
+
+  it("clears and writes when the user agrees", async () => {
+    const book = beamBook().put("Beam!P43", [["old"]]);
+    const { host } = officeFor(book);
+    expect(await writeTable(host, await plan(host), async () => true)).toEqual({ written: true, address: "Beam!N3:R107" });
+    expect(book.sheet("Beam").cells.has("P43")).toBe(false);
   });
 
   it("asks for scatter-line charts over the table's columns, beside it", async () => {
-    const { host, calls, mock } = officeMock([[""]]);
+    const book = beamBook();
+    const { host } = officeFor(book);
     const p = await plan(host);
     for (const request of chartRequests(p, true, { length: "m", force: "kN" })) await host.addChart(request);
-    expect(calls.charts).toEqual([
-      { type: "XYScatterLinesNoMarkers", source: "Beam!O4:O107", seriesBy: "Columns", x: "Beam!N4:N107", position: ["T3", "AA17"] },
-      { type: "XYScatterLinesNoMarkers", source: "Beam!P4:P107", seriesBy: "Columns", x: "Beam!N4:N107", position: ["T19", "AA33"] },
-      { type: "XYScatterLinesNoMarkers", source: "Beam!R4:R107", seriesBy: "Columns", x: "Beam!N4:N107", position: ["T35", "AA49"] },
+    expect(book.charts.map((c) => [c.type, c.source, c.seriesBy, c.series[0].x, c.position, c.title, c.yTitle])).toEqual([
+      ["XYScatterLinesNoMarkers", "Beam!O4:O107", "Columns", "Beam!N4:N107", ["T3", "AA17"], "Shear", "V (kN)"],
+      ["XYScatterLinesNoMarkers", "Beam!P4:P107", "Columns", "Beam!N4:N107", ["T19", "AA33"], "Moment", "M (kN·m)"],
+      ["XYScatterLinesNoMarkers", "Beam!R4:R107", "Columns", "Beam!N4:N107", ["T35", "AA49"], "Deflection", "deflection (m)"],
     ]);
-    expect(mock.context.workbook.beam.chart.axes.valueAxis.title.text).toBe("deflection (m)");
-    expect(mock.context.workbook.beam.chart.title.text).toBe("Deflection");
+  });
+});
+
+describe("OfficeHost: a write aimed at a sheet that is gone", () => {
+  it("the check before writing rejects with ItemNotFound and the range, as a SheetHostError", async () => {
+    const { host } = officeFor(beamBook());
+    await expect(host.isEmpty("Gone!N3:R107")).rejects.toMatchObject({ name: "SheetHostError", code: "ItemNotFound", address: "Gone!N3:R107", message: expect.stringMatching(/^Gone!N3:R107 could not be checked before writing: the sheet or range no longer exists/) });
   });
 });
