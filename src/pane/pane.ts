@@ -17,7 +17,7 @@ import { findMember, resolveSources, solveMember, type MemberSources, type Resol
 import { blockText } from "./addresses";
 import { cellMessage } from "./cellMessage";
 import { chartRequests, diagramRows, planTable, tableInPlace, writeTable } from "./writeBack";
-import { DEFAULT_POINTS } from "../sheet";
+import { DEFAULT_POINTS, describeError } from "../sheet";
 import { NO_UNITS, type Units } from "./units";
 
 export const CAUTION = "Results are an aid to a qualified engineer, who checks them; local codes and licensed practice govern.";
