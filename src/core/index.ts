@@ -20,7 +20,8 @@ export { expandCombinationSet, COMBINATION_SETS, STRENGTH_TEMPLATES, ALLOWABLE_T
 export type { SetOptions } from "./combinationSets";
 export { envelope, governingPeaks, ENVELOPE_QUANTITIES } from "./envelope";
 export type { PatternMode, EnvelopeOptions, Bound, EnvelopeStation, GoverningPeak } from "./envelope";
-export { standardArrangements, describeArrangement, loadsPerSpan } from "./pattern";
+export { standardArrangements, arrangementsOf, governingSpans, describeArrangement, loadsPerSpan } from "./pattern";
+export { LIMITS, checkCount } from "./limits";
 export { influenceLine, measure } from "./influence";
 export type { Effect } from "./influence";
 export { movingLoad, trainFrom } from "./movingLoad";
