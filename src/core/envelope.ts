@@ -68,9 +68,9 @@ export function envelope(member: Member, combinations: Combination[], xs: number
       }
       let high: Bound | null = null;
       let low: Bound | null = null;
-      const offer = (value: number, combination: string, arrangement: string | (() => string)): void => {
-        if (high === null || value > high.value) high = { value, x, combination, arrangement: typeof arrangement === "string" ? arrangement : arrangement() };
-        if (low === null || value < low.value) low = { value, x, combination, arrangement: typeof arrangement === "string" ? arrangement : arrangement() };
+      const offer = (value: number, combination: string, arrangement: string): void => {
+        if (high === null || value > high.value) high = { value, x, combination, arrangement };
+        if (low === null || value < low.value) low = { value, x, combination, arrangement };
       };
       study.combinations.forEach((combination, c) => {
         const scale = scales.get(q)![c];
@@ -82,15 +82,20 @@ export function envelope(member: Member, combinations: Combination[], xs: number
           return;
         }
         if (pattern === "full") {
-          for (const sense of [1, -1] as const) {
-            const spans = governingSpans(partValues, f, sense, noise.get(q));
-            let value = base;
-            for (const i of spans) value += f * partValues[i];
-            value = cleanZero(value, scale);
-            const bound = { value, x, combination: combination.name, arrangement: describeArrangement(spans) };
-            if (sense === 1 && (high === null || value > high.value)) high = bound;
-            if (sense === -1 && (low === null || value < low.value)) low = bound;
+          // The full pattern's rule (governingSpans), summed in place; the spans are listed only for a new bound.
+          const spanNoise = noise.get(q)!;
+          let up = base;
+          let down = base;
+          for (let i = 0; i < parts.length; i++) {
+            const v = f * partValues[i];
+            if (Math.abs(partValues[i]) <= spanNoise[i]) continue;
+            if (v > 0) up += v;
+            else down += v;
           }
+          up = cleanZero(up, scale);
+          down = cleanZero(down, scale);
+          if (high === null || up > high.value) high = { value: up, x, combination: combination.name, arrangement: describeArrangement(governingSpans(partValues, f, 1, spanNoise)) };
+          if (low === null || down < low.value) low = { value: down, x, combination: combination.name, arrangement: describeArrangement(governingSpans(partValues, f, -1, spanNoise)) };
           return;
         }
         for (let a = 0; a < arrangements.length; a++) offer(cleanZero(base + f * sums[a], scale), combination.name, names[a]);

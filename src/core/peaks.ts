@@ -6,7 +6,7 @@ import type { Member, Quantity, Solution } from "./model";
 import { describeArrangement, governingSpans, standardArrangements } from "./pattern";
 import { coefficients } from "./polynomial";
 import { rootsBetween } from "./roots";
-import { addScaled, FIELDS, loadPiece, mergeBreaks, peakOf, prepareStudy, resample, scaleOfSum, scratchPiece, type Study } from "./superposition";
+import { addScaled, FIELDS, loadPiece, mergeBreaks, peaksOf, prepareStudy, resample, scaleOfSum, scratchPiece, type Study } from "./superposition";
 import { cleanZero, ROUNDING_NOISE } from "./tolerance";
 
 export interface GoverningPeak {
@@ -94,6 +94,7 @@ export function governingPeaks(member: Member, combinations: Combination[], opti
   const all = [study.base, ...study.cases, ...study.parts.filter((p): p is Solution => p !== null)];
   const common = mergeBreaks(all);
   const arrangements = pattern === "standard" ? standardArrangements(member.spans.length) : [];
+  const names = arrangements.map(describeArrangement);
   return quantities.map((q) => {
     const breaks = pattern === "full" ? mergeBreaks(all, signChanges(study.parts, q)) : common;
     const sampled = sample(study, breaks);
@@ -133,26 +134,25 @@ export function governingPeaks(member: Member, combinations: Combination[], opti
       const fixed = fixedFields(sampled, combination.factors);
       const scale = scaleOfSum(study, combination, q);
       const f = combination.live;
-      const both = (fields: Float64Array, arrangement: (k: number, sense: 1 | -1) => string): void => {
-        for (const sense of [1, -1] as const) {
-          const peak = peakOf(breaks, fields, sampled.flexibility, q, sense, scale);
-          offer(cleanZero(peak.value, scale), peak.x, combination.name, arrangement(peak.interval, sense), sense);
-        }
+      const both = (fields: Float64Array, arrangement: string): void => {
+        const [high, low] = peaksOf(breaks, fields, sampled.flexibility, q, [1, -1], scale);
+        offer(cleanZero(high.value, scale), high.x, combination.name, arrangement, 1);
+        offer(cleanZero(low.value, scale), low.x, combination.name, arrangement, -1);
       };
       if (f === 0 || pattern === "none") {
-        both(fixed, () => "");
+        both(fixed, "");
       } else if (pattern === "standard") {
         arranged.forEach((live, a) => {
           const total = fixed.slice();
           addScaled(total, f, live);
-          both(total, () => describeArrangement(arrangements[a]));
+          both(total, names[a]);
         });
       } else if (up && down) {
         for (const sense of [1, -1] as const) {
           // f * part has the sense sought where the part has the sign sense * sign(f).
           const total = fixed.slice();
           addScaled(total, f, sense * f > 0 ? up : down);
-          const peak = peakOf(breaks, total, sampled.flexibility, q, sense, scale);
+          const [peak] = peaksOf(breaks, total, sampled.flexibility, q, [sense], scale);
           const spans = governingSpans(
             mids.map((v) => v[peak.interval]),
             f,
@@ -162,7 +162,7 @@ export function governingPeaks(member: Member, combinations: Combination[], opti
           offer(cleanZero(peak.value, scale), peak.x, combination.name, describeArrangement(spans), sense);
         }
       } else {
-        both(fixed, () => describeArrangement([]));
+        both(fixed, describeArrangement([]));
       }
     }
     return { quantity: q, max: max!, min: min! };

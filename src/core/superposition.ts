@@ -26,7 +26,7 @@ export interface StudyCombination {
 }
 
 export interface Study {
-  /** A solve of the member without loads: validation, stability, node grid. */
+  /** One of the solutions below (or the member solved without loads): its nodes and checks. */
   base: Solution;
   /** One solution per case label (the live case excluded when patterned), factor 1. */
   cases: Solution[];
@@ -59,7 +59,6 @@ function caseFactors(representatives: Load[], combination: Combination): Float64
 
 /** Solves the cases and live parts of a study of `combinations` on `member`. */
 export function prepareStudy(member: Member, combinations: Combination[], pattern: PatternMode, liveCase: string): Study {
-  const base = solve({ ...member, loads: [] });
   const labels: string[] = [];
   const groups = new Map<string, Load[]>();
   for (const load of member.loads) {
@@ -87,6 +86,8 @@ export function prepareStudy(member: Member, combinations: Combination[], patter
   const parts: (Solution | null)[] = liveUsed
     ? loadsPerSpan(member, groups.get(liveCase)!).map((loads) => (loads.length === 0 ? null : solve({ ...member, loads })))
     : [];
+  // Any solution carries the member's grid and checks; a member with nothing to solve gets an empty one.
+  const base = cases[0] ?? parts.find((p) => p !== null) ?? solve({ ...member, loads: [] });
   return {
     base,
     cases,
@@ -175,40 +176,66 @@ export interface PeakAt {
 }
 
 /**
- * The largest (sense +1) or smallest (sense -1) value of a quantity over pieces given on a
- * grid: both ends of every interval (so both sides of every jump) and every interior root of
- * the derivative, the leftmost x when reached more than once (to rounding of `scale`).
- * Intervals whose coefficient bound cannot beat the peak found so far skip the root search.
+ * The largest (sense +1) and/or smallest (sense -1) value of a quantity over pieces given on
+ * a grid: both ends of every interval (so both sides of every jump) and every interior root
+ * of the derivative, the leftmost x when reached more than once (to rounding of `scale`).
+ * The ends come first; an interval whose coefficient bound cannot beat the peak they give
+ * skips the root search, which is where the time goes.
  */
-export function peakOf(breaks: Float64Array, fields: Float64Array, flexibility: Float64Array, quantity: Quantity, sense: 1 | -1, scale: number): PeakAt {
+export function peaksOf(
+  breaks: Float64Array,
+  fields: Float64Array,
+  flexibility: Float64Array,
+  quantity: Quantity,
+  senses: readonly (1 | -1)[],
+  scale: number,
+): PeakAt[] {
   const m = breaks.length - 1;
   const piece = scratchPiece();
   const tol = 64 * RELATIVE_ZERO * scale;
-  let best = -Infinity;
-  let bestX = 0;
-  let bestK = 0;
-  const offer = (v: number, x: number, k: number): void => {
-    if (v > best + tol) {
-      best = v;
-      bestX = x;
-      bestK = k;
-    } else if (v > best) best = v;
-  };
+  const start = new Float64Array(m);
+  const end = new Float64Array(m);
+  let high = -Infinity;
+  let low = Infinity;
+  for (let k = 0; k < m; k++) {
+    loadPiece(piece, fields, k, breaks, flexibility);
+    const a = pieceValue(piece, quantity, 0);
+    const b = pieceValue(piece, quantity, piece.x1 - piece.x0);
+    start[k] = a;
+    end[k] = b;
+    high = Math.max(high, a, b);
+    low = Math.min(low, a, b);
+  }
+  const inner = new Map<number, { s: number; v: number }[]>();
   for (let k = 0; k < m; k++) {
     loadPiece(piece, fields, k, breaks, flexibility);
     const length = piece.x1 - piece.x0;
-    offer(sense * pieceValue(piece, quantity, 0), piece.x0, k);
     const c = coefficients(piece, quantity);
-    let bound = sense * c[0];
+    let spread = 0;
     let power = 1;
     for (let i = 1; i < c.length; i++) {
       power *= length;
-      bound += Math.abs(c[i]) * power;
+      spread += Math.abs(c[i]) * power;
     }
-    if (bound > best + tol) {
-      for (const s of rootsBetween(derivative(c), 0, length)) offer(sense * pieceValue(piece, quantity, s), piece.x0 + s, k);
+    const wanted = senses.some((sense) => (sense === 1 ? c[0] + spread > high + tol : c[0] - spread < low - tol));
+    if (!wanted) continue;
+    const found: { s: number; v: number }[] = [];
+    for (const s of rootsBetween(derivative(c), 0, length)) {
+      const v = pieceValue(piece, quantity, s);
+      found.push({ s, v });
+      high = Math.max(high, v);
+      low = Math.min(low, v);
     }
-    offer(sense * pieceValue(piece, quantity, length), piece.x1, k);
+    if (found.length > 0) inner.set(k, found);
   }
-  return { value: sense * best, x: bestX, interval: bestK };
+  return senses.map((sense) => {
+    const best = sense === 1 ? high : low;
+    const reaches = (v: number) => sense * (v - best) >= -tol;
+    for (let k = 0; k < m; k++) {
+      if (reaches(start[k])) return { value: best, x: breaks[k], interval: k };
+      for (const { s, v } of inner.get(k) ?? []) if (reaches(v)) return { value: best, x: breaks[k] + s, interval: k };
+      if (reaches(end[k])) return { value: best, x: breaks[k + 1], interval: k };
+    }
+    return { value: best, x: breaks[0], interval: 0 };
+  });
 }
