@@ -2,9 +2,8 @@ import type { Combination } from "./combination";
 import { invalid } from "./errors";
 import { valueAt } from "./evaluate";
 import type { Member, Quantity } from "./model";
-import { checkPatternSpans } from "./limits";
 import { describeArrangement, governingSpans, standardArrangements, type PatternMode } from "./pattern";
-import { prepareStudy, scaleOfSum } from "./superposition";
+import { checkStudy, prepareStudy, scaleOfSum } from "./superposition";
 import { cleanZero, ROUNDING_NOISE } from "./tolerance";
 
 export type { PatternMode } from "./pattern";
@@ -43,7 +42,7 @@ export function envelope(member: Member, combinations: Combination[], xs: number
   const pattern = options.pattern ?? "none";
   const liveCase = options.liveCase ?? "L";
   if (combinations.length === 0) throw invalid("envelope: give at least one combination");
-  checkPatternSpans(pattern, member.spans.length);
+  checkStudy("ENVELOPE", member, combinations, pattern, xs.length);
   const study = prepareStudy(member, combinations, pattern, liveCase);
   const quantities = ENVELOPE_QUANTITIES.filter((q) => q !== "deflection" || member.stiffness !== null);
   const arrangements = pattern === "standard" ? standardArrangements(member.spans.length) : [];

@@ -23,13 +23,78 @@ export const LIMITS = {
   psi0Pairs: 16,
   /** Spans of a member with a patterned live case (standard or full). */
   patternSpans: 12,
-  /**
-   * Work of one study, counted as solves of one span: INFLUENCE positions x spans; MOVING
-   * (spans + 1) x axles x (spans + axles); ENVELOPE and PEAKS combinations x arrangements x
-   * (spans + loads), with stations for ENVELOPE.
-   */
-  work: 20_000_000,
 } as const;
+
+/**
+ * The size of one call, in units of one span or load through one solve or one scan (see
+ * workOf); a call larger than its budget is refused before any work, since the size is
+ * known from the counts alone. Budgets are set from tests/bench/limits.bench.ts so that a
+ * call at its budget answers within 200 ms.
+ */
+export const WORK_LIMITS = {
+  ENVELOPE: 2_000_000,
+  PEAKS: 1_000_000,
+  INFLUENCE: 200_000,
+  MOVING: 200_000,
+} as const;
+
+export type StudyKind = keyof typeof WORK_LIMITS;
+
+export interface StudyCounts {
+  spans: number;
+  loads: number;
+  /** Distinct case labels of the loads. */
+  cases: number;
+  pattern: PatternMode;
+  combinations: number;
+  /** ENVELOPE x cells, INFLUENCE positions. */
+  positions: number;
+  axles: number;
+}
+
+/** How many arrangements of the live case a pattern costs per combination. */
+function arrangementCost(pattern: PatternMode, spans: number): number {
+  return pattern === "standard" ? spans + 2 : pattern === "full" ? 2 : 1;
+}
+
+/**
+ * The size of a call from its counts:
+ * - ENVELOPE: (cases + live spans) x (spans + loads) + positions x (cases + live spans + combinations x arrangements);
+ * - PEAKS: (cases + live spans + combinations x arrangements) x (spans + loads);
+ * - INFLUENCE: positions x (spans + 1), one solve per position;
+ * - MOVING: 10 x (spans + 2) x axles x (spans + axles), five solves per stretch between the
+ *   positions where an axle meets a node or the section, in both directions.
+ * "live spans" are the spans of a patterned live case (none without a pattern); arrangements
+ * are 1 without a pattern, 2 for full (the upper and lower sum), spans + 2 for standard.
+ */
+export function workOf(kind: StudyKind, c: StudyCounts): number {
+  const size = c.spans + c.loads;
+  const live = c.pattern === "none" ? 0 : c.spans;
+  const arranged = c.combinations * arrangementCost(c.pattern, c.spans);
+  switch (kind) {
+    case "ENVELOPE":
+      return (c.cases + live) * size + c.positions * (c.cases + live + arranged);
+    case "PEAKS":
+      return (c.cases + live + arranged) * size;
+    case "INFLUENCE":
+      return c.positions * (c.spans + 1);
+    case "MOVING":
+      return 10 * (c.spans + 2) * c.axles * (c.spans + c.axles);
+  }
+}
+
+/** Throws #VALUE! naming the counts when a call is larger than its budget. */
+export function checkWork(kind: StudyKind, c: StudyCounts): void {
+  const work = workOf(kind, c);
+  if (work <= WORK_LIMITS[kind]) return;
+  const counts: string[] = [`${c.spans} spans`];
+  if (kind === "ENVELOPE" || kind === "PEAKS") counts.push(`${c.loads} loads`, `${c.cases} case labels`, `${c.combinations} combinations`, `pattern ${c.pattern}`);
+  if (kind === "ENVELOPE" || kind === "INFLUENCE") counts.push(`${c.positions} positions`);
+  if (kind === "MOVING") counts.push(`${c.axles} axles`);
+  throw invalid(
+    `${kind}: this call is too large (${counts.join(", ")}: size ${work}, at most ${WORK_LIMITS[kind]}); use fewer of them (the README's limits section gives the size of each function)`,
+  );
+}
 
 /** Throws #VALUE! "argument: at most limit nouns, got count (advice)" when count exceeds limit. */
 export function checkCount(count: number, limit: number, argument: string, noun: string, advice = ""): void {

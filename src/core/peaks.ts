@@ -1,12 +1,11 @@
 import type { Combination } from "./combination";
 import type { Bound, EnvelopeOptions } from "./envelope";
 import { invalid } from "./errors";
-import { checkPatternSpans } from "./limits";
 import type { Member, Quantity, Solution } from "./model";
 import { describeArrangement, governingSpans, standardArrangements } from "./pattern";
 import { coefficients } from "./polynomial";
 import { rootsBetween } from "./roots";
-import { addScaled, FIELDS, loadPiece, mergeBreaks, peaksOf, prepareStudy, resample, scaleOfSum, scratchPiece, type Study } from "./superposition";
+import { addScaled, checkStudy, FIELDS, loadPiece, mergeBreaks, peaksOf, prepareStudy, resample, scaleOfSum, scratchPiece, type Study } from "./superposition";
 import { cleanZero, ROUNDING_NOISE } from "./tolerance";
 
 export interface GoverningPeak {
@@ -88,7 +87,7 @@ export function governingPeaks(member: Member, combinations: Combination[], opti
   const pattern = options.pattern ?? "none";
   const liveCase = options.liveCase ?? "L";
   if (combinations.length === 0) throw invalid("peaks: give at least one combination");
-  checkPatternSpans(pattern, member.spans.length);
+  checkStudy("PEAKS", member, combinations, pattern, 0);
   const quantities: Quantity[] = member.stiffness === null ? ["shear", "moment"] : ["shear", "moment", "slope", "deflection"];
   const study = prepareStudy(member, combinations, pattern, liveCase);
   const all = [study.base, ...study.cases, ...study.parts.filter((p): p is Solution => p !== null)];

@@ -1,5 +1,6 @@
 import { applyCombination, formatCombination, type Combination } from "./combination";
 import type { Load, Member, Piece, Quantity, Solution } from "./model";
+import { checkCount, checkPatternSpans, checkWork, LIMITS } from "./limits";
 import { loadsPerSpan, type PatternMode } from "./pattern";
 import { coefficients, derivative, pieceValue } from "./polynomial";
 import { rootsBetween } from "./roots";
@@ -55,6 +56,27 @@ function caseFactors(representatives: Load[], combination: Combination): Float64
     }
   }
   return factors;
+}
+
+/**
+ * The limits of a study, checked from its counts before any solve: pattern spans,
+ * combinations, case labels, positions (ENVELOPE) and the size of the whole call.
+ */
+export function checkStudy(kind: "ENVELOPE" | "PEAKS", member: Member, combinations: Combination[], pattern: PatternMode, positions: number): void {
+  checkPatternSpans(pattern, member.spans.length);
+  checkCount(combinations.length, LIMITS.combinations, "combinations", "combinations (named sets expanded)");
+  const cases = new Set(member.loads.map((l) => l.loadCase)).size;
+  checkCount(cases, LIMITS.cases, "loads", "case labels in one study");
+  if (kind === "ENVELOPE") checkCount(positions, LIMITS.positions, "x", "positions");
+  checkWork(kind, {
+    spans: member.spans.length,
+    loads: member.loads.length,
+    cases,
+    pattern,
+    combinations: combinations.length,
+    positions,
+    axles: 0,
+  });
 }
 
 /** Solves the cases and live parts of a study of `combinations` on `member`. */

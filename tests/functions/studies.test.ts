@@ -118,3 +118,37 @@ describe("SPAN.COMBOS", () => {
     expect(codeOf(() => combos("NBC-1", null, null as any)).message).toMatch(/unknown combination set "NBC-1"/);
   });
 });
+
+describe("limits of the studies (src/core/limits.ts): one past each is #VALUE! naming the argument and the limit", () => {
+  const text = [["udl 3 D; udl 4 L"]];
+  const column = (n: number, value: (i: number) => unknown) => Array.from({ length: n }, (_, i) => [value(i)]);
+  const combosOf = (n: number) => column(n, (i) => `${(1 + i / 1000).toFixed(3)}D + 1.6L`);
+  it.each([
+    ["ENVELOPE x cells", () => envelope(spans, text, column(10002, (i) => (i % 20) + 0.5), [["D"]], null as any, null as any, null, null, null), /^x: at most 10001 cells, got 10002/],
+    ["ENVELOPE combinations", () => envelope(spans, text, [[3]], combosOf(65), null as any, null as any, null, null, null), /^combinations: at most 64 combinations \(named sets expanded\), got 65/],
+    ["PEAKS combinations after sets are expanded", () => peaks(spans, text, [...combosOf(51), ["ASCE7-2.3.1"]], null as any, null as any, null, null), /^combinations: at most 64 combinations \(named sets expanded\), got 65/],
+    ["PEAKS pattern spans", () => peaks([Array(13).fill(3)], text, [["D+L"]], null as any, null as any, "standard L", null), /^pattern "standard": at most 12 spans, got 13/],
+    ["PEAKS case labels", () => peaks(spans, [[Array.from({ length: 33 }, (_, i) => `udl 1 C${i}`).join("; ")]], [["D"]], null as any, null as any, null, null), /^loads: at most 32 case labels in one study, got 33/],
+    ["INFLUENCE positions", () => influence(spans, "moment at 3", [Array.from({ length: 10002 }, (_, i) => i / 1000)], null as any, null as any), /^positions: at most 10001 positions, got 10002/],
+    ["MOVING axles", () => moving(spans, [Array(65).fill(10)], [Array(64).fill(1)], "moment at 3", null as any, null as any), /^axles: at most 64 axle loads, got 65/],
+    ["COMBOS variable cases", () => combos("EN1990-6.10", 0.7, [Array.from({ length: 17 }, (_, i) => `Q${i}`)]), /^cases: at most 16 variable cases, got 17/],
+    ["ENVELOPE with EN 1990 over the loads' labels", () => envelope(spans, [[Array.from({ length: 17 }, (_, i) => `udl 1 Q${i}`).join("; ") + "; udl 2 G"]], [[3]], [["EN1990-6.10"]], null as any, null as any, null, null, 0.7), /EN1990-6.10: at most 16 variable cases, got 17 \(the cases argument, or the case labels of the loads other than G\)/],
+    ["COMBOS psi0 pairs", () => combos("EN1990-6.10", Array.from({ length: 17 }, (_, i) => `Q${i} 0.5`).join(", "), [["Q0"]]), /^psi0: at most 16 pairs, got 17/],
+    ["INFLUENCE size", () => influence([Array(2000).fill(3)], "moment at 3", [Array.from({ length: 101 }, (_, i) => i)], null as any, null as any), /^INFLUENCE: this call is too large \(2000 spans, 101 positions: size 202101, at most 200000\)/],
+  ])("%s", (_name, call, message) => {
+    const e = codeOf(call);
+    expect(e.code).toBe("#VALUE!");
+    expect(e.message).toMatch(message);
+  });
+
+  it.each([
+    ["ENVELOPE at 64 combinations and 10001 x cells", () => envelope(spans, text, column(10001, (i) => (i * 20) / 10000), combosOf(64), null as any, null as any, null, null, null)],
+    ["PEAKS with pattern full at 12 spans", () => peaks([Array(12).fill(3)], text, [["D+L"]], null as any, null as any, "full L", null)],
+    ["MOVING at 64 axles", () => moving([[40]], [Array(64).fill(10)], [Array(63).fill(0.25)], "reaction 1", null as any, null as any)],
+    ["COMBOS at 16 variable cases and 16 psi0 pairs", () => combos("EN1990-6.10", Array.from({ length: 16 }, (_, i) => `Q${i} 0.5`).join(", "), [Array.from({ length: 16 }, (_, i) => `Q${i}`)])],
+  ])("%s answers", (_name, call) => {
+    const rows = call() as unknown[][];
+    expect(rows.length).toBeGreaterThan(0);
+    for (const row of rows) for (const v of row) expect(typeof v === "number" ? Number.isFinite(v) : typeof v === "string").toBe(true);
+  });
+});
