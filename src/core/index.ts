@@ -21,7 +21,7 @@ export type { SetOptions } from "./combinationSets";
 export { envelope, governingPeaks, ENVELOPE_QUANTITIES } from "./envelope";
 export type { PatternMode, EnvelopeOptions, Bound, EnvelopeStation, GoverningPeak } from "./envelope";
 export { standardArrangements, arrangementsOf, governingSpans, describeArrangement, loadsPerSpan } from "./pattern";
-export { LIMITS, WORK_LIMITS, checkCount, checkWork, workOf } from "./limits";
+export { LIMITS, WORK_LIMIT, WORK_WEIGHTS, checkCount, checkWork, workOf } from "./limits";
 export type { StudyCounts, StudyKind } from "./limits";
 export { influenceLine, checkInfluence, measure } from "./influence";
 export type { Effect } from "./influence";

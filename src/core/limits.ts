@@ -11,8 +11,8 @@ import type { PatternMode } from "./pattern";
 export const LIMITS = {
   /** ENVELOPE x cells and INFLUENCE positions. */
   positions: 10001,
-  /** MOVING axle loads. */
-  axles: 64,
+  /** MOVING axle loads (on one span the size limit allows 40; more spans allow fewer). */
+  axles: 40,
   /** ENVELOPE and PEAKS combinations, after named sets are expanded. */
   combinations: 64,
   /** Distinct case labels of the loads in ENVELOPE and PEAKS. */
@@ -26,19 +26,17 @@ export const LIMITS = {
 } as const;
 
 /**
- * The size of one call, in units of one span or load through one solve or one scan (see
- * workOf); a call larger than its budget is refused before any work, since the size is
- * known from the counts alone. Budgets are set from tests/bench/limits.bench.ts so that a
- * call at its budget answers within 200 ms.
+ * The size of one call in work units (about 0.4 microseconds each on the benchmark machine):
+ * a span or a load through one solve costs 10, through one peak search of PEAKS 6, and one x
+ * cell of ENVELOPE 1 per case, live span and arrangement it combines. A call larger than
+ * WORK_LIMIT is refused before any work, since its size is known from the counts alone. The
+ * weights and the limit come from tests/bench/limits.bench.ts, so that a call at the limit
+ * answers within about 200 ms.
  */
-export const WORK_LIMITS = {
-  ENVELOPE: 2_000_000,
-  PEAKS: 1_000_000,
-  INFLUENCE: 200_000,
-  MOVING: 200_000,
-} as const;
+export const WORK_LIMIT = 500_000;
+export const WORK_WEIGHTS = { solve: 10, scan: 6, station: 1 } as const;
 
-export type StudyKind = keyof typeof WORK_LIMITS;
+export type StudyKind = "ENVELOPE" | "PEAKS" | "INFLUENCE" | "MOVING";
 
 export interface StudyCounts {
   spans: number;
@@ -58,41 +56,41 @@ function arrangementCost(pattern: PatternMode, spans: number): number {
 }
 
 /**
- * The size of a call from its counts:
- * - ENVELOPE: (cases + live spans) x (spans + loads) + positions x (cases + live spans + combinations x arrangements);
- * - PEAKS: (cases + live spans + combinations x arrangements) x (spans + loads);
- * - INFLUENCE: positions x (spans + 1), one solve per position;
- * - MOVING: 10 x (spans + 2) x axles x (spans + axles), five solves per stretch between the
+ * The size of a call from its counts (s = spans + loads; live = spans when patterned, else 0;
+ * arrangements a = 1 without a pattern, 2 for full, spans + 2 for standard):
+ * - ENVELOPE: 10 (cases + live) s + positions (cases + live + combinations a);
+ * - PEAKS: 10 (cases + live) s + 6 combinations a s;
+ * - INFLUENCE: 10 positions (spans + 1), one solve per position;
+ * - MOVING: 100 (spans + 2) axles (spans + axles): five solves per stretch between the
  *   positions where an axle meets a node or the section, in both directions.
- * "live spans" are the spans of a patterned live case (none without a pattern); arrangements
- * are 1 without a pattern, 2 for full (the upper and lower sum), spans + 2 for standard.
  */
 export function workOf(kind: StudyKind, c: StudyCounts): number {
+  const { solve, scan, station } = WORK_WEIGHTS;
   const size = c.spans + c.loads;
   const live = c.pattern === "none" ? 0 : c.spans;
   const arranged = c.combinations * arrangementCost(c.pattern, c.spans);
   switch (kind) {
     case "ENVELOPE":
-      return (c.cases + live) * size + c.positions * (c.cases + live + arranged);
+      return solve * (c.cases + live) * size + station * c.positions * (c.cases + live + arranged);
     case "PEAKS":
-      return (c.cases + live + arranged) * size;
+      return solve * (c.cases + live) * size + scan * arranged * size;
     case "INFLUENCE":
-      return c.positions * (c.spans + 1);
+      return solve * c.positions * (c.spans + 1);
     case "MOVING":
-      return 10 * (c.spans + 2) * c.axles * (c.spans + c.axles);
+      return solve * 10 * (c.spans + 2) * c.axles * (c.spans + c.axles);
   }
 }
 
 /** Throws #VALUE! naming the counts when a call is larger than its budget. */
 export function checkWork(kind: StudyKind, c: StudyCounts): void {
   const work = workOf(kind, c);
-  if (work <= WORK_LIMITS[kind]) return;
+  if (work <= WORK_LIMIT) return;
   const counts: string[] = [`${c.spans} spans`];
   if (kind === "ENVELOPE" || kind === "PEAKS") counts.push(`${c.loads} loads`, `${c.cases} case labels`, `${c.combinations} combinations`, `pattern ${c.pattern}`);
   if (kind === "ENVELOPE" || kind === "INFLUENCE") counts.push(`${c.positions} positions`);
   if (kind === "MOVING") counts.push(`${c.axles} axles`);
   throw invalid(
-    `${kind}: this call is too large (${counts.join(", ")}: size ${work}, at most ${WORK_LIMITS[kind]}); use fewer of them (the README's limits section gives the size of each function)`,
+    `${kind}: this call is too large (${counts.join(", ")}: size ${work}, at most ${WORK_LIMIT}); use fewer of them (the README's limits section gives the size of each function)`,
   );
 }
 
