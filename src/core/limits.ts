@@ -11,8 +11,8 @@ import type { PatternMode } from "./pattern";
 export const LIMITS = {
   /** ENVELOPE x cells and INFLUENCE positions. */
   positions: 10001,
-  /** MOVING axle loads (on one span the size limit allows 40; more spans allow fewer). */
-  axles: 40,
+  /** MOVING axle loads (on one span the size limit allows 35, or 25 for absolute moment; more spans allow fewer). */
+  axles: 35,
   /** ENVELOPE and PEAKS combinations, after named sets are expanded. */
   combinations: 64,
   /** Distinct case labels of the loads in ENVELOPE and PEAKS. */
@@ -27,14 +27,14 @@ export const LIMITS = {
 
 /**
  * The size of one call in work units (about 0.4 microseconds each on the benchmark machine):
- * a span or a load through one solve costs 10, through one peak search of PEAKS 6, and one x
+ * a span or a load through one solve costs 10, through one peak search of PEAKS 12, and one x
  * cell of ENVELOPE 1 per case, live span and arrangement it combines. A call larger than
  * WORK_LIMIT is refused before any work, since its size is known from the counts alone. The
  * weights and the limit come from tests/bench/limits.bench.ts, so that a call at the limit
  * answers within about 200 ms.
  */
-export const WORK_LIMIT = 500_000;
-export const WORK_WEIGHTS = { solve: 10, scan: 6, station: 1 } as const;
+export const WORK_LIMIT = 400_000;
+export const WORK_WEIGHTS = { solve: 10, scan: 12, station: 1 } as const;
 
 export type StudyKind = "ENVELOPE" | "PEAKS" | "INFLUENCE" | "MOVING";
 
@@ -48,6 +48,8 @@ export interface StudyCounts {
   /** ENVELOPE x cells, INFLUENCE positions. */
   positions: number;
   axles: number;
+  /** MOVING "absolute moment": every node and axle is a probe, about twice the work. */
+  absoluteMoment?: boolean;
 }
 
 /** How many arrangements of the live case a pattern costs per combination. */
@@ -59,10 +61,11 @@ function arrangementCost(pattern: PatternMode, spans: number): number {
  * The size of a call from its counts (s = spans + loads; live = spans when patterned, else 0;
  * arrangements a = 1 without a pattern, 2 for full, spans + 2 for standard):
  * - ENVELOPE: 10 (cases + live) s + positions (cases + live + combinations a);
- * - PEAKS: 10 (cases + live) s + 6 combinations a s;
+ * - PEAKS: 10 (cases + live) s + 12 combinations a s;
  * - INFLUENCE: 10 positions (spans + 1), one solve per position;
- * - MOVING: 100 (spans + 2) axles (spans + axles): five solves per stretch between the
- *   positions where an axle meets a node or the section, in both directions.
+ * - MOVING: 100 (spans + 2) axles (spans + axles), twice that for absolute moment: five
+ *   solves per stretch between the positions where an axle meets a node or the section, in
+ *   both directions.
  */
 export function workOf(kind: StudyKind, c: StudyCounts): number {
   const { solve, scan, station } = WORK_WEIGHTS;
@@ -77,7 +80,7 @@ export function workOf(kind: StudyKind, c: StudyCounts): number {
     case "INFLUENCE":
       return solve * c.positions * (c.spans + 1);
     case "MOVING":
-      return solve * 10 * (c.spans + 2) * c.axles * (c.spans + c.axles);
+      return solve * 10 * (c.spans + 2) * c.axles * (c.spans + c.axles) * (c.absoluteMoment ? 2 : 1);
   }
 }
 
@@ -88,7 +91,7 @@ export function checkWork(kind: StudyKind, c: StudyCounts): void {
   const counts: string[] = [`${c.spans} spans`];
   if (kind === "ENVELOPE" || kind === "PEAKS") counts.push(`${c.loads} loads`, `${c.cases} case labels`, `${c.combinations} combinations`, `pattern ${c.pattern}`);
   if (kind === "ENVELOPE" || kind === "INFLUENCE") counts.push(`${c.positions} positions`);
-  if (kind === "MOVING") counts.push(`${c.axles} axles`);
+  if (kind === "MOVING") counts.push(`${c.axles} axles${c.absoluteMoment ? ", absolute moment" : ""}`);
   throw invalid(
     `${kind}: this call is too large (${counts.join(", ")}: size ${work}, at most ${WORK_LIMIT}); use fewer of them (the README's limits section gives the size of each function)`,
   );

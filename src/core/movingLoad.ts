@@ -78,7 +78,7 @@ function axlePositions(train: Train, leadX: number, direction: Direction): numbe
  */
 export function movingLoad(member: Member, train: Train, effect: MovingEffect): MovingResult {
   validateMember(member);
-  checkWork("MOVING", { spans: member.spans.length, loads: 0, cases: 0, pattern: "none", combinations: 0, positions: 0, axles: train.loads.length });
+  checkWork("MOVING", { spans: member.spans.length, loads: 0, cases: 0, pattern: "none", combinations: 0, positions: 0, axles: train.loads.length, absoluteMoment: effect.kind === "absolute-moment" });
   if (effect.kind !== "absolute-moment") checkEffect(member, effect);
   const nodeX = nodePositions(member.spans);
   const length = nodeX[nodeX.length - 1];
