@@ -28,7 +28,7 @@ export const LIMITS = {
 /**
  * The size of one call in work units (about 0.4 microseconds each on the benchmark machine):
  * a span or a load through one solve costs 10, through one peak search of PEAKS 12, and one x
- * cell of ENVELOPE 1 per case, live span and arrangement it combines. A call larger than
+ * cell of ENVELOPE 2 per case and live span it reads and 1 per arrangement it combines. A call larger than
  * WORK_LIMIT is refused before any work, since its size is known from the counts alone. The
  * weights and the limit come from tests/bench/limits.bench.ts, so that a call at the limit
  * answers within about 200 ms.
@@ -60,7 +60,7 @@ function arrangementCost(pattern: PatternMode, spans: number): number {
 /**
  * The size of a call from its counts (s = spans + loads; live = spans when patterned, else 0;
  * arrangements a = 1 without a pattern, 2 for full, spans + 2 for standard):
- * - ENVELOPE: 10 (cases + live) s + positions (cases + live + combinations a);
+ * - ENVELOPE: 10 (cases + live) s + positions (2 (cases + live) + combinations a);
  * - PEAKS: 10 (cases + live) s + 12 combinations a s;
  * - INFLUENCE: 10 positions (spans + 1), one solve per position;
  * - MOVING: 100 (spans + 2) axles (spans + axles), twice that for absolute moment: five
@@ -74,7 +74,7 @@ export function workOf(kind: StudyKind, c: StudyCounts): number {
   const arranged = c.combinations * arrangementCost(c.pattern, c.spans);
   switch (kind) {
     case "ENVELOPE":
-      return solve * (c.cases + live) * size + station * c.positions * (c.cases + live + arranged);
+      return solve * (c.cases + live) * size + station * c.positions * (2 * (c.cases + live) + arranged);
     case "PEAKS":
       return solve * (c.cases + live) * size + scan * arranged * size;
     case "INFLUENCE":
