@@ -1,4 +1,5 @@
 import { applyCombination, formatCombination, type Combination } from "./combination";
+import { isSpanError } from "./errors";
 import type { Load, Member, Piece, Quantity, Solution } from "./model";
 import { checkCount, checkPatternSpans, checkWork, LIMITS } from "./limits";
 import { loadsPerSpan, type PatternMode } from "./pattern";
@@ -98,12 +99,21 @@ export function prepareStudy(member: Member, combinations: Combination[], patter
   const liveIndex = patterned ? labels.indexOf(liveCase) : -1;
   const used = labels.map((_, k) => k !== liveIndex && perCombination.some((f) => f[k] !== 0));
   const caseIndex: number[] = [];
-  const cases: Solution[] = [];
-  labels.forEach((label, k) => {
-    if (!used[k]) return;
-    caseIndex.push(k);
-    cases.push(solve({ ...member, loads: groups.get(label)! }));
-  });
+  let cases: Solution[] = [];
+  let direct = false;
+  try {
+    labels.forEach((label, k) => {
+      if (!used[k]) return;
+      caseIndex.push(k);
+      cases.push(solve({ ...member, loads: groups.get(label)! }));
+    });
+  } catch (error) {
+    if (!isSpanError(error)) throw error;
+    // A case alone can be beyond trust (a tiny case beside large ones) where its combinations
+    // are not: then each combination's fixed loads are solved as they are, as one "case" each.
+    direct = true;
+    cases = combinations.map((c) => solve({ ...member, loads: applyCombination(liveIndex >= 0 ? member.loads.filter((l) => l.loadCase !== liveCase) : member.loads, c) }));
+  }
   const liveUsed = liveIndex >= 0 && perCombination.some((f) => f[liveIndex] !== 0);
   const parts: (Solution | null)[] = liveUsed
     ? loadsPerSpan(member, groups.get(liveCase)!).map((loads) => (loads.length === 0 ? null : solve({ ...member, loads })))
@@ -116,7 +126,7 @@ export function prepareStudy(member: Member, combinations: Combination[], patter
     parts,
     combinations: combinations.map((c, n) => ({
       name: nameOf(c),
-      factors: Float64Array.from(caseIndex, (k) => perCombination[n][k]),
+      factors: direct ? Float64Array.from(cases, (_, j) => (j === n ? 1 : 0)) : Float64Array.from(caseIndex, (k) => perCombination[n][k]),
       live: liveIndex >= 0 ? perCombination[n][liveIndex] : 0,
     })),
   };
