@@ -63,9 +63,10 @@ function arrangementCost(pattern: PatternMode, spans: number): number {
  * - ENVELOPE: 10 (cases + live) s + positions (2 (cases + live) + combinations a);
  * - PEAKS: 10 (cases + live) s + 12 combinations a s;
  * - INFLUENCE: 10 positions (spans + 1), one solve per position;
- * - MOVING: 100 (spans + 2) axles (spans + axles), twice that for absolute moment: five
- *   solves per stretch between the positions where an axle meets a node or the section, in
- *   both directions.
+ * - MOVING at a section, node or support: 40 (spans + 2) (spans + 1) + 2 (spans + 2) axles^2
+ *   (four solves per interval of the influence line, then sums of the axles' cubics);
+ * - MOVING absolute moment: 200 (spans + 2) axles (spans + axles): five solves per stretch
+ *   between the positions where an axle meets a node, in both directions.
  */
 export function workOf(kind: StudyKind, c: StudyCounts): number {
   const { solve, scan, station } = WORK_WEIGHTS;
@@ -80,7 +81,9 @@ export function workOf(kind: StudyKind, c: StudyCounts): number {
     case "INFLUENCE":
       return solve * c.positions * (c.spans + 1);
     case "MOVING":
-      return solve * 10 * (c.spans + 2) * c.axles * (c.spans + c.axles) * (c.absoluteMoment ? 2 : 1);
+      return c.absoluteMoment
+        ? solve * 20 * (c.spans + 2) * c.axles * (c.spans + c.axles)
+        : solve * 4 * (c.spans + 2) * (c.spans + 1) + 2 * (c.spans + 2) * c.axles * c.axles;
   }
 }
 

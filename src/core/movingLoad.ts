@@ -2,6 +2,7 @@ import { invalid } from "./errors";
 import { valueAt } from "./evaluate";
 import { chebyshevPoints, fitPolynomial } from "./fit";
 import { checkEffect, measure, type Effect } from "./influence";
+import { influencePieces, trainCubic } from "./movingInfluence";
 import { nodePositions } from "./layout";
 import type { Load, Member, Solution } from "./model";
 import { derivative, evaluatePolynomial } from "./polynomial";
@@ -70,10 +71,12 @@ function axlePositions(train: Train, leadX: number, direction: Direction): numbe
  * Peaks of an effect as a train of axle loads crosses the member in both directions: the
  * largest and smallest value, the position of the first axle and where the effect is
  * measured. Between the positions where an axle meets a node or the section, every effect
- * is a polynomial of degree at most four in the train position (the member's response to a
- * point load is cubic in its position between nodes); it is fitted exactly from five
- * solves and its turning points found from its derivative; the placements of the peaks are
- * solved again exactly.
+ * is a polynomial in the train position (the member's response to a point load is cubic in
+ * its position between nodes). An effect at a fixed place is the sum of the axles' exact
+ * influence cubics (four solves per interval of the influence line, whatever the train);
+ * absolute moment, measured under the moving axles, is a quartic fitted exactly from five
+ * solves per stretch. Turning points come from the derivative; the placements of the peaks
+ * are solved again exactly.
  * Limits at those positions are kept, so a peak reached just beyond a section counts.
  */
 export function movingLoad(member: Member, train: Train, effect: MovingEffect): MovingResult {
@@ -85,6 +88,8 @@ export function movingLoad(member: Member, train: Train, effect: MovingEffect): 
   const tol = POSITION_TOLERANCE * length;
   const breaks = [...nodeX];
   if (effect.kind !== "absolute-moment" && "x" in effect) breaks.push(effect.x);
+  const sortedBreaks = [...new Set(breaks)].sort((a, b) => a - b);
+  const line = effect.kind === "absolute-moment" ? null : influencePieces(member, effect, sortedBreaks, tol);
   let max: Placement | null = null;
   let min: Placement | null = null;
   // Where a peak came from the fit inside a segment: solved again there exactly at the end.
@@ -120,6 +125,23 @@ export function movingLoad(member: Member, train: Train, effect: MovingEffect): 
     const events = new Set<number>();
     for (const b of breaks) for (const o of train.offsets) events.add(b - sign * o);
     const sorted = [...events].sort((a, b) => a - b);
+    if (line) {
+      // An effect at a fixed place: the train's effect is the sum of the axles' influence
+      // cubics, itself a cubic in the train position between events.
+      const at = effect.kind === "absolute-moment" ? 0 : "x" in effect ? effect.x : nodeX[effect.node - 1];
+      for (let k = 0; k + 1 < sorted.length; k++) {
+        const lo = sorted[k];
+        const hi = sorted[k + 1];
+        if (hi - lo <= tol) continue;
+        const mid = (lo + hi) / 2;
+        const half = (hi - lo) / 2;
+        const cubic = trainCubic(line, train.loads, train.offsets.map((o) => mid + sign * o), half);
+        offer(evaluatePolynomial(cubic, -1), lo, direction, at);
+        offer(evaluatePolynomial(cubic, 1), hi, direction, at);
+        for (const u of rootsBetween(derivative(cubic), -1, 1)) offer(evaluatePolynomial(cubic, u), mid + half * u, direction, at, 0);
+      }
+      continue;
+    }
     // Every segment between events is fitted from five solves inside it; its ends are the
     // limits from inside, and the value exactly at an event is one of those limits (the
     // conventions take one side at a jump), so events need no solve of their own.
