@@ -156,3 +156,32 @@ describe("limits of the studies (src/core/limits.ts): one past each is #VALUE! n
     for (const row of rows) for (const v of row) expect(typeof v === "number" ? Number.isFinite(v) : typeof v === "string").toBe(true);
   });
 });
+
+describe("a case beyond trust on its own", () => {
+  it("does not refuse a study its combinations answer: each combination is then solved as it is (found by the fuzz suite)", () => {
+    // Magnitudes 1e-262 to 1e-60: the Lr and W cases alone fail the equilibrium check, D + ... does not.
+    const member = "7.49, 2.05";
+    const table = [
+      ["udl", -3.6670743402630796e-141, 0, 2.1908856361928982e-60, "", "Lr"],
+      ["moment", 4.1728784523260246e-175, 0, "", "", "W"],
+      ["Point", 6.430875507401136e-101, 0, "", "", "D"],
+      ["point", -2.4469682454937194e-262, 9.880045888774454e-291, "", "", "Lr"],
+      ["point", 1.6493903751455516e-259, 5.802231153759241e-265, "", "", "W"],
+    ];
+    const xs = [[9.54], [7.49], [1.1915341120339112e-206], [2.95399450143343e-50]];
+    const rows = envelope([[member]], table, xs, [["ASCE7-2.4.1"]], [["pin fixed free"]], null as any, null, "none", null);
+    const list = combos("ASCE7-2.4.1", null, null as any).map((r) => r[0]);
+    rows.forEach((row, i) => {
+      const each = list.map((c) => {
+        try {
+          return moment([[member]], table, [xs[i]], [["pin fixed free"]], null as any, c)[0][0] as number;
+        } catch {
+          return null;
+        }
+      }).filter((v): v is number => v !== null);
+      const scale = Math.max(...each.map(Math.abs));
+      expect(Math.abs((row[1] as number) - Math.max(...each))).toBeLessThanOrEqual(1e-9 * scale);
+      expect(Math.abs((row[3] as number) - Math.min(...each))).toBeLessThanOrEqual(1e-9 * scale);
+    });
+  });
+});
