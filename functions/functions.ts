@@ -188,7 +188,7 @@ export function diagram(spans: any[][], loads: any[][], points?: any, supports?:
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
  * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
  * @param [quantity] shear, moment (default) or deflection.
- * @param [pattern] Pattern live load: blank or none (loads as given), standard (the classical span arrangements), or full (every subset of spans, exact by superposition), optionally followed by the live case label (default L), e.g. "full L".
+ * @param [pattern] Pattern live load: blank or none (loads as given), standard (the classical span arrangements), or full (every subset of spans, none included, exact by superposition), optionally followed by the live case label (default L), e.g. "full L". At most 12 spans when patterned.
  * @param [psi0] EN 1990 combination factor psi0 for the accompanying variable cases: one number, or pairs such as "Q 0.7, S 0.5".
  * @returns One row per x: x, largest value, governing combination, smallest value, governing combination.
  */
@@ -206,7 +206,7 @@ export function envelope(spans: any[][], loads: any[][], x: any[][], combos: any
  * @param combos Combinations: a cell or range of texts such as 1.2D+1.6L+0.5S, and/or set names ASCE7-2.3.1, ASCE7-2.4.1, EN1990-6.10.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
  * @param [EI] Flexural stiffness: one value or one per span. Adds the slope and deflection rows.
- * @param [pattern] Pattern live load: blank or none, standard (classical arrangements) or full (every subset of spans, at most 12 spans), optionally followed by the live case label (default L).
+ * @param [pattern] Pattern live load: blank or none, standard (classical arrangements) or full (every subset of spans, none included, exact by superposition), optionally followed by the live case label (default L). At most 12 spans when patterned.
  * @param [psi0] EN 1990 combination factor psi0: one number, or pairs such as "Q 0.7, S 0.5".
  * @returns Rows shear, moment (slope, deflection with EI): label, max, x at max, governing combination, min, x at min, governing combination.
  */
@@ -236,7 +236,7 @@ export function influence(spans: any[][], effect: any, positions: any[][], suppo
  * @helpurl https://localhost:3000/help/moving.html
  * @remarks Moving loads: a train of axle loads crossing the member in both directions; the largest and smallest value of an effect and where the train stands. Between positions where an axle meets a node or the section the effect is a polynomial in the train position, so peaks are found exactly, not by stepping. Signs: loads down +, sagging M +, reactions up +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit): a row or column, or one text cell such as "12".
- * @param axles Axle loads, first axle first (force, down +): a row or column, or one text cell such as "35 145 145".
+ * @param axles Axle loads, first axle first (force, down +): a row or column, or one text cell such as "35 145 145". At most 35 axles.
  * @param spacings Distances between consecutive axles (length): one fewer than the axles; blank for one axle.
  * @param effect What is measured: "absolute moment" (largest moment anywhere), "moment at 6", "shear at 4.5", "reaction 2", "moment reaction 1" or "deflection at 3" (needs EI).
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.

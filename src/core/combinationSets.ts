@@ -1,5 +1,6 @@
 import { invalid } from "./errors";
 import { parseCombination, type Combination } from "./combination";
+import { checkCount, LIMITS } from "./limits";
 
 /**
  * Named sets of load combinations, each expanded to its individual combinations (an
@@ -70,6 +71,11 @@ function round(value: number): number {
  */
 function eurocodeTemplates(options: SetOptions): string[] {
   const variables = options.variableCases ?? [];
+  // 2 n + 1 combinations of n + 1 terms each: the case list is bounded, the text grows as n^2.
+  checkCount(variables.length, LIMITS.variableCases, "EN1990-6.10", "variable cases", "the cases argument, or the case labels of the loads other than G");
+  if (typeof options.psi0 === "object" && options.psi0 !== null) {
+    checkCount(Object.keys(options.psi0).length, LIMITS.psi0Pairs, "psi0", "pairs");
+  }
   const out: string[] = ["1.35G"];
   for (const gamma of [1.35, 1.0]) {
     for (const lead of variables) {

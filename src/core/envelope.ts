@@ -1,13 +1,12 @@
-import { applyCombination, formatCombination, type Combination } from "./combination";
+import type { Combination } from "./combination";
 import { invalid } from "./errors";
 import { valueAt } from "./evaluate";
-import { extremes } from "./extremes";
-import type { Load, Member, Quantity, Solution } from "./model";
-import { describeArrangement, loadsPerSpan, standardArrangements } from "./pattern";
-import { solve } from "./solve";
+import type { Member, Quantity } from "./model";
+import { describeArrangement, governingSpans, standardArrangements, type PatternMode } from "./pattern";
+import { checkStudy, prepareStudy, scaleOfSum } from "./superposition";
+import { cleanZero, ROUNDING_NOISE } from "./tolerance";
 
-/** How the live case is arranged: as given, the classical arrangements, or every subset of spans. */
-export type PatternMode = "none" | "standard" | "full";
+export type { PatternMode } from "./pattern";
 
 export interface EnvelopeOptions {
   pattern?: PatternMode;
@@ -31,169 +30,81 @@ export interface EnvelopeStation {
 
 export const ENVELOPE_QUANTITIES: Quantity[] = ["shear", "moment", "deflection"];
 
-function emptyMember(member: Member, loads: Load[]): Member {
-  return { ...member, loads };
-}
-
-function nameOf(combination: Combination): string {
-  return combination.terms.length === 0 ? "unfactored" : formatCombination(combination);
-}
-
-interface Scenario {
-  combination: string;
-  fixed: Solution;
-  live: { factor: number; parts: Solution[] } | null;
-}
-
-function scenarios(member: Member, combinations: Combination[], options: EnvelopeOptions): Scenario[] {
-  const pattern = options.pattern ?? "none";
-  const liveCase = options.liveCase ?? "L";
-  if (combinations.length === 0) throw invalid("envelope: give at least one combination");
-  const liveParts =
-    pattern === "none"
-      ? null
-      : loadsPerSpan(
-          member,
-          member.loads.filter((l) => l.loadCase === liveCase),
-        ).map((loads) => solve(emptyMember(member, loads)));
-  return combinations.map((combination) => {
-    const factored = applyCombination(member.loads, combination);
-    const term = combination.terms.find((t) => t.loadCase === liveCase);
-    const liveFactor = combination.terms.length === 0 ? 1 : (term?.factor ?? 0);
-    if (!liveParts || liveFactor === 0) {
-      return { combination: nameOf(combination), fixed: solve(emptyMember(member, factored)), live: null };
-    }
-    const rest = factored.filter((l) => l.loadCase !== liveCase);
-    return { combination: nameOf(combination), fixed: solve(emptyMember(member, rest)), live: { factor: liveFactor, parts: liveParts } };
-  });
-}
-
-function arrangementsFor(pattern: PatternMode, spanCount: number): number[][] {
-  return pattern === "standard" ? standardArrangements(spanCount) : [];
-}
-
 /**
  * The envelope of shear, moment and deflection (deflection when EI is given) over a list of
  * combinations, at each x: largest and smallest value and the combination (and, with a
- * patterned live case, the loaded spans) that produces it. Pattern "full" searches every
- * subset of spans exactly: by superposition the worst subset at x loads exactly the spans
- * whose live load acts in the sense sought. Pattern "standard" uses the classical
- * arrangements only.
+ * patterned live case, the loaded spans) that produces it. Every case and every span's live
+ * load is solved once and combined by superposition. Pattern "full" searches every subset of
+ * spans, none included, exactly: the worst subset at x loads exactly the spans whose live load
+ * acts in the sense sought there. Pattern "standard" uses the classical arrangements only.
  */
 export function envelope(member: Member, combinations: Combination[], xs: number[], options: EnvelopeOptions = {}): EnvelopeStation[] {
   const pattern = options.pattern ?? "none";
-  const all = scenarios(member, combinations, options);
+  const liveCase = options.liveCase ?? "L";
+  if (combinations.length === 0) throw invalid("envelope: give at least one combination");
+  checkStudy("ENVELOPE", member, combinations, pattern, xs.length);
+  const study = prepareStudy(member, combinations, pattern, liveCase);
   const quantities = ENVELOPE_QUANTITIES.filter((q) => q !== "deflection" || member.stiffness !== null);
-  const arrangements = arrangementsFor(pattern, member.spans.length);
-  const liveParts = all.find((scenario) => scenario.live)?.live?.parts ?? [];
-  const n = liveParts.length;
-  const parts = new Float64Array(n);
+  const arrangements = pattern === "standard" ? standardArrangements(member.spans.length) : [];
+  const names = arrangements.map(describeArrangement);
+  const { cases, parts } = study;
+  const caseValues = new Float64Array(cases.length);
+  const partValues = new Float64Array(parts.length);
   const sums = new Float64Array(arrangements.length);
+  const scales = new Map(quantities.map((q) => [q, study.combinations.map((c) => scaleOfSum(study, c, q))]));
+  const noise = new Map(quantities.map((q) => [q, parts.map((p) => (p ? ROUNDING_NOISE * p.scales[q] : Infinity))]));
   return xs.map((x) => {
     const max: Record<Quantity, Bound | null> = { shear: null, moment: null, slope: null, deflection: null };
     const min: Record<Quantity, Bound | null> = { shear: null, moment: null, slope: null, deflection: null };
     for (const q of quantities) {
-      // The live parts do not depend on the combination: evaluate them once per station.
-      for (let i = 0; i < n; i++) parts[i] = valueAt(liveParts[i], q, x);
+      valueAt(study.base, q, x);
+      for (let k = 0; k < cases.length; k++) caseValues[k] = valueAt(cases[k], q, x);
+      for (let i = 0; i < parts.length; i++) partValues[i] = parts[i] ? valueAt(parts[i]!, q, x) : 0;
       for (let a = 0; a < arrangements.length; a++) {
         let sum = 0;
-        for (const i of arrangements[a]) sum += parts[i];
+        for (const i of arrangements[a]) sum += partValues[i];
         sums[a] = sum;
       }
-      let high = -Infinity;
-      let low = Infinity;
-      let highAt: Bound | null = null;
-      let lowAt: Bound | null = null;
-      for (const scenario of all) {
-        const base = valueAt(scenario.fixed, q, x);
-        const live = scenario.live;
-        if (!live) {
-          if (base > high) [high, highAt] = [base, { value: base, x, combination: scenario.combination, arrangement: "" }];
-          if (base < low) [low, lowAt] = [base, { value: base, x, combination: scenario.combination, arrangement: "" }];
-          continue;
+      let high: Bound | null = null;
+      let low: Bound | null = null;
+      const offer = (value: number, combination: string, arrangement: string): void => {
+        if (high === null || value > high.value) high = { value, x, combination, arrangement };
+        if (low === null || value < low.value) low = { value, x, combination, arrangement };
+      };
+      study.combinations.forEach((combination, c) => {
+        const scale = scales.get(q)![c];
+        let base = 0;
+        for (let k = 0; k < cases.length; k++) base += combination.factors[k] * caseValues[k];
+        const f = combination.live;
+        if (f === 0 || pattern === "none") {
+          offer(cleanZero(base, scale), combination.name, "");
+          return;
         }
-        const f = live.factor;
         if (pattern === "full") {
+          // The full pattern's rule (governingSpans), summed in place; the spans are listed only for a new bound.
+          const spanNoise = noise.get(q)!;
           let up = base;
           let down = base;
-          for (let i = 0; i < n; i++) {
-            const v = f * parts[i];
+          for (let i = 0; i < parts.length; i++) {
+            const v = f * partValues[i];
+            if (Math.abs(partValues[i]) <= spanNoise[i]) continue;
             if (v > 0) up += v;
-            else if (v < 0) down += v;
+            else down += v;
           }
-          if (up > high) [high, highAt] = [up, { value: up, x, combination: scenario.combination, arrangement: spansWhere(parts, f, 1) }];
-          if (down < low) [low, lowAt] = [down, { value: down, x, combination: scenario.combination, arrangement: spansWhere(parts, f, -1) }];
-          continue;
+          up = cleanZero(up, scale);
+          down = cleanZero(down, scale);
+          if (high === null || up > high.value) high = { value: up, x, combination: combination.name, arrangement: describeArrangement(governingSpans(partValues, f, 1, spanNoise)) };
+          if (low === null || down < low.value) low = { value: down, x, combination: combination.name, arrangement: describeArrangement(governingSpans(partValues, f, -1, spanNoise)) };
+          return;
         }
-        for (let a = 0; a < arrangements.length; a++) {
-          const value = base + f * sums[a];
-          if (value > high) [high, highAt] = [value, { value, x, combination: scenario.combination, arrangement: describeArrangement(arrangements[a]) }];
-          if (value < low) [low, lowAt] = [value, { value, x, combination: scenario.combination, arrangement: describeArrangement(arrangements[a]) }];
-        }
-      }
-      max[q] = highAt;
-      min[q] = lowAt;
+        for (let a = 0; a < arrangements.length; a++) offer(cleanZero(base + f * sums[a], scale), combination.name, names[a]);
+      });
+      max[q] = high;
+      min[q] = low;
     }
     return { x, max, min };
   });
 }
 
-/** The spans whose factored live part acts in the sense sought (sign +1 up, -1 down), described. */
-function spansWhere(parts: Float64Array, factor: number, sign: number): string {
-  const spans: number[] = [];
-  for (let i = 0; i < parts.length; i++) if (sign * factor * parts[i] > 0) spans.push(i);
-  return describeArrangement(spans);
-}
-
-export interface GoverningPeak {
-  quantity: Quantity;
-  max: Bound;
-  min: Bound;
-}
-
-/**
- * The governing peaks over a list of combinations: for shear, moment and (with EI) slope and
- * deflection, the largest and smallest value anywhere on the member, its x and the
- * combination (and arrangement) that produces it. Peaks come from each combination's exact
- * solution; with a patterned live case, every classical arrangement ("standard") or, for
- * at most 12 spans, every subset of spans ("full") is solved.
- */
-export function governingPeaks(member: Member, combinations: Combination[], options: EnvelopeOptions = {}): GoverningPeak[] {
-  const pattern = options.pattern ?? "none";
-  const liveCase = options.liveCase ?? "L";
-  if (combinations.length === 0) throw invalid("peaks: give at least one combination");
-  const n = member.spans.length;
-  if (pattern === "full" && n > 12) throw invalid(`pattern "full" searches every subset of spans: at most 12 spans, got ${n}`);
-  const quantities: Quantity[] = member.stiffness === null ? ["shear", "moment"] : ["shear", "moment", "slope", "deflection"];
-  const best = new Map<Quantity, { max: Bound | null; min: Bound | null }>();
-  for (const q of quantities) best.set(q, { max: null, min: null });
-  const consider = (solution: Solution, combination: string, arrangement: string): void => {
-    for (const q of quantities) {
-      const e = extremes(solution, q);
-      const slot = best.get(q)!;
-      if (slot.max === null || e.max > slot.max.value) slot.max = { value: e.max, x: e.xMax, combination, arrangement };
-      if (slot.min === null || e.min < slot.min.value) slot.min = { value: e.min, x: e.xMin, combination, arrangement };
-    }
-  };
-  const perSpan = pattern === "none" ? null : loadsPerSpan(member, member.loads.filter((l) => l.loadCase === liveCase));
-  const subsets: number[][] =
-    pattern === "full"
-      ? Array.from({ length: (1 << n) - 1 }, (_, k) => Array.from({ length: n }, (_, i) => i).filter((i) => ((k + 1) >> i) & 1))
-      : standardArrangements(n);
-  for (const combination of combinations) {
-    const factored = applyCombination(member.loads, combination);
-    const name = nameOf(combination);
-    const patterned = perSpan !== null && (combination.terms.length === 0 || combination.terms.some((t) => t.loadCase === liveCase));
-    if (!patterned) {
-      consider(solve(emptyMember(member, factored)), name, "");
-      continue;
-    }
-    const rest = factored.filter((l) => l.loadCase !== liveCase);
-    const factor = combination.terms.length === 0 ? 1 : combination.terms.find((t) => t.loadCase === liveCase)!.factor;
-    for (const spans of subsets) {
-      const live = spans.flatMap((i) => perSpan[i]).map((l) => ({ ...l, magnitude: l.magnitude * factor, magnitudeEnd: l.magnitudeEnd * factor }));
-      consider(solve(emptyMember(member, [...rest, ...live])), name, describeArrangement(spans));
-    }
-  }
-  return quantities.map((q) => ({ quantity: q, max: best.get(q)!.max!, min: best.get(q)!.min! }));
-}
+export { governingPeaks } from "./peaks";
+export type { GoverningPeak } from "./peaks";

@@ -21,8 +21,10 @@ export { expandCombinationSet, COMBINATION_SETS, STRENGTH_TEMPLATES, ALLOWABLE_T
 export type { SetOptions } from "./combinationSets";
 export { envelope, governingPeaks, ENVELOPE_QUANTITIES } from "./envelope";
 export type { PatternMode, EnvelopeOptions, Bound, EnvelopeStation, GoverningPeak } from "./envelope";
-export { standardArrangements, describeArrangement, loadsPerSpan } from "./pattern";
-export { influenceLine, measure } from "./influence";
+export { standardArrangements, arrangementsOf, governingSpans, describeArrangement, loadsPerSpan } from "./pattern";
+export { LIMITS, WORK_LIMIT, WORK_WEIGHTS, checkCount, checkWork, workOf } from "./limits";
+export type { StudyCounts, StudyKind } from "./limits";
+export { influenceLine, checkInfluence, measure } from "./influence";
 export type { Effect } from "./influence";
 export { movingLoad, trainFrom } from "./movingLoad";
 export type { Train, MovingEffect, Placement, MovingResult, Direction } from "./movingLoad";

@@ -3,6 +3,13 @@ import { valueAt } from "./evaluate";
 import type { Load, Member, Solution } from "./model";
 import { solve } from "./solve";
 import { checkedPosition, nodePositions } from "./positions";
+import { checkCount, checkWork, LIMITS } from "./limits";
+
+/** The limits of an influence line of `count` positions (the sheet checks the whole range before asking one by one). */
+export function checkInfluence(member: Member, count: number): void {
+  checkCount(count, LIMITS.positions, "positions", "positions");
+  checkWork("INFLUENCE", { spans: member.spans.length, loads: 0, cases: 0, pattern: "none", combinations: 0, positions: count, axles: 0 });
+}
 
 /** What an influence line or a moving load measures. */
 export type Effect =
@@ -49,6 +56,7 @@ export function measure(solution: Solution, effect: Effect): number {
  */
 export function influenceLine(member: Member, effect: Effect, positions: number[]): number[] {
   const checked = checkEffect(member, effect);
+  checkInfluence(member, positions.length);
   const nodeX = nodePositions(member.spans);
   return positions.map((p) => measure(solve({ ...member, loads: [unitLoad(checkedPosition(nodeX, p, "unit load position", " "))] }), checked));
 }

@@ -4,7 +4,10 @@
  * moving loads and the expansion of named combination sets.
  */
 import {
+  checkCount,
+  checkInfluence,
   envelope,
+  LIMITS,
   expandCombinationSet,
   governingPeaks,
   influenceLine,
@@ -28,6 +31,21 @@ import { finite, mapPositions } from "./shape";
 
 function memberOf(spans: unknown, loads: unknown, supports: unknown, EI: unknown): Member {
   return readMember({ spans, loads, supports: supports ?? null, EI: EI ?? null, combo: null });
+}
+
+/** Cells of a range argument (a single value is one cell), counted before any is read. */
+function cellCount(arg: unknown): number {
+  const rows = rowsOf(arg);
+  let count = 0;
+  for (const row of rows) count += Array.isArray(row) ? row.length : 1;
+  return count;
+}
+
+/** Each non-blank combinations cell gives at least one combination: bounded before sets are expanded. */
+function checkCombinationCells(combos: unknown): void {
+  let count = 0;
+  for (const row of rowsOf(combos)) for (const cell of Array.isArray(row) ? row : [row]) if (!isBlank(cell)) count++;
+  checkCount(count, LIMITS.combinations, "combinations", "combinations (named sets expanded)");
 }
 
 function caseLabels(loads: unknown): string[] {
@@ -65,6 +83,7 @@ function governedBy(bound: Bound): string {
 }
 
 function positionsOf(x: unknown): { cells: unknown[]; values: (number | null)[] } {
+  checkCount(cellCount(x), LIMITS.positions, "x", "cells");
   const rows = rowsOf(x);
   const cells = rows.flatMap((row) => (Array.isArray(row) ? row : [row]));
   if (cells.length === 0) throw invalid("x: give a cell or a range of positions");
@@ -90,6 +109,7 @@ export function sheetEnvelope(
     const member = memberOf(spans, loads, supports, EI);
     const q = readQuantity(quantity ?? null);
     if (q === "deflection" && member.stiffness === null) throw invalid("quantity deflection needs EI: give EI for the member or each span");
+    checkCombinationCells(combos);
     const combinations = readCombinations(combos, psi0 ?? null, caseLabels(loads));
     const options = readPattern(pattern ?? null);
     const { values } = positionsOf(x);
@@ -118,6 +138,7 @@ export function sheetPeaks(
 ): (number | string)[][] {
   return guarded(() => {
     const member = memberOf(spans, loads, supports, EI);
+    checkCombinationCells(combos);
     const combinations = readCombinations(combos, psi0 ?? null, caseLabels(loads));
     const peaks = governingPeaks(member, combinations, readPattern(pattern ?? null));
     return peaks.map((p) => [
@@ -138,21 +159,23 @@ export function sheetInfluence(spans: unknown, effect: unknown, positions: unkno
     const member = memberOf(spans, null, supports, EI);
     const e = readEffect(effect, false);
     if (e.kind === "absolute-moment") throw invalid("effect: absolute moment applies to moving loads only");
+    checkInfluence(member, cellCount(positions));
     return mapPositions(positions, (p) => influenceLine(member, e, [p])[0], "positions");
   });
 }
 
-function readNumberList(arg: unknown, name: string): number[] {
+function readNumberList(arg: unknown, name: string, limit: number, noun: string): number[] {
   const entries = listEntries(arg, name);
   let count = entries.length;
   while (count > 0 && isBlank(entries[count - 1])) count--;
+  checkCount(count, limit, name, noun);
   return entries.slice(0, count).map((cell, i) => readNumber(cell, () => `${name} entry ${i + 1}`));
 }
 
 /** The train of SPAN.MOVING from its axles and spacings arguments (the pane places it with this too). */
 export function readTrain(axles: unknown, spacings: unknown): Train {
-  const loads = readNumberList(axles, "axles");
-  const gaps = isAllBlank(spacings ?? null) ? [] : readNumberList(spacings, "spacings");
+  const loads = readNumberList(axles, "axles", LIMITS.axles, "axle loads");
+  const gaps = isAllBlank(spacings ?? null) ? [] : readNumberList(spacings, "spacings", LIMITS.axles, "spacings");
   return trainFrom(loads, gaps);
 }
 
@@ -180,7 +203,9 @@ export function sheetCombinationSet(name: unknown, psi0: unknown, cases: unknown
   return guarded(() => {
     const cell = singleCell(name);
     if (typeof cell !== "string" || cell.trim() === "") throw invalid(`set: ${show(cell)} is not a set name; use ASCE7-2.3.1, ASCE7-2.4.1 or EN1990-6.10`);
-    const variableCases = isAllBlank(cases ?? null) ? ["Q"] : listEntries(cases, "cases").filter((c) => !isBlank(c)).map(String);
+    const entries = isAllBlank(cases ?? null) ? ["Q"] : listEntries(cases, "cases").filter((c) => !isBlank(c));
+    checkCount(entries.length, LIMITS.variableCases, "cases", "variable cases");
+    const variableCases = entries.map(String);
     return expandCombinationSet(cell, { psi0: readPsi0(psi0 ?? null), variableCases }).map((c) => [c.text]);
   });
 }

@@ -1,6 +1,6 @@
-import { movingLoad, trainFrom, influenceLine } from "../../src/core";
+import { influenceLine, measure, movingLoad, solve, trainFrom } from "../../src/core";
 import { relDiff } from "../../src/core/tolerance";
-import { beam } from "./kit/members";
+import { beam, point } from "./kit/members";
 
 describe("moving loads", () => {
   const L = 12;
@@ -48,6 +48,37 @@ describe("moving loads", () => {
     }
     expect(r.min.value).toBeLessThanOrEqual(scanMin + 1e-9 * Math.abs(scanMin));
     expect(relDiff(r.min.value, scanMin)).toBeLessThan(1e-3);
+  });
+
+  it.each([
+    ["shear at 5 (a jump under an axle)", { kind: "shear", x: 5 }],
+    ["reaction at the spring", { kind: "reaction", node: 3 }],
+    ["moment at the fixed end", { kind: "moment-reaction", node: 1 }],
+    ["deflection at 12", { kind: "deflection", x: 12 }],
+  ] as const)("%s: the peaks bound and approach an independent dense scan of exact solves, both directions", (_name, effect) => {
+    const member = beam([6, 4, 8], ["fixed", "hinge", 900, "pin"], [], 3000);
+    const train = trainFrom([12, 20, 20, 8], [1.5, 2.5, 1]);
+    const r = movingLoad(member, train, effect);
+    const offsets = [0, 1.5, 4, 5];
+    let high = -Infinity;
+    let low = Infinity;
+    for (let k = -600; k <= 2400; k++) {
+      const lead = (k * 18) / 2400;
+      for (const sign of [1, -1]) {
+        const loads = offsets
+          .map((o, i) => ({ x: lead + sign * o, p: train.loads[i] }))
+          .filter((a) => a.x >= 0 && a.x <= 18)
+          .map((a) => point(a.p, a.x));
+        const v = measure(solve({ ...member, loads }), effect);
+        high = Math.max(high, v);
+        low = Math.min(low, v);
+      }
+    }
+    const scale = Math.max(Math.abs(high), Math.abs(low));
+    expect(r.max.value).toBeGreaterThanOrEqual(high - 1e-9 * scale);
+    expect(r.min.value).toBeLessThanOrEqual(low + 1e-9 * scale);
+    expect(relDiff(r.max.value, high, scale)).toBeLessThan(2e-3);
+    expect(relDiff(r.min.value, low, scale)).toBeLessThan(2e-3);
   });
 
   it("rejects a train with the wrong number of spacings or a negative spacing", () => {

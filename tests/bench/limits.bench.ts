@@ -1,0 +1,236 @@
+/**
+ * Every worksheet function at its documented limits (reported, never asserted):
+ * `node tests/bench/run.js limits`.
+ *
+ * Calls go through the production bundle (webpack production build of functions.js, minified
+ * without name-keeping, loaded with a stand-in CustomFunctions.associate), as the host runs
+ * it (../shared/TOOLCHAIN.md). Members carry the loads limit (10,000 loads) and, where a
+ * function takes a member, the spans limit (10,000 spans); the studies are walked to the
+ * limits of src/core/limits.ts: their counts and their size budgets (the largest call each
+ * budget lets through). Every repetition uses a member not seen before, so the member cache
+ * never answers. Each scenario prints the process CPU time of its fastest and slowest repetition
+ * (after one warm-up) and the slowest wall time; each function its worst scenario against
+ * the 200 ms target. The machine is
+ * shared, so the load average is printed beside the numbers.
+ */
+import { createRequire } from "module";
+import * as os from "os";
+import * as path from "path";
+import { performance } from "perf_hooks";
+import { LIMITS, WORK_LIMIT, workOf, type StudyCounts, type StudyKind } from "../../src/core";
+import { buildAddin } from "../functions/build";
+
+type Fn = (...args: any[]) => any;
+const REPS = Number(process.env.LIMITS_REPS ?? 3);
+const TARGET_MS = 200;
+const MAX_LOADS = 10000;
+const MAX_SPANS = 10000;
+
+function loadBundle(dir: string): Record<string, Fn> {
+  const fns: Record<string, Fn> = {};
+  const g = globalThis as { CustomFunctions?: unknown };
+  const previous = g.CustomFunctions;
+  g.CustomFunctions = { associate: (name: string, fn: Fn) => (fns[name] = fn) };
+  try {
+    createRequire(__filename)(path.join(dir, "functions.js"));
+  } finally {
+    g.CustomFunctions = previous;
+  }
+  return fns;
+}
+
+let fresh = 0;
+/** Span lengths with a first span that differs by a hair on every call (no cache hits). */
+function spans(count: number, length = 5): number[][] {
+  fresh++;
+  return [Array.from({ length: count }, (_, i) => (i === 0 ? length + fresh * 1e-7 : length))];
+}
+
+const CASES = ["D", "L", "S", "W"];
+/** `count` point loads spread over the member, cases D, L, S, W by turns. */
+function loads(count: number, memberLength: number, cases = CASES): unknown[][] {
+  const rows: unknown[][] = [];
+  for (let i = 0; i < count; i++) rows.push(["point", 1 + (i % 7), (memberLength * (i + 0.37)) / count, "", "", cases[i % cases.length]]);
+  return rows;
+}
+
+function column(count: number, value: (i: number) => unknown): unknown[][] {
+  return Array.from({ length: count }, (_, i) => [value(i)]);
+}
+
+function combinations(count: number): unknown[][] {
+  return column(count, (i) => `${(1.0 + i / 200).toFixed(3)}D + ${(1.6 - i / 400).toFixed(4)}L + 0.5S + ${(i % 3) * 0.5}W`);
+}
+
+interface Scenario {
+  fn: string;
+  what: string;
+  call: (f: Record<string, Fn>) => unknown;
+  /** The study's size against its budget, when it has one. */
+  size?: [number, number];
+}
+
+const big = { spans: MAX_SPANS, length: 5 * MAX_SPANS };
+const memberAtLimits = () => [spans(big.spans), loads(MAX_LOADS, big.length)] as const;
+const EI = [[30000]];
+
+function study(kind: StudyKind, counts: Partial<StudyCounts>): [number, number] {
+  const full: StudyCounts = { spans: 1, loads: 0, cases: 0, pattern: "none", combinations: 0, positions: 0, axles: 0, ...counts };
+  return [workOf(kind, full), WORK_LIMIT];
+}
+
+/** The largest count n for which size(n) stays within the budget. */
+function largest(size: (n: number) => number, budget: number, cap: number): number {
+  let lo = 1;
+  let hi = cap;
+  while (lo < hi) {
+    const mid = Math.ceil((lo + hi) / 2);
+    if (size(mid) <= budget) lo = mid;
+    else hi = mid - 1;
+  }
+  return lo;
+}
+
+function scenarios(): Scenario[] {
+  const out: Scenario[] = [];
+  const memberFns: [string, (f: Record<string, Fn>, s: unknown, l: unknown) => unknown][] = [
+    ["REACTIONS", (f, s, l) => f.REACTIONS(s, l, null, EI, "1.2D+1.6L+0.5S", null)],
+    ["MAXMOMENT", (f, s, l) => f.MAXMOMENT(s, l, null, EI, "1.2D+1.6L", null)],
+    ["EXTREMES", (f, s, l) => f.EXTREMES(s, l, null, EI, "1.2D+1.6L", null)],
+    ["DIAGRAM", (f, s, l) => f.DIAGRAM(s, l, 10001, null, EI, "1.2D+1.6L", null)],
+    ["STRESS", (f, s, l) => f.STRESS(s, l, [[250, 260]], null, EI, "1.2D+1.6L", null)],
+    ["SHEARSTRESS", (f, s, l) => f.SHEARSTRESS(s, l, [[0.015, 2.8e-5, 2.8e-4, 0.1]], null, EI, "1.2D+1.6L", null)],
+    ["DEFLECTIONCHECK", (f, s, l) => f.DEFLECTIONCHECK(s, l, "L/360", null, EI, "D+L", null)],
+  ];
+  for (const [fn, call] of memberFns) {
+    out.push({ fn, what: `${MAX_SPANS} spans, ${MAX_LOADS} loads`, call: (f) => call(f, ...memberAtLimits()) });
+    out.push({ fn, what: `12 spans, ${MAX_LOADS} loads`, call: (f) => call(f, spans(12), loads(MAX_LOADS, 60)) });
+  }
+  out.push({
+    fn: "REACTIONS",
+    what: `${MAX_SPANS} spans, ${MAX_LOADS} loads, units`,
+    call: (f) => f.REACTIONS(...memberAtLimits(), null, [[4e6]], "1.2D+1.6L", "length=ft, force=kip, EI=kip*in^2"),
+  });
+  const xs = column(LIMITS.positions, (i) => (big.length * i) / (LIMITS.positions - 1));
+  for (const fn of ["SHEAR", "MOMENT", "SLOPE", "DEFLECTION"]) {
+    out.push({ fn, what: `${MAX_SPANS} spans, ${MAX_LOADS} loads, ${LIMITS.positions} x cells`, call: (f) => f[fn](...memberAtLimits(), xs, null, EI, "1.2D+1.6L", null) });
+  }
+
+  // ENVELOPE: the largest calls the size limit lets through, one count pushed to its limit at a time.
+  {
+    const X = LIMITS.positions;
+    const text4 = [["udl 2 D; udl 3 L; udl 1 S; udl 0.5 W"]];
+    const X3 = 1001;
+    const x12 = column(X3, (i) => (60 * i) / (X3 - 1));
+    out.push({ fn: "ENVELOPE", what: `3 spans, 2 loads, ${X} x cells, 35 combinations`, size: study("ENVELOPE", { spans: 3, loads: 2, cases: 2, combinations: 35, positions: X }), call: (f) => f.ENVELOPE(spans(3), [["udl 3 D; udl 4 L"]], column(X, (i) => (15 * i) / (X - 1)), combinations(35), null, EI, "moment", null, null) });
+    const c = largest((k) => study("ENVELOPE", { spans: 12, loads: 4, cases: 4, pattern: "full", combinations: k, positions: X3 })[0], WORK_LIMIT, LIMITS.combinations);
+    out.push({ fn: "ENVELOPE", what: `12 spans, 4 loads, full L, ${c} combinations, ${X3} x cells`, size: study("ENVELOPE", { spans: 12, loads: 4, cases: 4, pattern: "full", combinations: c, positions: X3 }), call: (f) => f.ENVELOPE(spans(12), text4, x12, combinations(c), null, EI, "moment", "full L", null) });
+    const cs = largest((k) => study("ENVELOPE", { spans: 12, loads: 4, cases: 4, pattern: "standard", combinations: k, positions: X3 })[0], WORK_LIMIT, LIMITS.combinations);
+    out.push({ fn: "ENVELOPE", what: `12 spans, 4 loads, standard L, ${cs} combinations, ${X3} x cells`, size: study("ENVELOPE", { spans: 12, loads: 4, cases: 4, pattern: "standard", combinations: cs, positions: X3 }), call: (f) => f.ENVELOPE(spans(12), text4, x12, combinations(cs), null, EI, "moment", "standard L", null) });
+    const L = largest((n) => study("ENVELOPE", { spans: 12, loads: n, cases: 4, pattern: "full", combinations: 14, positions: 1001 })[0], WORK_LIMIT, MAX_LOADS);
+    out.push({ fn: "ENVELOPE", what: `12 spans, ${L} loads, full L, 14 combinations, 1001 x cells`, size: study("ENVELOPE", { spans: 12, loads: L, cases: 4, pattern: "full", combinations: 14, positions: 1001 }), call: (f) => f.ENVELOPE(spans(12), loads(L, 60), column(1001, (i) => (60 * i) / 1000), [["ASCE7-2.3.1"]], null, EI, "moment", "full L", null) });
+    const two = { spans: MAX_SPANS, cases: 2, combinations: 1, positions: 101 };
+    const L2 = largest((k) => study("ENVELOPE", { ...two, loads: k })[0], WORK_LIMIT, MAX_LOADS);
+    out.push({ fn: "ENVELOPE", what: `${MAX_SPANS} spans, ${L2} loads (D, L), 1 combination, 101 x cells`, size: study("ENVELOPE", { ...two, loads: L2 }), call: (f) => f.ENVELOPE(spans(MAX_SPANS), loads(L2, big.length, ["D", "L"]), column(101, (i) => (big.length * i) / 100), [["1.2D+1.6L"]], null, EI, "moment", null, null) });
+    const Xf = largest((k) => study("ENVELOPE", { spans: 12, loads: 4, cases: 4, pattern: "full", combinations: 1, positions: k })[0], WORK_LIMIT, X);
+    out.push({ fn: "ENVELOPE", what: `12 spans, 4 loads, full L, 1 combination, ${Xf} x cells`, size: study("ENVELOPE", { spans: 12, loads: 4, cases: 4, pattern: "full", combinations: 1, positions: Xf }), call: (f) => f.ENVELOPE(spans(12), text4, column(Xf, (i) => (60 * i) / (Xf - 1)), [["1.2D+1.6L+0.5S+0.5W"]], null, EI, "moment", "full L", null) });
+  }
+
+  // PEAKS: the issue 15 case (full pattern on 12 spans, the ASCE strength set), then the size limit.
+  {
+    const C = LIMITS.combinations;
+    out.push({ fn: "PEAKS", what: "12 spans, 4 loads, full L, ASCE7-2.3.1 (14 combinations)", size: study("PEAKS", { spans: 12, loads: 4, cases: 4, pattern: "full", combinations: 14 }), call: (f) => f.PEAKS(spans(12), [["udl 2 D; udl 3 L; udl 1 S; udl 0.5 W"]], [["ASCE7-2.3.1"]], null, EI, "full L", null) });
+    for (const pattern of ["full", "standard", "none"] as const) {
+      const L = largest((n) => study("PEAKS", { spans: 12, loads: n, cases: 4, pattern, combinations: C })[0], WORK_LIMIT, MAX_LOADS);
+      out.push({ fn: "PEAKS", what: `12 spans, ${L} loads, ${pattern} L, ${C} combinations`, size: study("PEAKS", { spans: 12, loads: L, cases: 4, pattern, combinations: C }), call: (f) => f.PEAKS(spans(12), loads(L, 60), combinations(C), null, EI, `${pattern} L`, null) });
+    }
+    const one = { spans: MAX_SPANS, cases: 1, combinations: 1 };
+    const L = largest((k) => study("PEAKS", { ...one, loads: k })[0], WORK_LIMIT, MAX_LOADS);
+    out.push({ fn: "PEAKS", what: `${MAX_SPANS} spans, ${L} loads (D), 1 combination`, size: study("PEAKS", { ...one, loads: L }), call: (f) => f.PEAKS(spans(MAX_SPANS), loads(L, big.length, ["D"]), [["1.2D"]], null, EI, null, null) });
+  }
+
+  // INFLUENCE: positions x (spans + 1) within its budget.
+  for (const n of [1, 12, 1000, MAX_SPANS]) {
+    const P = largest((k) => study("INFLUENCE", { spans: n, positions: k })[0], WORK_LIMIT, LIMITS.positions);
+    out.push({ fn: "INFLUENCE", what: `${n} spans, ${P} positions`, size: study("INFLUENCE", { spans: n, positions: P }), call: (f) => f.INFLUENCE(spans(n), "moment at 2.5", column(P, (i) => (5 * n * i) / Math.max(1, P - 1)), null, EI) });
+  }
+
+  // MOVING: axles within their limit and the budget.
+  for (const n of [1, 12, 40, 90]) {
+    for (const effect of ["absolute moment", "moment at 2.5", "shear at 2.5", "reaction 1"]) {
+      const absoluteMoment = effect === "absolute moment";
+      if (study("MOVING", { spans: n, axles: 1, absoluteMoment })[0] > WORK_LIMIT) continue;
+      const a = largest((k) => study("MOVING", { spans: n, axles: k, absoluteMoment })[0], WORK_LIMIT, LIMITS.axles);
+      out.push({ fn: "MOVING", what: `${n} spans, ${a} axles, ${effect}`, size: study("MOVING", { spans: n, axles: a, absoluteMoment }), call: (f) => f.MOVING(spans(n), [Array(a).fill(10)], [Array(a - 1).fill(0.3)], effect, null, EI) });
+    }
+  }
+
+  const v = LIMITS.variableCases;
+  const labels = Array.from({ length: v }, (_, i) => `Q${i}`);
+  out.push({ fn: "COMBOS", what: `EN1990-6.10, ${v} variable cases, ${LIMITS.psi0Pairs} psi0 pairs`, call: () => 0 });
+  out[out.length - 1].call = (f) => f.COMBOS("EN1990-6.10", labels.map((l) => `${l} 0.${(fresh++ % 9) + 1}`).join(", "), [labels]);
+  out.push({ fn: "COMBOS", what: "ASCE7-2.3.1", call: (f) => f.COMBOS("ASCE7-2.3.1", null, null) });
+
+  out.push({ fn: "SECTION", what: "I section, units", call: (f) => f.SECTION("I", [[400 + (fresh++ % 10), 180, 13.5, 8.6]], "mm", "in") });
+  out.push({ fn: "SECTION", what: "tee section", call: (f) => f.SECTION("tee", [[300, 200 + (fresh++ % 10), 15, 10]], null, null) });
+  const cells = LIMITS.positions;
+  out.push({ fn: "UTILISATION", what: `${cells} demand cells, one capacity each, units`, call: (f) => f.UTILISATION(column(cells, (i) => i + fresh), column(cells, (i) => 2 * i + 1), "kip*ft", "kN*m") });
+  out.push({ fn: "CONVERT", what: `${cells} cells`, call: (f) => f.CONVERT(column(cells, (i) => i + fresh), "kip/ft", "kN/m") });
+  out.push({ fn: "STIFFNESS", what: `${cells} cells (E per span, one I)`, call: (f) => f.STIFFNESS(column(cells, (i) => 29000 + i + fresh), [[510]], "ksi", "in^4", "kip*ft^2") });
+  return out;
+}
+
+function outcome(value: unknown): string {
+  if (Array.isArray(value)) return `${value.length} rows`;
+  return String(value).slice(0, 60);
+}
+
+export async function run(): Promise<void> {
+  const dir = await buildAddin();
+  const fns = loadBundle(dir);
+  const names = Object.keys(fns);
+  console.log(`production bundle ${path.join(dir, "functions.js")} (${names.length} functions)`);
+  const before = os.loadavg();
+  console.log(`load average ${before.map((l) => l.toFixed(1)).join(" ")} on ${os.cpus().length} cores (other work inflates wall times; CPU time is this process's own)`);
+  const worst = new Map<string, { best: number; worst: number; wall: number; what: string }>();
+  // LIMITS_ONLY=MOVING,PEAKS measures those functions only.
+  const only = process.env.LIMITS_ONLY ? process.env.LIMITS_ONLY.split(",") : null;
+  for (const s of scenarios().filter((c) => !only || only.includes(c.fn))) {
+    let wall = 0;
+    let cpu = 0;
+    let least = Infinity;
+    let result: unknown;
+    for (let rep = 0; rep < REPS; rep++) {
+      const c0 = process.cpuUsage();
+      const t0 = performance.now();
+      try {
+        result = s.call(fns);
+      } catch (error) {
+        result = `ERROR ${(error as { message?: string }).message}`;
+      }
+      const w = performance.now() - t0;
+      const c = process.cpuUsage(c0);
+      // The first repetition warms the JIT; the others are reported (slowest and fastest).
+      if (rep === 0 && REPS > 1) continue;
+      const ms = (c.user + c.system) / 1000;
+      wall = Math.max(wall, w);
+      cpu = Math.max(cpu, ms);
+      least = Math.min(least, ms);
+    }
+    const size = s.size ? `  size ${s.size[0]} of ${s.size[1]}` : "";
+    console.log(`  ${s.fn.padEnd(15)} ${s.what.padEnd(58)} CPU ${least.toFixed(1).padStart(6)}-${cpu.toFixed(1).padStart(6)} ms  wall max ${wall.toFixed(1).padStart(7)} ms  ${outcome(result)}${size}`);
+    const w = worst.get(s.fn);
+    if (!w || least > w.best) worst.set(s.fn, { best: least, worst: cpu, wall, what: s.what });
+  }
+  console.log(`\nworst scenario per function (its fastest and slowest repetition, process CPU; target ${TARGET_MS} ms):`);
+  for (const name of names) {
+    const w = worst.get(name);
+    if (!w) {
+      console.log(`  ${name.padEnd(15)} NOT MEASURED`);
+      continue;
+    }
+    const verdict = w.best <= TARGET_MS ? (w.worst <= TARGET_MS ? "within" : "within at best") : "OVER";
+    console.log(`  ${name.padEnd(15)} ${w.best.toFixed(1).padStart(7)} - ${w.worst.toFixed(1).padStart(7)} ms CPU (wall up to ${w.wall.toFixed(1)} ms)  ${verdict}  [${w.what}]`);
+  }
+  console.log(`load average after ${os.loadavg().map((l) => l.toFixed(1)).join(" ")}`);
+}
