@@ -27,7 +27,7 @@ function loadScaleOf(member: Member, length: number): number {
  * never smaller than the values at the piece ends: rounding noise is judged against them.
  */
 function scalesOf(pieces: Piece[], spans: number[], force: number): Record<Quantity, number> {
-  const longest = Math.max(...spans);
+  const longest = spans.reduce((a, b) => Math.max(a, b), 0);
   let flexibility = 0;
   for (const p of pieces) flexibility = Math.max(flexibility, p.flexibility);
   const scales: Record<Quantity, number> = {
