@@ -37,9 +37,9 @@ import { sheetCaseReactions, sheetFrequencies, sheetModeShape, sheetSpanPeaks } 
  * @remarks Reactions at every node of a continuous beam: one row per node (span end) with x, the vertical reaction (up +) and the moment reaction (counter-clockwise +); unsupported nodes give 0, a spring gives its force. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
- * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns One row per node: x, vertical reaction, moment reaction.
  */
@@ -55,9 +55,9 @@ export function reactions(spans: any[][], loads: any[][], supports?: any[][], EI
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
- * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Shear at each x, in the shape of x.
  */
@@ -73,9 +73,9 @@ export function shear(spans: any[][], loads: any[][], x: any[][], supports?: any
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
- * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Moment at each x, in the shape of x.
  */
@@ -91,9 +91,9 @@ export function moment(spans: any[][], loads: any[][], x: any[][], supports?: an
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Required here.
- * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Slope at each x, in the shape of x.
  */
@@ -109,9 +109,9 @@ export function slope(spans: any[][], loads: any[][], x: any[][], supports?: any
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Required here.
- * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Deflection at each x, in the shape of x.
  */
@@ -126,9 +126,9 @@ export function deflection(spans: any[][], loads: any[][], x: any[][], supports?
  * @remarks Largest (sagging) and smallest (hogging) bending moment along the member and where they occur, found exactly from the moment curve: [[largest M, x], [smallest M, x]]. Sagging moment +. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for springs; without it the member is taken as uniform.
- * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Two rows: largest moment and its x; smallest moment and its x.
  */
@@ -143,9 +143,9 @@ export function maxMoment(spans: any[][], loads: any[][], supports?: any[][], EI
  * @remarks Extremes of each quantity: rows label, max, x at max, min, x at min for shear and moment, and for slope and deflection when EI is given. Found exactly from the curves, never by sampling. Signs: loads down +, couples clockwise +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Adds the slope and deflection rows; without it the member is taken as uniform.
- * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Rows shear, moment (then slope, deflection with EI): label, max, x at max, min, x at min.
  */
@@ -161,9 +161,9 @@ export function extremes(spans: any[][], loads: any[][], supports?: any[][], EI?
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param [points] Number of evenly spaced stations including both ends: a whole number from 2 to 10001. Blank (or 0) = 101.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Fills the slope and deflection columns; without it the member is taken as uniform.
- * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors applied to the case labels of the loads; cases not named are left out. Blank = every load at factor 1.
+ * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Rows x, shear, moment, slope, deflection.
  */
@@ -184,7 +184,7 @@ export function diagram(spans: any[][], loads: any[][], points?: any, supports?:
  * @param spans Span lengths left to right (any length unit): a row or column, or one text cell such as "6 8 6".
  * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation; every load needs a case label. Forces down +, couples clockwise +.
  * @param x Positions from the member's left end: a cell, row, column or block; one result row per cell, in reading order (blank cells give blank rows).
- * @param combos Combinations: a cell or range of texts such as 1.2D+1.6L+0.5S, and/or set names ASCE7-2.3.1, ASCE7-2.4.1, EN1990-6.10 (each expanded to its individual combinations).
+ * @param combos Combinations: a cell or range of texts such as 1.2D+1.6L+0.5S, and/or set names ASCE7-2.3.1, ASCE7-2.4.1, EN1990-6.10 (each expanded). Labels match exactly; each typed combination must select a load.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
  * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
  * @param [quantity] shear, moment (default) or deflection.
@@ -292,7 +292,7 @@ export function section(shape: any, dimensions: any[][], unit?: any, resultUnit?
  * @param section Section modulus S (one value, both fibres), or S top and S bottom; or a SPAN.SECTION result (its Sx top and Sx bottom rows, with their units). In section-unit^3.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
  * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Needed for springs; without it the member is taken as uniform.
- * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels. Blank = every load at factor 1.
+ * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs: length=ft, force=kip (both needed when any is given), EI=kip*in^2, section=in (default length), stress=ksi (default force/section^2). Blank = consistent units.
  * @returns Rows top and bottom: fibre, largest stress, x, smallest stress, x.
  */
@@ -310,7 +310,7 @@ export function stress(spans: any[][], loads: any[][], section: any[][], support
  * @param section A (area: average only), or A I Q t (area, second moment, first moment about the neutral axis of the area beyond the point, width there), in section-unit powers; or a SPAN.SECTION result.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
  * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Needed for springs; without it the member is taken as uniform.
- * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels. Blank = every load at factor 1.
+ * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs: length=m, force=kN (both needed when any is given), EI=kN*m^2, section=mm (default length), stress=MPa (default force/section^2). Blank = consistent units.
  * @returns Rows average and peak: label, stress, x of the largest |V|.
  */
@@ -328,7 +328,7 @@ export function shearStress(spans: any[][], loads: any[][], section: any[][], su
  * @param limit The stated limit as L/360, span/360 or 360: one for the member or one per span (a row, column or text such as "L/360 L/180").
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
  * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Required here; SPAN.STIFFNESS builds it from E and I.
- * @param [combo] Load combination such as D+L or L alone: factors on the case labels. Blank = every load at factor 1.
+ * @param [combo] Load combination such as D+L or L alone: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs: length=ft, force=kip (both needed when any is given), EI=kip*in^2, deflection=in (default length). Blank = consistent units.
  * @returns One row per span: span number, span length, deflection, x, span/deflection ("" when 0), limit divisor, pass or fail.
  */
@@ -394,7 +394,7 @@ export function stiffness(E: any[][], I: any[][], EUnit?: any, IUnit?: any, resu
  * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
  * @param [EI] Flexural stiffness, one value or one per span. Adds the deflection columns; without it the member is taken as uniform.
- * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels. Blank = every load at factor 1.
+ * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in", as for SPAN.REACTIONS. Blank = consistent units.
  * @returns One row per span: span, length, largest M, x, smallest M, x, largest |V|, x, largest |deflection|, x.
  */

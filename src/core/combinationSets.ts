@@ -53,7 +53,7 @@ export interface SetOptions {
 
 function psiFor(options: SetOptions, loadCase: string): number {
   const psi = options.psi0;
-  const value = typeof psi === "number" ? psi : psi?.[loadCase];
+  const value = typeof psi === "number" ? psi : psi !== undefined && Object.prototype.hasOwnProperty.call(psi, loadCase) ? psi[loadCase] : undefined;
   if (value === undefined || !Number.isFinite(value) || value < 0 || value > 1) {
     throw invalid(`combination set EN1990-6.10: give psi0 between 0 and 1 for variable case ${loadCase}`);
   }

@@ -102,42 +102,66 @@ export function sameDimension(a: Dimension, b: Dimension): boolean {
   return a[0] === b[0] && a[1] === b[1];
 }
 
-const FACTOR = /^([A-Za-z]+)(?:\^([+-]?\d+)|(\d+))?/;
+/** One factor where the scan stands (sticky): a name, then an optional power "^2", "^-1" or "2". */
+const FACTOR = /([A-Za-z]+)(?:\^([+-]?\d+)|(\d+))?/y;
+const SPACES = /\s*/y;
+
+/** Most factors in one unit expression ("kip*in^2/ft" has three). */
+export const MAX_UNIT_FACTORS = 12;
+/** Largest power of one factor ("m^4" is 4). */
+export const MAX_UNIT_POWER = 12;
+
+/** Index just past the spaces starting at `at`. */
+function skipSpaces(text: string, at: number): number {
+  SPACES.lastIndex = at;
+  SPACES.exec(text);
+  return SPACES.lastIndex;
+}
 
 /**
  * Parses a unit expression: table names joined by "*", "·", "." or "-" (product) and "/"
  * (each "/" divides by the factor after it), each with an optional power written "^2", "2"
- * or "²". Throws #VALUE! naming `name` for anything else.
+ * or "²"; spaces may stand around an operator. At most MAX_UNIT_FACTORS factors, powers up
+ * to MAX_UNIT_POWER. Throws #VALUE! naming `name` for anything else. One left-to-right scan:
+ * linear in the length of the text.
  */
 export function parseUnit(text: string, name: string): Unit {
-  let rest = text.trim();
-  for (const [sup, plain] of Object.entries(SUPERSCRIPTS)) rest = rest.split(sup).join(sup === "⁻" ? "^-" : plain);
-  rest = rest.replace(/\^\^/g, "^").replace(/\s*([*·./-])\s*/g, "$1");
-  if (rest === "") throw invalid(`${name}: the unit is blank; write one such as kN/m or kip/ft`);
+  let source = text.trim();
+  for (const [sup, plain] of Object.entries(SUPERSCRIPTS)) source = source.split(sup).join(sup === "⁻" ? "^-" : plain);
+  source = source.split("^^").join("^");
+  if (source === "") throw invalid(`${name}: the unit is blank; write one such as kN/m or kip/ft`);
+  const shown = text.trim().length <= 40 ? text.trim() : `${text.trim().slice(0, 37)}...`;
+  const near = (at: number) => source.slice(at, at + 12);
+  const cannotRead = (at: number) => invalid(`${name}: cannot read the unit "${shown}" at "${near(at)}"; join units with * or / (for example kN*m^2, kip/ft)`);
   let factor = 1;
   let length = 0;
   let force = 0;
-  let sign = 1;
-  let first = true;
-  while (rest !== "") {
-    if (!first) {
-      const op = rest[0];
+  let count = 0;
+  let at = 0;
+  while (at < source.length) {
+    let sign = 1;
+    if (count > 0) {
+      const opAt = skipSpaces(source, at);
+      const op = source[opAt];
       if (op === "/") sign = -1;
-      else if (op === "*" || op === "·" || op === "." || op === "-") sign = 1;
-      else throw invalid(`${name}: cannot read the unit "${text}" at "${rest}"; join units with * or / (for example kN*m^2, kip/ft)`);
-      rest = rest.slice(1);
+      else if (op !== "*" && op !== "·" && op !== "." && op !== "-") throw cannotRead(at);
+      at = skipSpaces(source, opAt + 1);
     }
-    const match = FACTOR.exec(rest);
-    if (!match) throw invalid(`${name}: cannot read the unit "${text}" at "${rest}"; join units with * or / (for example kN*m^2, kip/ft)`);
-    const entry = TABLE[match[1].toLowerCase()];
-    if (!entry) throw invalid(`${name}: unknown unit "${match[1]}" in "${text}"; known units: ${UNIT_NAMES.join(", ")}`);
-    const power = sign * Number(match[2] ?? match[3] ?? 1);
-    if (power === 0 || !Number.isInteger(power)) throw invalid(`${name}: the power in "${match[0]}" must be a whole number other than 0`);
+    FACTOR.lastIndex = at;
+    const match = FACTOR.exec(source);
+    if (!match) throw cannotRead(at);
+    const entry = Object.prototype.hasOwnProperty.call(TABLE, match[1].toLowerCase()) ? TABLE[match[1].toLowerCase()] : undefined;
+    if (!entry) throw invalid(`${name}: unknown unit "${match[1].length <= 20 ? match[1] : `${match[1].slice(0, 17)}...`}" in "${shown}"; known units: ${UNIT_NAMES.join(", ")}`);
+    if (++count > MAX_UNIT_FACTORS) throw invalid(`${name}: the unit "${shown}" has more than ${MAX_UNIT_FACTORS} factors`);
+    const written = match[2] ?? match[3];
+    const power = sign * (written === undefined ? 1 : written.length > 3 ? Infinity : Number(written));
+    if (power === 0 || !Number.isInteger(power) || Math.abs(power) > MAX_UNIT_POWER) {
+      throw invalid(`${name}: the power in "${match[0].length <= 20 ? match[0] : `${match[0].slice(0, 17)}...`}" must be a whole number other than 0, from -${MAX_UNIT_POWER} to ${MAX_UNIT_POWER}`);
+    }
     factor *= entry.factor ** power;
     length += entry.dimension[0] * power;
     force += entry.dimension[1] * power;
-    rest = rest.slice(match[0].length);
-    first = false;
+    at = FACTOR.lastIndex;
   }
   return { factor, dimension: [length, force], text: text.trim() };
 }

@@ -48,7 +48,7 @@ export function engineResult(result: unknown): SimpleRangeValue | EngineScalar {
     return new CellError(ErrorType.VALUE, "the function returned no table");
   }
   const rows = result as unknown[][];
-  const width = Math.max(...rows.map((row) => row.length));
+  const width = rows.reduce((most, row) => Math.max(most, row.length), 0);
   const data = rows.map((row) => Array.from({ length: width }, (_, col) => engineScalar(row[col])));
   if (data.length === 1 && width === 1) return data[0][0];
   return SimpleRangeValue.onlyValues(data as never);

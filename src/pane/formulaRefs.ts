@@ -40,7 +40,7 @@ const SHEET = String.raw`(?:'((?:[^']|'')+)'|([A-Za-z_][\w.]*))!`;
 const CELL = String.raw`\$?[A-Za-z]{1,3}\$?\d+`;
 const RANGE = new RegExp(String.raw`^(?:${SHEET})?(${CELL}(?::${CELL})?)(#?)$`);
 const NAME = new RegExp(String.raw`^(?:${SHEET})?([A-Za-z_\\][\w.]*)$`);
-const NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?%?$/;
+const NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?%?$/;
 const CALL_START = /(?<![\w.])(?:_xll\.|_xldudf_)?SPAN[._]([A-Za-z]+)\s*\(/i;
 
 /** Index just past the string literal starting at `at` (a `"`). */

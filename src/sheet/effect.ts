@@ -8,7 +8,7 @@ import { invalid, type MovingEffect } from "../core";
 import { errorCodeOf, show } from "./cells";
 import { singleCell } from "./ranges";
 
-const NUMBER = "([+-]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][+-]?\\d+)?)";
+const NUMBER = "([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)";
 const AT_PATTERN = new RegExp(`^(shear|moment|deflection)\\s+at\\s+${NUMBER}$`, "i");
 const NODE_PATTERN = new RegExp(`^(reaction|moment\\s+reaction)\\s+(?:at\\s+node\\s+|node\\s+)?${NUMBER}$`, "i");
 

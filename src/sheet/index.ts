@@ -1,6 +1,6 @@
 /** The sheet layer's public surface: cell values <-> the solver's model, shapes, errors, cache. */
 export { sheetReactions, sheetValuesAt, sheetMaxMoment, sheetExtremes, sheetDiagram, solvedMember, readPoints, DEFAULT_POINTS, MAX_POINTS } from "./worksheet";
-export { readMember, readLoads, readComboText } from "./member";
+export { readMember, readLoads, readComboText, checkCombination, checkMemberCombination } from "./member";
 export type { MemberArgs } from "./member";
 export { readLoadTable, readLoadRow } from "./loadTable";
 export { parseLoadNotation, formatLoad, formatLoadNotation } from "./loadNotation";

@@ -15,7 +15,12 @@ import { invalid, MAX_LOADS, type LoadKind } from "../core";
 import { numberFromText } from "./cells";
 import { isCaseLabel, type LoadRow } from "./loadRow";
 
-const KINDS: Record<string, LoadKind> = { point: "point", moment: "moment", udl: "udl", linear: "linear" };
+const KINDS = new Map<string, LoadKind>([
+  ["point", "point"],
+  ["moment", "moment"],
+  ["udl", "udl"],
+  ["linear", "linear"],
+]);
 
 class Tokens {
   private index = 0;
@@ -66,12 +71,11 @@ class Tokens {
 
 function parseOne(text: string, row: number): LoadRow {
   const fail = (message: string): never => {
-    throw invalid(`load ${row} of the loads text ("${text}"): ${message}`);
+    throw invalid(`load ${row} of the loads text ("${text.length <= 60 ? text : `${text.slice(0, 57)}...`}"): ${message}`);
   };
   const tokens = new Tokens(text.split(/\s+/).filter((w) => w !== ""), fail);
   const word = tokens.peek() ?? "";
-  const kind = KINDS[word.toLowerCase()];
-  if (!kind) fail(`"${word}" is not a load type; start with point, moment, udl or linear`);
+  const kind = KINDS.get(word.toLowerCase()) ?? fail(`"${word.length <= 20 ? word : `${word.slice(0, 17)}...`}" is not a load type; start with point, moment, udl or linear`);
   tokens.expectKeyword(word.toLowerCase(), "");
   const magnitude = tokens.number("the magnitude");
   let xStart = 0;

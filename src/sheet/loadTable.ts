@@ -7,7 +7,12 @@ import { invalid, MAX_LOADS, type LoadKind } from "../core";
 import { errorCodeOf, isBlank, isEmpty, readNumber, readText, show } from "./cells";
 import { COLUMNS, isCaseLabel, placeOf, type ColumnName, type LoadRow } from "./loadRow";
 
-const KINDS: Record<string, LoadKind> = { point: "point", moment: "moment", udl: "udl", linear: "linear" };
+const KINDS = new Map<string, LoadKind>([
+  ["point", "point"],
+  ["moment", "moment"],
+  ["udl", "udl"],
+  ["linear", "linear"],
+]);
 
 function isBlankRow(cells: unknown[]): boolean {
   for (const cell of cells) if (!isBlank(cell)) return false;
@@ -19,7 +24,7 @@ function readKind(cell: unknown, row: number): LoadKind {
   if (isBlank(cell)) throw invalid(`${where}: the load type is blank; use point, moment, udl or linear`);
   const code = errorCodeOf(cell);
   if (code !== null) throw invalid(`${where}: the cell holds the error ${code}`);
-  const kind = typeof cell === "string" ? KINDS[cell.trim().toLowerCase()] : undefined;
+  const kind = typeof cell === "string" ? KINDS.get(cell.trim().toLowerCase()) : undefined;
   if (!kind) throw invalid(`${where}: ${show(cell)} is not a load type; use point, moment, udl or linear`);
   return kind;
 }

@@ -2,11 +2,11 @@
  * The shared leading arguments of every SPAN function (spans, loads, supports, EI, combo)
  * read into the solver's Member, with the combination applied.
  */
-import { applyCombination, invalid, parseCombination, type Member } from "../core";
+import { applyCombination, checkCombinations, invalid, parseCombination, type Combination, type Member } from "../core";
 import { errorCodeOf, isEmpty, show } from "./cells";
 import { readSpans, readStiffness } from "./lists";
 import type { LoadRow } from "./loadRow";
-import { toLoad } from "./loadRow";
+import { placeOf, toLoad } from "./loadRow";
 import { parseLoadNotation } from "./loadNotation";
 import { readLoadTable } from "./loadTable";
 import { rowsOf, singleCell } from "./ranges";
@@ -44,6 +44,32 @@ export function readComboText(arg: unknown): string {
   return single;
 }
 
+/** Names a load row's case cell in messages: "load row 3, column 6 (case)" or "load 2 of the loads text (case)". */
+export function casePlace(load: { row: number; fromText?: boolean }): string {
+  return placeOf(load.row, load.fromText === true, "case");
+}
+
+/** Applies the combination and case-label rule (core checkCombinations) to load rows under one combination. */
+export function checkMemberCombination(rows: readonly LoadRow[], combination: Combination | null): void {
+  if (combination !== null) checkCombinations(rows, [{ combination }], casePlace);
+}
+
+/**
+ * The combination and case-label rule for a combination box: the loads (table rows or the
+ * loads text, as readLoads gives them) and the combination text. Returns null when the
+ * combination may be used, or the message the functions would give (#VALUE!) otherwise.
+ */
+export function checkCombination(loads: readonly LoadRow[], comboText: string): string | null {
+  try {
+    const text = comboText.trim();
+    checkMemberCombination(loads, text === "" ? null : parseCombination(text));
+    return null;
+  } catch (error) {
+    if (error instanceof Error || (typeof error === "object" && error !== null && "message" in error)) return String((error as { message: unknown }).message);
+    return String(error);
+  }
+}
+
 /** Reads and checks the member arguments at the cell level; physics is left to the solver. */
 export function readMember(args: MemberArgs): Member {
   const spans = readSpans(args.spans);
@@ -54,6 +80,7 @@ export function readMember(args: MemberArgs): Member {
   const rows = readLoads(args.loads);
   const comboText = readComboText(args.combo);
   const combination = comboText === "" ? null : parseCombination(comboText);
+  checkMemberCombination(rows, combination);
   const loads = applyCombination(
     rows.map((row) => toLoad(row, length)),
     combination,

@@ -10,7 +10,7 @@ import { guarded } from "./hostError";
 import { listEntries } from "./ranges";
 import { readUnit } from "./units";
 
-const SHAPE_NAMES: Record<string, SectionKind> = {
+const SHAPE_NAMES: Record<string, SectionKind> = Object.assign(Object.create(null) as Record<string, SectionKind>, {
   rectangle: "rectangle",
   rect: "rectangle",
   circle: "circle",
@@ -28,7 +28,7 @@ const SHAPE_NAMES: Record<string, SectionKind> = {
   c: "channel",
   tee: "tee",
   t: "tee",
-};
+});
 
 /** Rows of the result: label, property, power of length. The check functions find rows by these labels. */
 export const SECTION_ROWS: readonly (readonly [label: string, key: keyof SectionProperties, power: number])[] = [

@@ -25,6 +25,7 @@ import { errorCodeOf, isBlank, isEmpty, readNumber, show } from "./cells";
 import { readCombinations, readPsi0 } from "./combinations";
 import { readEffect } from "./effect";
 import { guarded } from "./hostError";
+import type { LoadRow } from "./loadRow";
 import { readLoads, readMember } from "./member";
 import { isAllBlank, listEntries, rowsOf, singleCell } from "./ranges";
 import { finite, mapPositions } from "./shape";
@@ -48,8 +49,9 @@ function checkCombinationCells(combos: unknown): void {
   checkCount(count, LIMITS.combinations, "combinations", "combinations (named sets expanded)");
 }
 
-function caseLabels(loads: unknown): string[] {
-  return readLoads(loads).map((row) => row.loadCase);
+/** The load rows, for the combination and case-label rule. */
+function caseLabels(loads: unknown): LoadRow[] {
+  return readLoads(loads);
 }
 
 /** Reads the pattern argument: blank or "none", "standard" or "full", optionally followed by the live case label. */

@@ -1,29 +1,33 @@
 /**
  * The supports argument: one entry per node (spans + 1). Words pin, fixed, free, hinge
  * (any case), or a positive number = vertical spring stiffness (force/length). Omitted or
- * wholly blank = every node pin; a blank cell inside a supports range = pin.
+ * wholly blank = every node pin; blank cells beyond the last node are ignored. A blank cell or
+ * a 0 for a node is an error naming the entry: the host can deliver a blank as 0, and a spring
+ * of 0 is no support, so neither may silently become a pin or a free end.
  */
 import { invalid, type Support } from "../core";
 import { errorCodeOf, isBlank, numberFromText, show } from "./cells";
 import { isAllBlank, listEntries, singleCell } from "./ranges";
 
 const PIN: Support = { kind: "pin" };
-const WORDS: Record<string, Support> = {
-  pin: PIN,
-  fixed: { kind: "fixed" },
-  free: { kind: "free" },
-  hinge: { kind: "hinge" },
-};
+const WORDS = new Map<string, Support>([
+  ["pin", PIN],
+  ["fixed", { kind: "fixed" }],
+  ["free", { kind: "free" }],
+  ["hinge", { kind: "hinge" }],
+]);
 
 function readSupport(entry: unknown, index: number, fromText: boolean): Support {
   const where = `supports entry ${index + 1}`;
-  if (!fromText && isBlank(entry)) return PIN;
+  if (!fromText && isBlank(entry)) {
+    throw invalid(`${where}: the cell is blank or 0; write pin, fixed, free or hinge, or a positive spring stiffness (a spring of 0 is no support)`);
+  }
   const code = errorCodeOf(entry);
   if (code !== null) throw invalid(`${where}: the cell holds the error ${code}`);
   let stiffness: number | null = null;
   if (typeof entry === "number") stiffness = entry;
   else if (typeof entry === "string") {
-    const word = WORDS[entry.trim().toLowerCase()];
+    const word = WORDS.get(entry.trim().toLowerCase());
     if (word) return word;
     stiffness = numberFromText(entry);
   }

@@ -60,7 +60,44 @@ export interface MemberUnits {
   deflection: Unit;
 }
 
-function pairsOf(arg: unknown): string[] {
+function isSeparator(ch: string): boolean {
+  return ch === "," || ch === ";" || ch.trim() === "";
+}
+
+function isSpace(ch: string): boolean {
+  return ch !== "," && ch !== ";" && ch.trim() === "";
+}
+
+/**
+ * The key=unit pairs of the text, one at a time (so that reading stops at the first bad
+ * pair): pairs are separated by commas, semicolons or spaces; "=" or ":" joins key and unit,
+ * with optional spaces around it. One left-to-right scan, linear in the length of the text.
+ */
+function* pairsIn(text: string): Generator<string> {
+  const n = text.length;
+  let i = 0;
+  while (i < n) {
+    while (i < n && isSeparator(text[i])) i++;
+    if (i >= n) return;
+    let j = i;
+    while (j < n && !isSeparator(text[j]) && text[j] !== "=" && text[j] !== ":") j++;
+    let k = j;
+    while (k < n && isSpace(text[k])) k++;
+    if (k < n && (text[k] === "=" || text[k] === ":")) {
+      k++;
+      while (k < n && isSpace(text[k])) k++;
+      let m = k;
+      while (m < n && !isSeparator(text[m])) m++;
+      yield `${text.slice(i, j)}=${text.slice(k, m)}`;
+      i = m;
+    } else {
+      yield text.slice(i, j === i ? i + 1 : j);
+      i = j === i ? i + 1 : j;
+    }
+  }
+}
+
+function pairsOf(arg: unknown): Generator<string> {
   const parts: string[] = [];
   for (const row of rowsOf(arg)) {
     const cells = (Array.isArray(row) ? row : [row]).filter((cell) => !isEmpty(cell) && cell !== 0);
@@ -71,22 +108,18 @@ function pairsOf(arg: unknown): string[] {
     }
     const texts = cells as string[];
     if (texts.length === 2 && !texts[0].includes("=") && !texts[1].includes("=")) parts.push(`${texts[0].trim()}=${texts[1].trim()}`);
-    else parts.push(...texts);
+    else for (const text of texts) parts.push(text);
   }
-  return parts
-    .join(",")
-    .replace(/\s*[=:]\s*/g, "=")
-    .split(/[\s,;]+/)
-    .filter((p) => p !== "");
+  return pairsIn(parts.join(","));
 }
 
 /** Reads the units argument: null when it is blank (consistent units). */
 export function readMemberUnits(arg: unknown): MemberUnits | null {
   if (arg === null || arg === undefined) return null;
-  const pairs = pairsOf(arg);
-  if (pairs.length === 0) return null;
   const given = new Map<string, Unit>();
-  for (const pair of pairs) {
+  let pairs = 0;
+  for (const pair of pairsOf(arg)) {
+    pairs++;
     const [rawKey, text, extra] = pair.split("=");
     const key = Object.keys(UNIT_KEYS).find((k) => k.toLowerCase() === (rawKey ?? "").toLowerCase());
     if (extra !== undefined || text === undefined || text === "") {
@@ -96,6 +129,7 @@ export function readMemberUnits(arg: unknown): MemberUnits | null {
     if (given.has(key)) throw invalid(`units: ${key} is given twice`);
     given.set(key, parseUnitOf(text, UNIT_KEYS[key], `units ${key}`));
   }
+  if (pairs === 0) return null;
   const length = given.get("length");
   const force = given.get("force");
   if (!length || !force) throw invalid(`units: give both length and force (for example length=ft, force=kip); got ${[...given.keys()].join(", ")}`);

@@ -23,8 +23,8 @@ export function drawChart(container: HTMLElement, spec: ChartSpec): string {
   svg.setAttribute("height", String(HEIGHT));
   const xs = spec.x;
   const all = spec.series.flatMap((s) => s.values).filter(Number.isFinite);
-  const [xMin, xMax] = [Math.min(...xs), Math.max(...xs)];
-  const [yMin, yMax] = [Math.min(0, ...all), Math.max(0, ...all)];
+  const [xMin, xMax] = [xs.reduce((a, b) => Math.min(a, b), Infinity), xs.reduce((a, b) => Math.max(a, b), -Infinity)];
+  const [yMin, yMax] = [all.reduce((a, b) => Math.min(a, b), 0), all.reduce((a, b) => Math.max(a, b), 0)];
   const sx = (x: number): number => PAD + ((x - xMin) / (xMax - xMin || 1)) * (WIDTH - 2 * PAD);
   const sy = (y: number): number => HEIGHT - PAD - ((y - yMin) / (yMax - yMin || 1)) * (HEIGHT - 2 * PAD);
   const axis = document.createElementNS(ns, "line");

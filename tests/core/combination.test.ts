@@ -1,6 +1,6 @@
 /** Load combinations: parsing, formatting (canonical text that parses back) and applying factors. */
 import fc from "fast-check";
-import { applyCombination, formatCombination, parseCombination, solve, tolerance, valueAt } from "../../src/core";
+import { applyCombination, checkCombinations, formatCombination, parseCombination, solve, STANDARD_CASE_LABELS, tolerance, valueAt } from "../../src/core";
 import { thrown } from "./kit/errors";
 import { beam, linear, point, udl } from "./kit/members";
 import { runs } from "./kit/random";
@@ -136,5 +136,42 @@ describe("applyCombination", () => {
       const expected = 1.2 * valueAt(only("D"), "moment", x) + 1.6 * valueAt(only("L"), "moment", x) - 0.5 * valueAt(only("S"), "moment", x);
       expect(tolerance.relClose(valueAt(combined, "moment", x), expected, tolerance.HANDBOOK_TOLERANCE, 100)).toBe(true);
     }
+  });
+});
+
+describe("checkCombinations: the combination and case-label rule", () => {
+  const loads = (...labels: string[]) => labels.map((loadCase, i) => ({ loadCase, row: i + 1 }));
+  const check = (labels: string[], ...combos: string[]) => () => checkCombinations(loads(...labels), combos.map((text) => ({ combination: parseCombination(text) })));
+  test.each([
+    [["D", "L"], ["1.2D+1.6L"]],
+    [["D", "L"], ["1.2D+1.6L+0.5S"]],
+    [["D", "L"], ["1.4D"]],
+    [["D", "Live"], ["1.4D", "1.2D+1.6Live"]],
+    [["D", "Live"], ["1.2D+0Live"]],
+    [["D", "Whatever"], [""]],
+    [["", ""], [""]],
+  ])("accepts loads %j under %j", (labels, combos) => {
+    expect(check(labels, ...combos)).not.toThrow();
+  });
+  test.each([
+    [["D", "L"], ["1.2D+1.6LL"], /no load carries case LL \(the loads carry D, L\)/],
+    [["D", "L"], ["1.2d+1.6l"], /no load carries case d .*did you mean D\?/],
+    [["D", "L"], ["1.6W"], /selects no load/],
+    [["D", "L"], ["0D"], /selects no load/],
+    [["D", "l"], ["1.2D+1.6L"], /load row 2: case l is not named .*did you mean L\?/],
+    [["D", "Live"], ["1.2D+1.6L"], /load row 2: case Live is not named by the combination/],
+    [["D", "Live"], ["1.4D", "1.2D+1.6L"], /case Live is not named by any of the combinations/],
+    [["D", ""], ["1.2D"], /load row 2 has no case label/],
+    [[], ["1.2D"], /selects no load.*the member has no loads/],
+  ])("refuses loads %j under %j", (labels, combos, message) => {
+    expect(check(labels, ...combos)).toThrow(message);
+  });
+  test("a set's combinations may name labels no load carries and select nothing one by one, but not all", () => {
+    const uses = ["1.4D", "1.2D + 1.6L"].map((text) => ({ combination: parseCombination(text), set: "S1" }));
+    expect(() => checkCombinations(loads("L"), uses)).not.toThrow();
+    expect(() => checkCombinations(loads("W"), uses)).toThrow(/set S1 selects no load/);
+  });
+  test("every standard label is accepted unnamed and uncarried", () => {
+    for (const label of STANDARD_CASE_LABELS) expect(check(["D", label], `1.2D+1.0${label === "D" ? "L" : label}`)).not.toThrow();
   });
 });

@@ -102,7 +102,7 @@ describe("two equal spans, uniform load (from memory: R = 3wL/8, 10wL/8, 3wL/8; 
   const forms: [string, unknown[][], unknown[][], unknown[][] | null][] = [
     ["ranges", [[l, l]], [["udl", q]], [["pin", "pin", "pin"]]],
     ["text cells", [["5 5"]], [["udl 4"]], [["pin pin pin"]]],
-    ["column ranges and numbers as text", [["5"], [" 5 "]], [["UDL", "4", "", "", "", ""]], [["Pin"], [""], [null]]],
+    ["column ranges and numbers as text", [["5"], [" 5 "]], [["UDL", "4", "", "", "", ""]], [["Pin"], ["pin"], ["PIN"], [""], [null]]],
     ["supports skipped", [[l, l]], [["udl", q]], null],
   ];
   test.each(forms)("%s", (_label, spans, loads, supports) => {

@@ -61,8 +61,8 @@ function check(m: ValidMember): void {
   if (v.kind === "trusted") tally.trusted++;
   if (v.kind === "other") throw new Error(`neither a result nor a coded error: ${v.detail}`);
   if (v.kind === "refused") {
-    // Mechanisms are refused for their own reason; anything else must say why it refused.
-    if (!/free to move|mechanism|unstable|trustworthy|reliabl|too large|too small/.test(v.message)) throw new Error(`refused without saying why: ${v.message}`);
+    // Mechanisms are refused for their own reason, and so is a combination that selects none of the loads; anything else must say why it refused.
+    if (!/free to move|mechanism|unstable|trustworthy|reliabl|too large|too small|selects no load/.test(v.message)) throw new Error(`refused without saying why: ${v.message}`);
     return;
   }
   if (v.force > tolerance.EQUILIBRIUM_TOLERANCE || v.moment > tolerance.EQUILIBRIUM_TOLERANCE) {

@@ -1,4 +1,4 @@
-import { readSpans, readStiffness } from "../../src/sheet/lists";
+import { MAX_SPANS, readSpans, readStiffness } from "../../src/sheet/lists";
 
 describe("readSpans", () => {
   test.each([
@@ -8,7 +8,7 @@ describe("readSpans", () => {
     ["text cell with commas", [["4.5,3"]], [4.5, 3]],
     ["single number", [[7.25]], [7.25]],
     ["bare number (Node caller)", 5, [5]],
-    ["trailing blanks in all three forms", [[6, 8, "", null, 0]], [6, 8]],
+    ["trailing empty cells", [[6, 8, "", null]], [6, 8]],
   ])("%s", (_label, arg, expected) => {
     expect(readSpans(arg)).toEqual(expected);
   });
@@ -18,6 +18,8 @@ describe("readSpans", () => {
     ["omitted", null, /spans: give at least one span length/],
     ["blank inside", [[6, "", 8]], /spans entry 2: the cell is blank; give a number/],
     ["zero inside", [[6, 0, 8]], /spans entry 2: a span length must be positive, got 0/],
+    ["a trailing 0 (a computed 0 must not drop a span: issue 11)", [[6, 8, 0]], /spans entry 3: a span length must be positive, got 0/],
+    ["a single 0", [[0]], /spans entry 1: a span length must be positive, got 0/],
     ["negative", [["6 -2"]], /spans entry 2: a span length must be positive, got -2/],
     ["text", [[6, "eight"]], /spans entry 2: "eight" is not a number/],
     ["unit in text", [["6m 8m"]], /spans entry 1: "6m" is not a number/],
@@ -26,6 +28,12 @@ describe("readSpans", () => {
     ["block", [[6, 8], [6, 8]], /spans: give a single row or column/],
   ])("%s is an error", (_label, arg, message) => {
     expect(() => readSpans(arg)).toThrow(message);
+  });
+
+  test("at most 10,000 spans (MAX_SPANS): a row of that many is read, one more is #VALUE! naming the limit", () => {
+    expect(readSpans([new Array(MAX_SPANS).fill(1)])).toHaveLength(MAX_SPANS);
+    expect(() => readSpans([new Array(MAX_SPANS + 1).fill(1)])).toThrow(`spans: ${MAX_SPANS + 1} spans; a member has at most ${MAX_SPANS}`);
+    expect(() => readSpans(Array(200001).fill("6").join(" "))).toThrow(/a member has at most 10000/);
   });
 });
 
@@ -38,6 +46,8 @@ describe("readStiffness", () => {
     ["one value for the member", [[20000]], 3, [20000, 20000, 20000]],
     ["one per span", [[1, 2, "3"]], 3, [1, 2, 3]],
     ["text cell", [["1e4 2e4"]], 2, [10000, 20000]],
+    ["blank cells beyond the spans' count", [[20000, "", 0]], 1, [20000]],
+    ["one value per span, range wider than the member", [[1, 2, 0, ""]], 2, [1, 2]],
   ])("%s", (_label, arg, spans, expected) => {
     expect(readStiffness(arg, spans)).toEqual(expected);
   });
@@ -46,6 +56,12 @@ describe("readStiffness", () => {
     ["wrong count", [[1, 2]], 3, /EI: give one value for the member or one per span \(3\), got 2/],
     ["text", [["stiff"]], 1, /EI entry 1: "stiff" is not a number/],
     ["error value", [[{ code: "#N/A" }]], 1, /EI entry 1: the cell holds the error #N\/A/],
+    ["{20000, 0} for two spans is not uniform EI (issue 11)", [[20000, 0]], 2, /EI entry 2: EI must be positive, got 0/],
+    ["one EI cell of two blank", [[20000, ""]], 2, /EI entry 2: the cell is blank; give a number/],
+    ["one EI cell of three blank", [[20000, "", 30000]], 3, /EI entry 2: the cell is blank; give a number/],
+    ["two cells for three spans, the second blank", [[20000, ""]], 3, /EI entry 2: the cell is blank or 0; give one EI per span \(3\)/],
+    ["a 0 for the whole member among blanks", [[0, 5, 0]], 3, /EI entry 1: EI must be positive, got 0/],
+    ["negative", [[-5]], 1, /EI entry 1: EI must be positive, got -5/],
   ])("%s is an error", (_label, arg, spans, message) => {
     expect(() => readStiffness(arg, spans)).toThrow(message);
   });

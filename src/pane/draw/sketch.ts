@@ -63,7 +63,7 @@ export function sketchSvg(member: Member, layout: Layout, units: SketchUnits, c:
   const peakOf = (l: Load): number => Math.max(Math.abs(l.magnitude), Math.abs(l.magnitudeEnd));
   const totalPeak = distributed.reduce((sum, l) => sum + peakOf(l), 0);
   const room = y - layout.sketch.top - 22;
-  const scale = totalPeak > 0 ? Math.min(22 / Math.max(...distributed.map(peakOf)), (room - 12 * distributed.length - 14) / totalPeak) : 0;
+  const scale = totalPeak > 0 ? Math.min(22 / distributed.reduce((most, l) => Math.max(most, peakOf(l)), 0), (room - 12 * distributed.length - 14) / totalPeak) : 0;
   let base = y - 3;
   for (const load of distributed) {
     const x0 = x(load.xStart);
@@ -96,7 +96,7 @@ export function sketchSvg(member: Member, layout: Layout, units: SketchUnits, c:
   }
 
   const points = member.loads.filter((l) => l.kind === "point");
-  const maxPoint = Math.max(0, ...points.map((l) => Math.abs(l.magnitude)));
+  const maxPoint = points.reduce((most, l) => Math.max(most, Math.abs(l.magnitude)), 0);
   for (const load of points) {
     const px = x(load.xStart);
     const down = load.magnitude >= 0;
