@@ -19,8 +19,9 @@
  * documented error codes (https://learn.microsoft.com/office/dev/add-ins/testing/application-specific-api-error-handling).
  * Optional requirement sets (requirements.ts) are checked before the API that needs them.
  */
+import { parseBlock } from "./addresses";
 import { isDarkColour } from "./draw/palette";
-import { SheetHostError, splitAddress, type CellInput, type CellValue, type ChartRequest, type Selection, type SheetHost } from "./host";
+import { SheetHostError, qualify, splitAddress, type CellInput, type CellValue, type ChartRequest, type Selection, type SheetHost } from "./host";
 import { addressKey, nameKey, planReads, rangeOfNameFormula } from "./readAhead";
 import { BASELINE, OPTIONAL, missingSetMessage, officeRequirements, type Feature, type IsSetSupported } from "./requirements";
 
@@ -245,6 +246,61 @@ export class OfficeHost implements SheetHost {
       await context.sync();
       return spill.isNullObject ? undefined : spill.address;
     });
+  }
+
+  /**
+   * The formulas outside the range whose results spill into it (writeBack.ts refuses such a
+   * write before any question or clear: a clear cannot remove spilled values, and a write
+   * there breaks the other formula with #SPILL!).
+   *
+   * One sync. A spill is a rectangle whose top-left cell is its formula's cell (the
+   * documentation's example: G4 holding `=A4:D4` spills to "G4:J4"; "Handle dynamic arrays and
+   * spilling using the Excel JavaScript API",
+   * https://learn.microsoft.com/office/dev/add-ins/excel/excel-add-ins-ranges-dynamic-arrays).
+   * So a spill from a cell outside the range that covers any cell of it covers the top-left
+   * cell of the overlap, which lies in the range's first row or first column; asking those
+   * cells alone finds every such formula, also where the spilled values are "" (which a
+   * values read cannot tell from an empty cell). `Range.getSpillParentOrNullObject` answers
+   * for one cell only (a null object for several; ExcelApi 1.12 in the office-js reference,
+   * https://learn.microsoft.com/javascript/api/excel/excel.range#excel-excel-range-getspillparentornullobject-member(1)),
+   * so one look-up per edge cell is queued: rows + columns - 1 of them (105 + 5 - 1 for a
+   * diagram table), all in the same batch.
+   *
+   * Without ExcelApi 1.12 the answer is [] and nothing is asked: a host without that set has
+   * no dynamic arrays, hence no spills (the read-back after writing stays the safety net).
+   */
+  async spillsInto(address: string): Promise<string[]> {
+    if (!this.has(OPTIONAL.spill)) return [];
+    const { sheet, address: cells } = splitAddress(address);
+    const block = parseBlock(cells.replace(/\$/g, ""));
+    const rows = block.to.row - block.from.row + 1;
+    const cols = block.to.col - block.from.col + 1;
+    try {
+      return await this.run(async (context) => {
+        const range = this.range(context, address);
+        const edge: [number, number][] = [];
+        for (let c = 0; c < cols; c++) edge.push([0, c]);
+        for (let r = 1; r < rows; r++) edge.push([r, 0]);
+        const parents = edge.map(([r, c]) => {
+          const parent = range.getCell(r, c).getSpillParentOrNullObject();
+          parent.load("address");
+          return parent;
+        });
+        await context.sync();
+        const found = new Set<string>();
+        for (const parent of parents) {
+          if (parent.isNullObject) continue;
+          const at = splitAddress(parent.address);
+          const cell = at.address.replace(/\$/g, "");
+          const { row, col } = parseBlock(cell).from;
+          const inside = row >= block.from.row && row <= block.to.row && col >= block.from.col && col <= block.to.col;
+          if (!inside) found.add(qualify(at.sheet ?? sheet ?? "", cell));
+        }
+        return [...found];
+      });
+    } catch (error) {
+      throw hostFailure(error, `${address} could not be checked for spilled results before writing`, address);
+    }
   }
 
   async isEmpty(address: string): Promise<boolean> {

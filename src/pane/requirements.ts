@@ -32,7 +32,11 @@ export const DOCUMENT_EVENTS: Feature = { name: "DocumentEvents", version: "1.1"
 
 /** Optional features, checked before use. */
 export const OPTIONAL = {
-  /** `A1#` arguments: `Range.getSpillingToRangeOrNullObject`. */
+  /**
+   * Dynamic arrays: `A1#` arguments (`Range.getSpillingToRangeOrNullObject`, refused without
+   * the set) and the check before a write (`Range.getSpillParentOrNullObject`; without the set
+   * there are no spills to break, so the check answers "none").
+   */
   spill: { name: "ExcelApi", version: "1.12", feature: "reading a spilled range (A1#)" },
   /** Charts with x values and extra series: `ChartSeries.setXAxisValues`, `setValues`, `ChartSeriesCollection.add`. */
   chartSeries: { name: "ExcelApi", version: "1.7", feature: "inserting charts" },

@@ -11,7 +11,7 @@
  */
 import { extremes } from "../../src/core";
 import { sheetExtremes } from "../../src/sheet";
-import { SheetHostError } from "../../src/pane/host";
+import { SheetHostError, type CellValue } from "../../src/pane/host";
 import { findMember, solveMember, type Lookup } from "../../src/pane/memberFromSheet";
 import { OfficeHost, type OfficeLike } from "../../src/pane/officeHost";
 import { chartRequests, planTable, writeTable } from "../../src/pane/writeBack";
@@ -270,5 +270,92 @@ describe("OfficeHost: a write aimed at a sheet that is gone", () => {
   it("the check before writing rejects with ItemNotFound and the range, as a SheetHostError", async () => {
     const { host } = officeFor(beamBook());
     await expect(host.isEmpty("Gone!N3:R107")).rejects.toMatchObject({ name: "SheetHostError", code: "ItemNotFound", address: "Gone!N3:R107", message: expect.stringMatching(/^Gone!N3:R107 could not be checked before writing: the sheet or range no longer exists/) });
+  });
+});
+
+describe("OfficeHost: a write never breaks another formula's spill", () => {
+  // Range.getSpillParentOrNullObject (ExcelApi 1.12; one cell at a time, a null object for a
+  // cell no formula spills into) and the shape of a spill (a rectangle with the formula's cell
+  // at its top-left: G4 holding =A4:D4 spills to "G4:J4"), from "Handle dynamic arrays and
+  // spilling using the Excel JavaScript API",
+  // https://learn.microsoft.com/office/dev/add-ins/excel/excel-add-ins-ranges-dynamic-arrays,
+  // and the office-js reference of Excel.Range. The table's target here is Beam!N3:R107.
+  async function plan(host: OfficeHost) {
+    const lookup = await selectionChange(host);
+    if (!lookup.ok) throw new Error(lookup.message);
+    return planTable(lookup.member, "Beam!H3:L6", 104, 101, undefined);
+  }
+  const seq = (rows: number, cols: number, value: CellValue = 1): CellValue[][] => Array.from({ length: rows }, () => Array.from({ length: cols }, () => value));
+
+  it.each([
+    ["from the left, over the first column", (b: FakeWorkbook) => b.putSpill("Beam!M10", "=SEQUENCE(3,3)", seq(3, 3)), ["Beam!M10"]],
+    ["from above, over the first row", (b: FakeWorkbook) => b.putSpill("Beam!P1", "=SEQUENCE(5)", seq(5, 1)), ["Beam!P1"]],
+    ["from above and left, over the corner", (b: FakeWorkbook) => b.putSpill("Beam!L1", "=SEQUENCE(4,4)", seq(4, 4)), ["Beam!L1"]],
+    ["of empty texts (values that read as empty cells)", (b: FakeWorkbook) => b.putSpill("Beam!A50", "=IF(B50:Q51>0,\"\",\"\")", seq(2, 16, "")), ["Beam!A50"]],
+    [
+      "two formulas",
+      (b: FakeWorkbook) => b.putSpill("Beam!P1", "=SEQUENCE(5)", seq(5, 1)).putSpill("Beam!K100", "=SEQUENCE(2,8)", seq(2, 8)),
+      ["Beam!P1", "Beam!K100"],
+    ],
+  ])("a spill %s: writeTable refuses naming the formula's cell; nothing asked, cleared or written", async (_name, setup, cells) => {
+    const book = beamBook();
+    setup(book);
+    const { host } = officeFor(book);
+    const p = await plan(host);
+    expect((await host.spillsInto("Beam!N3:R107")).sort()).toEqual([...cells].sort());
+    const before = JSON.stringify([...book.sheet("Beam").cells]);
+    const questions: string[] = [];
+    const outcome = await writeTable(host, p, async (q) => (questions.push(q), true));
+    expect(outcome.written).toBe(false);
+    if (!outcome.written) for (const cell of cells) expect(outcome.reason).toContain(cell);
+    if (!outcome.written) expect(outcome.reason).toMatch(/#SPILL!/);
+    expect(questions).toEqual([]);
+    expect(JSON.stringify([...book.sheet("Beam").cells])).toBe(before);
+    expect([...book.sheet("Beam").cells.values()].some((cell) => cell.value === "#SPILL!")).toBe(false);
+  });
+
+  it("the fake models the harm being prevented: a write into another formula's spill breaks it (#SPILL!)", async () => {
+    const book = beamBook().putSpill("Beam!M10", "=SEQUENCE(3,3)", seq(3, 3));
+    const { host } = officeFor(book);
+    await host.writeBlock("Beam!N11", [["x"]]);
+    expect(book.sheet("Beam").cells.get("M10")).toEqual({ value: "#SPILL!", formula: "=SEQUENCE(3,3)" });
+  });
+
+  it("a spill whose formula lies inside the target is not reported (the write asks, then replaces the formula)", async () => {
+    // On the edge the check asks about (N60 in the first column, R3 in the first row, spilling out of the target) and inside (Q106).
+    const book = beamBook().putSpill("Beam!N60", "=SEQUENCE(3,2)", seq(3, 2)).putSpill("Beam!R3", "=SEQUENCE(1,3)", seq(1, 3)).putSpill("Beam!Q106", "=SEQUENCE(5)", seq(5, 1));
+    const { host } = officeFor(book);
+    const p = await plan(host);
+    expect(await host.spillsInto("Beam!N3:R107")).toEqual([]);
+    const questions: string[] = [];
+    expect(await writeTable(host, p, async (q) => (questions.push(q), true))).toEqual({ written: true, address: "Beam!N3:R107" });
+    expect(questions).toEqual(["Beam!N3:R107 already holds something. Write the diagram table over it?"]);
+    expect(book.sheet("Beam").cells.get("N4")?.formula).toBe("=SPAN.DIAGRAM(B3:C3,loadTable,101,B4:D4,B5,B6)");
+  });
+
+  it("one sync, also for an empty target and a spill elsewhere; addresses sheet-qualified and deduplicated", async () => {
+    const book = beamBook().putSpill("Beam!A1", "=SEQUENCE(2,2)", seq(2, 2));
+    const { host } = officeFor(book);
+    book.syncs = 0;
+    expect(await host.spillsInto("Beam!N3:R107")).toEqual([]);
+    expect(book.syncs).toBe(1);
+    book.putSpill("'Load table'!B20", "=SEQUENCE(4,4)", seq(4, 4));
+    book.syncs = 0;
+    // Every cell of C21:E23 is spilled from B20: one entry, quoted as the host's other addresses are.
+    expect(await host.spillsInto("'Load table'!C21:E23")).toEqual(["'Load table'!B20"]);
+    expect(book.syncs).toBe(1);
+  });
+
+  it("without ExcelApi 1.12 the answer is [] with no round trip and no exception (no dynamic arrays, no spills)", async () => {
+    const book = beamBook();
+    const { host } = officeFor(book, (name, version) => `${name} ${version}` !== "ExcelApi 1.12");
+    book.syncs = 0;
+    await expect(host.spillsInto("Beam!N3:R107")).resolves.toEqual([]);
+    expect(book.syncs).toBe(0);
+  });
+
+  it("a host failure is a SheetHostError naming the range", async () => {
+    const { host } = officeFor(beamBook());
+    await expect(host.spillsInto("Gone!N3:R107")).rejects.toMatchObject({ name: "SheetHostError", code: "ItemNotFound", address: "Gone!N3:R107", message: expect.stringMatching(/^Gone!N3:R107 could not be checked for spilled results before writing: the sheet or range no longer exists/) });
   });
 });

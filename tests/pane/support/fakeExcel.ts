@@ -5,6 +5,12 @@
  * as office.js does with PropertyNotLoaded), writes are queued and applied at the sync, and
  * a failing operation rejects the sync with an error carrying a `code` from Excel.ErrorCodes.
  * Every sync is counted: that is the round-trip count the tests bound.
+ * Spills as the dynamic-arrays page describes them: a formula cell's result fills a rectangle
+ * with that cell at its top-left (`getSpillingToRangeOrNullObject` on the formula's cell gives
+ * it), `getSpillParentOrNullObject` on one cell of it gives the formula's cell (a null object
+ * for a cell outside every spill, and for a range of more than one cell), and a write into a
+ * spilled cell other than the formula's breaks the formula: its cell shows #SPILL! and the
+ * spill is gone (https://learn.microsoft.com/office/dev/add-ins/excel/excel-add-ins-ranges-dynamic-arrays).
  * Source of the rules: https://learn.microsoft.com/office/dev/add-ins/develop/application-specific-api-model
  * ("load", "sync", "*OrNullObject methods and properties").
  */
@@ -92,6 +98,34 @@ export class FakeWorkbook {
     const { sheet = "Sheet1", address: at } = splitAddress(address);
     this.sheet(sheet).cells.set(at, { value, formula });
     return this;
+  }
+
+  /** A formula at "Sheet!J3" whose result `rows` spills from there (right and down). */
+  putSpill(address: string, formula: string, rows: CellValue[][]): this {
+    const { sheet = "Sheet1", address: at } = splitAddress(address);
+    const from = parseBlock(at).from;
+    this.put(address, rows);
+    this.putFormula(address, formula, rows[0][0]);
+    const to = { row: from.row + rows.length - 1, col: from.col + Math.max(...rows.map((r) => r.length)) - 1 };
+    this.sheet(sheet).spills.set(at, blockText({ from, to }));
+    return this;
+  }
+
+  /** The formula cell ("J3") whose spill covers the cell, or undefined. */
+  spillParent(sheet: FakeSheet, row: number, col: number): string | undefined {
+    for (const [anchor, range] of sheet.spills) {
+      const block = parseBlock(range);
+      if (row >= block.from.row && row <= block.to.row && col >= block.from.col && col <= block.to.col) return anchor;
+    }
+    return undefined;
+  }
+
+  /** The spill of the formula at `anchor` goes (its formula cell overwritten or cleared, or the spill blocked): its spilled values with it. */
+  dropSpill(sheet: FakeSheet, anchor: string): void {
+    const range = sheet.spills.get(anchor);
+    if (range === undefined) return;
+    for (const cell of cellsOf(parseBlock(range))) if (a1(cell.row, cell.col) !== anchor) sheet.cells.delete(a1(cell.row, cell.col));
+    sheet.spills.delete(anchor);
   }
 
   select(address: string, range = splitAddress(address).address): this {
@@ -238,6 +272,13 @@ class RangeProxy extends FakeProxy<RangeTarget> {
         row.forEach((input, c) => {
           if (input === null) return;
           const at = a1(t.block.from.row + r, t.block.from.col + c);
+          const parent = this.context.book.spillParent(t.sheet, t.block.from.row + r, t.block.from.col + c);
+          if (parent !== undefined) {
+            // Over the formula's own cell the spill goes with the formula; elsewhere the write
+            // blocks the other formula's spill: its values go, its cell shows #SPILL!.
+            this.context.book.dropSpill(t.sheet, parent);
+            if (parent !== at) t.sheet.cells.set(parent, { value: "#SPILL!", formula: t.sheet.cells.get(parent)?.formula });
+          }
           t.sheet.cells.set(at, typeof input === "string" && input.startsWith("=") ? { value: 0, formula: input } : { value: input as CellValue });
         }),
       );
@@ -266,12 +307,29 @@ class RangeProxy extends FakeProxy<RangeTarget> {
     });
   }
 
+  getSpillParentOrNullObject(): RangeProxy {
+    return new RangeProxy(this.context, () => {
+      const t = this.target();
+      if (!t) return null;
+      if (t.block.from.row !== t.block.to.row || t.block.from.col !== t.block.to.col) return null;
+      const parent = this.context.book.spillParent(t.sheet, t.block.from.row, t.block.from.col);
+      return parent === undefined ? null : { sheet: t.sheet, block: parseBlock(parent) };
+    });
+  }
+
   clear(_applyTo: string): void {
     this.context.enqueue(() => {
       const t = this.target();
       if (!t) throw new FakeExcelError("InvalidReference", "null range");
       this.context.book.checkWrite(t.sheet, t.block);
-      for (const { row, col } of cellsOf(t.block)) t.sheet.cells.delete(a1(row, col));
+      const inBlock = (cell: string): boolean => overlaps(parseBlock(cell), t.block);
+      for (const { row, col } of cellsOf(t.block)) {
+        // Values spilled from a formula outside the range cannot be cleared: the formula fills them again.
+        const parent = this.context.book.spillParent(t.sheet, row, col);
+        if (parent !== undefined && !inBlock(parent)) continue;
+        this.context.book.dropSpill(t.sheet, a1(row, col));
+        t.sheet.cells.delete(a1(row, col));
+      }
     });
   }
 
