@@ -19,6 +19,15 @@ export interface EngineContext {
   mismatched: Map<string, CellAddress>;
   /** Called once per SPAN evaluation (progress reporting). */
   onCall?: () => void;
+  /** The plain text a cell holds as typed (not a formula), for size prediction. */
+  textAt?: (address: CellAddress) => string | undefined;
+  /**
+   * Results computed in a size other than reserved, kept until the cell is set again with the
+   * learned size: the second evaluation hands them back instead of calling the function again.
+   */
+  computed: Map<string, { args: string; result: unknown }>;
+  /** Spill sizes reserved from a prediction that read another cell (see spanPlugin.ts). */
+  reserved: Map<string, BlockSize>;
 }
 
 export function cellKey(address: CellAddress): string {

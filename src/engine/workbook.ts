@@ -15,6 +15,7 @@ import { cellKey, attachContext, type CellAddress, type EngineContext } from "./
 import { columnLetters, expandSpillReferences, hasSpillReference, normalizeFormula } from "./formulaText";
 import type { BlockSize } from "./resultSize";
 import { registerSpanPlugin } from "./spanPlugin";
+import { registerSinglePlugin } from "./singlePlugin";
 import { SPAN_EXPORTS } from "./spanFunctions";
 
 /** What a cell holds as typed: text starting with "=" is a formula. */
@@ -41,6 +42,12 @@ export interface WorkbookOptions {
 
 const MAX_PASSES = 8;
 
+/**
+ * The spreadsheet host's sheet size (Microsoft support, "Excel specifications and limits":
+ * 1,048,576 rows by 16,384 columns); the formula engine's own default is 40,000 rows.
+ */
+export const SHEET_LIMITS = { rows: 1_048_576, cols: 16_384 } as const;
+
 export function isCellError(value: unknown): value is CellErrorValue {
   return typeof value === "object" && value !== null && "error" in value;
 }
@@ -53,8 +60,19 @@ export class SpanWorkbook {
 
   constructor(sheets: readonly SheetInput[], options: WorkbookOptions = {}) {
     registerSpanPlugin();
+    registerSinglePlugin();
+    for (const sheet of sheets) {
+      const widest = sheet.cells.reduce((most, row) => Math.max(most, row?.length ?? 0), 0);
+      if (sheet.cells.length > SHEET_LIMITS.rows || widest > SHEET_LIMITS.cols) {
+        throw new RangeError(`sheet "${sheet.name}" is larger than a spreadsheet allows (${SHEET_LIMITS.rows} rows, ${SHEET_LIMITS.cols} columns)`);
+      }
+    }
     this.hf = HyperFormula.buildEmpty({
       licenseKey: "gpl-v3",
+      maxRows: SHEET_LIMITS.rows,
+      maxColumns: SHEET_LIMITS.cols,
+      // Nothing here is ever undone: no undo history to keep (and scan) per change.
+      undoLimit: 0,
       useArrayArithmetic: true,
       evaluateNullToZero: true,
       // Values leave the engine exactly as computed (no rounding to 10 digits on export).
@@ -62,8 +80,17 @@ export class SpanWorkbook {
       // Text such as "6 8 6" (a spans list) stays text: no dates are read from typed text.
       parseDateTime: () => undefined,
     });
-    this.context = { functions: options.functions ?? SPAN_EXPORTS, learned: new Map(), mismatched: new Map(), onCall: options.onSpanCall };
+    this.context = {
+      functions: options.functions ?? SPAN_EXPORTS,
+      learned: new Map(),
+      mismatched: new Map(),
+      computed: new Map(),
+      reserved: new Map(),
+      onCall: options.onSpanCall,
+      textAt: (address) => this.textAt(address),
+    };
     attachContext(this.hf.dependencyGraph, this.context);
+    this.building = sheets;
     this.hf.batch(() => {
       for (const sheet of sheets) {
         const name = this.hf.addSheet(sheet.name);
@@ -72,7 +99,21 @@ export class SpanWorkbook {
         this.hf.setSheetContent(id, cells);
       }
     });
+    this.building = undefined;
     this.settle();
+  }
+
+  /** While the sheets are first read, their inputs; afterwards the engine's value cells. */
+  private building: readonly SheetInput[] | undefined;
+
+  private textAt(address: CellAddress): string | undefined {
+    const input = this.building ? this.building[address.sheet]?.cells[address.row]?.[address.col] : this.valueAt(address);
+    return typeof input === "string" && !input.startsWith("=") ? input : undefined;
+  }
+
+  private valueAt(address: CellAddress): unknown {
+    const vertex = (this.hf.dependencyGraph as unknown as { getCell(a: CellAddress): unknown }).getCell(address) as { getValues?: () => { rawValue: unknown } } | undefined;
+    return vertex && typeof vertex.getValues === "function" ? vertex.getValues().rawValue : undefined;
   }
 
   sheetNames(): string[] {
@@ -91,16 +132,16 @@ export class SpanWorkbook {
     return { rows: height, cols: width };
   }
 
-  /** Sets cells from a top-left corner, then recalculates what depends on them. */
+  /**
+   * Sets cells from a top-left corner, then recalculates what depends on them. The block goes
+   * to the engine in one call (many single-cell calls in one batch cost quadratic time).
+   */
   setCells(sheet: number, top: number, left: number, block: readonly (readonly CellInput[])[]): void {
-    this.hf.batch(() => {
-      block.forEach((row, r) =>
-        row.forEach((input, c) => {
-          const address = { sheet, row: top + r, col: left + c };
-          this.hf.setCellContents(address, [[this.prepare(address, input)]]);
-        }),
-      );
-    });
+    const prepared = block.map((row, r) => Array.from(row, (input, c) => this.prepare({ sheet, row: top + r, col: left + c }, input)));
+    const width = prepared[0]?.length ?? 0;
+    if (width === 0) return;
+    if (prepared.every((row) => row.length === width)) this.hf.setCellContents({ sheet, row: top, col: left }, prepared as never);
+    else this.hf.batch(() => prepared.forEach((row, r) => row.length > 0 && this.hf.setCellContents({ sheet, row: top + r, col: left }, [row] as never)));
     this.settle();
   }
 
