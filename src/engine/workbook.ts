@@ -38,6 +38,8 @@ export interface WorkbookOptions {
   functions?: SpanFunctions;
   /** Called once per SPAN function evaluation (for progress bars). */
   onSpanCall?: () => void;
+  /** Defined names: workbook-wide, or local to the sheet of index `localSheet`. */
+  names?: readonly { name: string; formula: string; localSheet?: number }[];
 }
 
 const MAX_PASSES = 8;
@@ -92,15 +94,27 @@ export class SpanWorkbook {
     attachContext(this.hf.dependencyGraph, this.context);
     this.building = sheets;
     this.hf.batch(() => {
-      for (const sheet of sheets) {
-        const name = this.hf.addSheet(sheet.name);
-        const id = this.sheetId(name);
+      const ids = sheets.map((sheet) => this.sheetId(this.hf.addSheet(sheet.name)));
+      this.addNames(options.names ?? [], ids);
+      for (const [index, sheet] of sheets.entries()) {
+        const id = ids[index];
         const cells = sheet.cells.map((row, r) => row.map((input, c) => this.prepare({ sheet: id, row: r, col: c }, input)));
         this.hf.setSheetContent(id, cells);
       }
     });
     this.building = undefined;
     this.settle();
+  }
+
+  private addNames(names: NonNullable<WorkbookOptions["names"]>, ids: readonly number[]): void {
+    for (const { name, formula, localSheet } of names) {
+      // Built-in names (_xlnm.Print_Area and the like) are no formulas' business.
+      if (name.startsWith("_xlnm.") || formula.trim() === "") continue;
+      const expression = normalizeFormula(`=${formula}`);
+      const scope = localSheet === undefined ? undefined : ids[localSheet];
+      if (localSheet !== undefined && scope === undefined) continue;
+      if (this.hf.isItPossibleToAddNamedExpression(name, expression, scope)) this.hf.addNamedExpression(name, expression, scope);
+    }
   }
 
   /** While the sheets are first read, their inputs; afterwards the engine's value cells. */
