@@ -141,7 +141,7 @@ function readCell(xml: string, open: number, tag: string, close: number, row: nu
 }
 
 /** Calls back for every row and cell of the sheet, in document order. */
-export function scanSheet(xml: string, onCell: (cell: XmlCell) => void, onRow?: (row: XmlRow) => void): void {
+export function scanSheet(xml: string, onCell: (cell: XmlCell) => void, onRow?: (row: XmlRow) => void, onRowStart?: (row: XmlRow) => void): void {
   const data = sheetDataBounds(xml);
   let i = data.start;
   let rowNumber = -1;
@@ -171,6 +171,7 @@ export function scanSheet(xml: string, onCell: (cell: XmlCell) => void, onRow?: 
       col = -1;
       const prefix = tag.slice(0, tag.indexOf("row"));
       currentRow = { row: rowNumber, start: lt, tagEnd: close + 1, end: close + 1, closeStart: close + 1, selfClosing, prefix };
+      onRowStart?.(currentRow);
       if (selfClosing) {
         onRow?.(currentRow);
         currentRow = undefined;
@@ -208,22 +209,27 @@ export interface SheetEdits {
   insert: Map<number, { col: number; text: CellText }[]>;
 }
 
+/** What to change while a sheet is copied (see rewriteSheetWith). */
+export interface SheetRewrite {
+  /** New text for an existing cell ("" deletes it), or undefined to keep it. Called in document order. */
+  cell(cell: XmlCell): string | undefined;
+  /**
+   * Cells a row should hold, sorted by column; those it has already are left out when
+   * written. Called once per row, in increasing row order, before the row's cells.
+   */
+  adds(row: number): { col: number; text: CellText }[];
+  /** The first row at or after `row` that may need cells even where the sheet has no row element. */
+  nextRow(row: number): number | undefined;
+}
+
 /**
- * The sheet with the edits applied: replaced cells take their new text, added cells go into
- * their row in column order (a row element is added where none exists), every other byte is
- * copied as it was.
+ * The sheet copied in one pass with the changes applied: replaced cells take their new text,
+ * added cells go into their row in column order (a row element is added where none exists),
+ * every other byte is copied as it was.
  */
-export function rewriteSheet(xml: string, edits: SheetEdits): string {
+export function rewriteSheetWith(xml: string, hooks: SheetRewrite): string {
   const data = sheetDataBounds(xml);
-  const insertRows = [...edits.insert.keys()].sort((a, b) => a - b);
-  const newRow = (row: number): string => `<row r="${row + 1}">${edits.insert.get(row)!.map((cell) => cell.text).join("")}</row>`;
-  if (data.selfClosing) {
-    if (insertRows.length === 0) return xml;
-    const tag = tagAt(xml, data.at);
-    const prefix = tag.tag.slice(0, tag.tag.indexOf("sheetData"));
-    return `${xml.slice(0, data.at)}<${prefix}sheetData>${insertRows.map(newRow).join("")}</${prefix}sheetData>${xml.slice(tag.close + 1)}`;
-  }
-  let next = 0;
+  const newRow = (row: number, adds: readonly { text: string }[]): string => `<row r="${row + 1}">${adds.map((cell) => cell.text).join("")}</row>`;
   const out: string[] = [];
   let copied = 0;
   const copyTo = (at: number): void => {
@@ -232,49 +238,80 @@ export function rewriteSheet(xml: string, edits: SheetEdits): string {
       copied = at;
     }
   };
-  const flushRow = (row: XmlRow, cells: readonly XmlCell[]): void => {
-    while (next < insertRows.length && insertRows[next] < row.row) {
-      copyTo(row.start);
-      out.push(newRow(insertRows[next++]));
+  let done = -1;
+  const rowsBefore = (limit: number, at: number): void => {
+    for (let row = hooks.nextRow(done + 1); row !== undefined && row < limit; row = hooks.nextRow(row + 1)) {
+      const adds = hooks.adds(row);
+      done = row;
+      if (adds.length === 0) continue;
+      copyTo(at);
+      out.push(newRow(row, adds));
     }
-    const adds = next < insertRows.length && insertRows[next] === row.row ? edits.insert.get(insertRows[next++])! : [];
-    if (row.selfClosing) {
-      if (adds.length === 0) return;
-      copyTo(row.start);
-      const tag = xml.slice(row.start, row.tagEnd);
-      out.push(`${tag.slice(0, -2).trimEnd()}>${adds.map((cell) => cell.text).join("")}</${row.prefix}row>`);
-      copied = row.end;
-      return;
+  };
+  if (data.selfClosing) {
+    const tag = tagAt(xml, data.at);
+    const prefix = tag.tag.slice(0, tag.tag.indexOf("sheetData"));
+    copyTo(data.at);
+    const before = out.length;
+    copied = tag.close + 1;
+    rowsBefore(SHEET_ROWS, copied);
+    const rows = out.splice(before).join("");
+    if (rows === "") return xml;
+    return `${xml.slice(0, data.at)}<${prefix}sheetData>${rows}</${prefix}sheetData>${xml.slice(tag.close + 1)}`;
+  }
+  let pending: { col: number; text: CellText }[] = [];
+  let next = 0;
+  const emitUntil = (col: number, at: number): void => {
+    while (next < pending.length && pending[next].col < col) {
+      copyTo(at);
+      out.push(pending[next++].text);
     }
-    let a = 0;
-    for (const cell of cells) {
-      while (a < adds.length && adds[a].col < cell.col) {
-        copyTo(cell.start);
-        out.push(adds[a++].text);
-      }
-      const replacement = edits.replace.get(`${cell.row}:${cell.col}`);
+    if (next < pending.length && pending[next].col === col) next++;
+  };
+  scanSheet(
+    xml,
+    (cell) => {
+      emitUntil(cell.col, cell.start);
+      const replacement = hooks.cell(cell);
       if (replacement !== undefined) {
         copyTo(cell.start);
         out.push(replacement);
         copied = cell.end;
       }
-    }
-    if (a < adds.length) {
-      copyTo(row.closeStart);
-      while (a < adds.length) out.push(adds[a++].text);
-    }
-  };
-  let cells: XmlCell[] = [];
-  scanSheet(
-    xml,
-    (cell) => cells.push(cell),
+    },
     (row) => {
-      flushRow(row, cells);
-      cells = [];
+      if (row.selfClosing) {
+        if (next < pending.length) {
+          copyTo(row.start);
+          const tag = xml.slice(row.start, row.tagEnd);
+          out.push(`${tag.slice(0, -2).trimEnd()}>${pending.slice(next).map((cell) => cell.text).join("")}</${row.prefix}row>`);
+          copied = row.end;
+        }
+      } else emitUntil(Number.POSITIVE_INFINITY, row.closeStart);
+      pending = [];
+      next = 0;
+    },
+    (row) => {
+      rowsBefore(row.row, row.start);
+      done = row.row;
+      pending = hooks.adds(row.row);
+      next = 0;
     },
   );
   copyTo(data.end);
-  while (next < insertRows.length) out.push(newRow(insertRows[next++]));
-  out.push(xml.slice(data.end));
+  rowsBefore(SHEET_ROWS, data.end);
+  copyTo(xml.length);
   return out.join("");
+}
+
+const SHEET_ROWS = 1_048_576;
+
+/** The sheet with fixed edits applied (see rewriteSheetWith). */
+export function rewriteSheet(xml: string, edits: SheetEdits): string {
+  const rows = [...edits.insert.keys()].sort((a, b) => a - b);
+  return rewriteSheetWith(xml, {
+    cell: (cell) => edits.replace.get(`${cell.row}:${cell.col}`),
+    adds: (row) => edits.insert.get(row) ?? [],
+    nextRow: (row) => rows.find((r) => r >= row),
+  });
 }

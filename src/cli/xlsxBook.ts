@@ -19,7 +19,7 @@
  *   message rather than guessed.
  */
 import { isCellError, normalizeFormula, SHEET_LIMITS, SpanWorkbook, type CellInput, type CellResult, type SheetInput } from "../engine";
-import { parseA1, rewriteSheet, scanSheet, type SheetEdits, type XmlCell } from "./sheetXml";
+import { parseA1, rewriteSheetWith, scanSheet, type XmlCell } from "./sheetXml";
 import { shiftFormula } from "./sharedFormula";
 import { encodeXml } from "./xmlText";
 import { XlsxPackage, type DefinedName } from "./xlsxPackage";
@@ -303,6 +303,8 @@ function checkArrayRanges(sheet: string, formulas: readonly FormulaCell[], cells
  */
 export function evaluateBook(book: LoadedBook, onSpanCall?: () => void): SpanWorkbook {
   const evaluated = new SpanWorkbook(book.inputs, { onSpanCall, names: book.names });
+  // The engine holds the cells now: the read copy is let go (big schedules).
+  book.inputs.splice(0);
   book.sheets.forEach((sheet) => {
     const id = evaluated.sheetId(sheet.name);
     for (const formula of sheet.formulas) {
@@ -417,87 +419,67 @@ export function storeResults(book: LoadedBook, evaluated: SpanWorkbook, onCell?:
     const id = evaluated.sheetId(sheet.name);
     const spills: Spill[] = [];
     const oldAreas: (Rect & { anchor: FormulaCell })[] = [];
-    const formulaValues = new Map<string, { value: CellResult; ref?: string }>();
     for (const formula of sheet.formulas) {
-      let value = evaluated.getValue(id, formula.row, formula.col);
-      const refused = (formula as FormulaCell & { spilled?: { rows: number; cols: number } }).spilled;
-      const size = refused ?? evaluated.spillSize(id, formula.row, formula.col) ?? { rows: 1, cols: 1 };
       if (formula.ref) oldAreas.push({ ...formula.ref, anchor: formula });
-      let ref: string | undefined;
+      if (formula.kind === "plain") continue;
+      const size = evaluated.spillSize(id, formula.row, formula.col) ?? { rows: 1, cols: 1 };
       if (formula.kind === "dynamic") {
-        const rect = { top: formula.row, left: formula.col, bottom: formula.row + size.rows - 1, right: formula.col + size.cols - 1 };
-        ref = rectText(rect);
-        if (size.rows > 1 || size.cols > 1) spills.push({ ...rect, anchor: formula, rows: size.rows, cols: size.cols });
-      } else if (formula.kind === "legacy" && formula.ref) {
-        spills.push({ ...formula.ref, anchor: formula, rows: size.rows, cols: size.cols });
-      } else if (size.rows > 1 || size.cols > 1) {
-        value = {
-          error: "#VALUE!",
-          message: `a single-cell (legacy) formula whose result is ${size.rows} x ${size.cols} cells: the host reads it with implicit intersection, which spanwise calc does not evaluate; enter it as a dynamic array, or pick one value with INDEX`,
-        };
-      }
-      if (isCellError(value)) problems.push({ sheet: sheet.name, address: a1(formula.row, formula.col), error: value.error, message: value.message });
-      formulaValues.set(`${formula.row}:${formula.col}`, { value, ref });
-      onCell?.();
+        if (size.rows > 1 || size.cols > 1) {
+          spills.push({ top: formula.row, left: formula.col, bottom: formula.row + size.rows - 1, right: formula.col + size.cols - 1, anchor: formula, ...size });
+        }
+      } else if (formula.ref) spills.push({ ...formula.ref, anchor: formula, ...size });
     }
     const spillValue = (spill: Spill, row: number, col: number): CellResult => {
       if (row - spill.top >= spill.rows || col - spill.left >= spill.cols) return { error: "#N/A", message: "" };
       return evaluated.getValue(id, row, col);
     };
+    const formulaText = (cell: XmlCell, formula: FormulaCell): string => {
+      let value = evaluated.getValue(id, formula.row, formula.col);
+      const refused = (formula as FormulaCell & { spilled?: { rows: number; cols: number } }).spilled;
+      let ref: string | undefined;
+      if (refused) {
+        value = {
+          error: "#VALUE!",
+          message: `a single-cell (legacy) formula whose result is ${refused.rows} x ${refused.cols} cells: the host reads it with implicit intersection, which spanwise calc does not evaluate; enter it as a dynamic array, or pick one value with INDEX`,
+        };
+      } else if (formula.kind === "dynamic") {
+        const size = evaluated.spillSize(id, formula.row, formula.col) ?? { rows: 1, cols: 1 };
+        ref = rectText({ top: formula.row, left: formula.col, bottom: formula.row + size.rows - 1, right: formula.col + size.cols - 1 });
+      }
+      if (isCellError(value)) problems.push({ sheet: sheet.name, address: a1(formula.row, formula.col), error: value.error, message: value.message });
+      onCell?.();
+      return formulaCellText(sheet.xml, cell, value, ref);
+    };
     const newSweep = new RowSweep(spills);
     const oldSweep = new RowSweep(oldAreas);
-    const edits: SheetEdits = { replace: new Map(), insert: new Map() };
-    let rowCells: XmlCell[] = [];
-    let lastRow = -1;
-    let entered = -1;
-    const finishRow = (row: number, cells: readonly XmlCell[]): void => {
-      const present = new Set(cells.map((cell) => cell.col));
-      const adds: { col: number; text: string }[] = [];
-      for (const spill of newSweep.at(row)) {
-        for (let col = spill.left; col <= spill.right; col++) {
-          if ((row === spill.top && col === spill.left) || present.has(col)) continue;
-          const text = valueCellText(sheet.xml, undefined, row, col, spillValue(spill, row, col));
-          if (text) adds.push({ col, text });
-        }
-      }
-      if (adds.length > 0) edits.insert.set(row, adds.sort((a, b) => a.col - b.col));
-    };
-    const rowsBetween = (from: number, to: number): void => {
-      for (let row = newSweep.nextRow(from); row !== undefined && row < to; row = newSweep.nextRow(row + 1)) finishRow(row, []);
-    };
-    const enterRow = (row: number): void => {
-      if (row <= entered) return;
-      rowsBetween(lastRow + 1, row);
-      entered = row;
-    };
-    scanSheet(
-      sheet.xml,
-      (cell) => {
-        enterRow(cell.row);
-        rowCells.push(cell);
-        const key = `${cell.row}:${cell.col}`;
-        const formula = formulaValues.get(key);
-        if (formula) {
-          edits.replace.set(key, formulaCellText(sheet.xml, cell, formula.value, formula.ref));
-          return;
+    let nextFormula = 0;
+    const xml = rewriteSheetWith(sheet.xml, {
+      cell: (cell) => {
+        const formula = sheet.formulas[nextFormula];
+        if (cell.formula && formula && formula.row === cell.row && formula.col === cell.col) {
+          nextFormula++;
+          return formulaText(cell, formula);
         }
         const spill = newSweep.at(cell.row) && newSweep.find(cell.col);
-        if (spill) {
-          edits.replace.set(key, valueCellText(sheet.xml, cell, cell.row, cell.col, spillValue(spill, cell.row, cell.col)));
-          return;
-        }
+        if (spill) return valueCellText(sheet.xml, cell, cell.row, cell.col, spillValue(spill, cell.row, cell.col));
         oldSweep.at(cell.row);
-        if (oldSweep.find(cell.col)) edits.replace.set(key, valueCellText(sheet.xml, cell, cell.row, cell.col, null));
+        if (oldSweep.find(cell.col)) return valueCellText(sheet.xml, cell, cell.row, cell.col, null);
+        return undefined;
       },
-      (row) => {
-        enterRow(row.row);
-        finishRow(row.row, rowCells);
-        rowCells = [];
-        lastRow = row.row;
+      adds: (row) => {
+        const adds: { col: number; text: string }[] = [];
+        for (const spill of newSweep.at(row)) {
+          for (let col = spill.left; col <= spill.right; col++) {
+            if (row === spill.top && col === spill.left) continue;
+            const text = valueCellText(sheet.xml, undefined, row, col, spillValue(spill, row, col));
+            if (text) adds.push({ col, text });
+          }
+        }
+        return adds;
       },
-    );
-    rowsBetween(lastRow + 1, SHEET_LIMITS.rows);
-    book.pkg.setPart(sheet.path, rewriteSheet(sheet.xml, edits));
+      nextRow: (row) => newSweep.nextRow(row),
+    });
+    book.pkg.setPart(sheet.path, xml);
   });
   return { problems };
 }

@@ -40,9 +40,22 @@ export function callKey(address: CellAddress, callText: string): string {
 
 const contexts = new WeakMap<object, EngineContext>();
 
+/** The context of a workbook whose engine is being built (before its graph can be attached). */
+let building: EngineContext | undefined;
+
 /** The context of the workbook that owns `owner` (the engine's dependency graph). */
 export function contextOf(owner: object): EngineContext | undefined {
-  return contexts.get(owner);
+  return contexts.get(owner) ?? building;
+}
+
+export function buildingWith<T>(context: EngineContext, build: () => T): T {
+  const outer = building;
+  building = context;
+  try {
+    return build();
+  } finally {
+    building = outer;
+  }
 }
 
 export function attachContext(owner: object, context: EngineContext): void {

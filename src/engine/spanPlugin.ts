@@ -34,8 +34,16 @@ function sizeMethodName(entry: SpanFunctionEntry): string {
   return `size_${entry.exportName}`;
 }
 
+/** The engine shares one syntax tree among formulas of the same shape: its text is made once. */
+const callTexts = new WeakMap<CallNode, string>();
+
 function callText(node: CallNode): string {
-  return `${node.procedureName}${JSON.stringify(node.args)}`;
+  let text = callTexts.get(node);
+  if (text === undefined) {
+    text = `${node.procedureName}${JSON.stringify(node.args)}`;
+    callTexts.set(node, text);
+  }
+  return text;
 }
 
 class SpanPlugin extends FunctionPlugin {

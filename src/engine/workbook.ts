@@ -11,7 +11,7 @@
  */
 import { DetailedCellError, HyperFormula } from "hyperformula";
 import type { SpanFunctions } from "./catalogue";
-import { cellKey, attachContext, type CellAddress, type EngineContext } from "./learnedSizes";
+import { cellKey, attachContext, buildingWith, type CellAddress, type EngineContext } from "./learnedSizes";
 import { columnLetters, expandSpillReferences, hasSpillReference, normalizeFormula } from "./formulaText";
 import type { BlockSize } from "./resultSize";
 import { registerSpanPlugin } from "./spanPlugin";
@@ -50,6 +50,29 @@ const MAX_PASSES = 8;
  */
 export const SHEET_LIMITS = { rows: 1_048_576, cols: 16_384 } as const;
 
+const CONFIG = {
+  licenseKey: "gpl-v3",
+  maxRows: SHEET_LIMITS.rows,
+  maxColumns: SHEET_LIMITS.cols,
+  // Nothing here is ever undone: no undo history to keep (and scan) per change.
+  undoLimit: 0,
+  useArrayArithmetic: true,
+  evaluateNullToZero: true,
+  // Values leave the engine exactly as computed (no rounding to 10 digits on export).
+  smartRounding: false,
+  // Text such as "6 8 6" (a spans list) stays text: no dates are read from typed text.
+  parseDateTime: () => undefined,
+} as const;
+
+const NAME = /^[A-Za-z_\\][\w.]*$/;
+
+/** Defined names as the engine takes them; built-in names (_xlnm.Print_Area and the like) are no formulas' business. */
+function namedExpressions(names: NonNullable<WorkbookOptions["names"]>): { name: string; expression: string; scope?: number }[] {
+  return names
+    .filter(({ name, formula }) => NAME.test(name) && !name.startsWith("_xlnm.") && formula.trim() !== "")
+    .map(({ name, formula, localSheet }) => ({ name, expression: normalizeFormula(`=${formula}`), ...(localSheet === undefined ? {} : { scope: localSheet }) }));
+}
+
 export function isCellError(value: unknown): value is CellErrorValue {
   return typeof value === "object" && value !== null && "error" in value;
 }
@@ -69,19 +92,6 @@ export class SpanWorkbook {
         throw new RangeError(`sheet "${sheet.name}" is larger than a spreadsheet allows (${SHEET_LIMITS.rows} rows, ${SHEET_LIMITS.cols} columns)`);
       }
     }
-    this.hf = HyperFormula.buildEmpty({
-      licenseKey: "gpl-v3",
-      maxRows: SHEET_LIMITS.rows,
-      maxColumns: SHEET_LIMITS.cols,
-      // Nothing here is ever undone: no undo history to keep (and scan) per change.
-      undoLimit: 0,
-      useArrayArithmetic: true,
-      evaluateNullToZero: true,
-      // Values leave the engine exactly as computed (no rounding to 10 digits on export).
-      smartRounding: false,
-      // Text such as "6 8 6" (a spans list) stays text: no dates are read from typed text.
-      parseDateTime: () => undefined,
-    });
     this.context = {
       functions: options.functions ?? SPAN_EXPORTS,
       learned: new Map(),
@@ -91,30 +101,20 @@ export class SpanWorkbook {
       onCall: options.onSpanCall,
       textAt: (address) => this.textAt(address),
     };
-    attachContext(this.hf.dependencyGraph, this.context);
     this.building = sheets;
-    this.hf.batch(() => {
-      const ids = sheets.map((sheet) => this.sheetId(this.hf.addSheet(sheet.name)));
-      this.addNames(options.names ?? [], ids);
-      for (const [index, sheet] of sheets.entries()) {
-        const id = ids[index];
-        const cells = sheet.cells.map((row, r) => row.map((input, c) => this.prepare({ sheet: id, row: r, col: c }, input)));
-        this.hf.setSheetContent(id, cells);
-      }
+    const contents: Record<string, CellInput[][]> = {};
+    sheets.forEach((sheet, id) => {
+      if (Object.prototype.hasOwnProperty.call(contents, sheet.name)) throw new RangeError(`two sheets are named "${sheet.name}"`);
+      contents[sheet.name] = sheet.cells.map((row, r) => Array.from(row ?? [], (input, c) => this.prepare({ sheet: id, row: r, col: c }, input)));
     });
+    // Built from all sheets at once: an empty engine filled in a batch exports every change
+    // when the batch ends, and the engine joins spilled changes by copying (quadratic).
+    this.hf = buildingWith(this.context, () =>
+      HyperFormula.buildFromSheets(contents as never, CONFIG, namedExpressions(options.names ?? [])),
+    );
+    attachContext(this.hf.dependencyGraph, this.context);
     this.building = undefined;
     this.settle();
-  }
-
-  private addNames(names: NonNullable<WorkbookOptions["names"]>, ids: readonly number[]): void {
-    for (const { name, formula, localSheet } of names) {
-      // Built-in names (_xlnm.Print_Area and the like) are no formulas' business.
-      if (name.startsWith("_xlnm.") || formula.trim() === "") continue;
-      const expression = normalizeFormula(`=${formula}`);
-      const scope = localSheet === undefined ? undefined : ids[localSheet];
-      if (localSheet !== undefined && scope === undefined) continue;
-      if (this.hf.isItPossibleToAddNamedExpression(name, expression, scope)) this.hf.addNamedExpression(name, expression, scope);
-    }
   }
 
   /** While the sheets are first read, their inputs; afterwards the engine's value cells. */
@@ -193,6 +193,8 @@ export class SpanWorkbook {
 
   /** Size of the array a formula cell spills into, when it spills (more than one cell). */
   spillSize(sheet: number, row: number, col: number): BlockSize | undefined {
+    // While the engine is being built nothing has spilled yet (settle() resolves A1# after).
+    if (this.hf === undefined) return undefined;
     const vertex = (this.hf.dependencyGraph as unknown as { getCell(a: CellAddress): unknown }).getCell({ sheet, row, col }) as
       | { width?: unknown; height?: unknown; isLeftCorner?: (a: CellAddress) => boolean }
       | undefined;
@@ -246,7 +248,7 @@ export class SpanWorkbook {
   /** The typed formula as the engine takes it: saved forms normalized, `A1#` resolved. */
   private engineText(address: CellAddress, formula: string): string {
     return expandSpillReferences(normalizeFormula(formula), (reference, written) => {
-      const sheet = reference.sheetName === undefined ? address.sheet : this.hf.getSheetId(reference.sheetName);
+      const sheet = reference.sheetName === undefined ? address.sheet : this.hf?.getSheetId(reference.sheetName);
       const size = sheet === undefined ? undefined : this.spillSize(sheet, reference.row, reference.col);
       if (!size) return "#REF!";
       return `${written}:${columnLetters(reference.col + size.cols - 1)}${reference.row + size.rows}`;
