@@ -96,8 +96,11 @@ export async function calc(options: CalcOptions, io: Io): Promise<number> {
   bar?.setTotal(Math.max(1, book.formulaCount));
   bar?.update(0, { phase: "storing  " });
   let stored = 0;
-  const { problems } = storeResults(book, evaluated, bar ? () => bar.update(++stored, { phase: "storing  " }) : undefined);
+  const { problems } = await storeResults(book, evaluated, bar ? () => bar.update(++stored, { phase: "storing  " }) : undefined);
   bar?.stop();
+  const csv = options.csv === undefined ? undefined : toCsv(evaluated.getSheetValues(evaluated.sheetId(options.csv)));
+  // The engine is done: let it go before the package is compressed (big schedules).
+  evaluated.destroy();
 
   try {
     if (out !== undefined) writeFileSafely(out, await book.pkg.write(), input, options.force);
@@ -114,7 +117,6 @@ export async function calc(options: CalcOptions, io: Io): Promise<number> {
     `spanwise: evaluated ${book.formulaCount} formulas (${book.spanCallCount} SPAN calls) in ${book.sheets.length} sheets` +
       `${problems.length ? `, ${problems.length} with errors` : ""}${out ? `; wrote ${out}` : ""}${options.report ? `; report ${options.report}` : ""}\n`,
   );
-  if (options.csv !== undefined) io.stdout.write(toCsv(evaluated.getSheetValues(evaluated.sheetId(options.csv))));
-  evaluated.destroy();
+  if (csv !== undefined) io.stdout.write(csv);
   return problems.length > 0 ? EXIT.cellErrors : EXIT.ok;
 }

@@ -44,7 +44,7 @@ export async function writeDemoWorkbook(out: string, force: boolean, io: Io): Pr
   }
   const book = await readBook(await storeAsDynamicArrays(Buffer.from(await workbook.xlsx.writeBuffer())));
   const evaluated = evaluateBook(book);
-  const { problems } = storeResults(book, evaluated);
+  const { problems } = await storeResults(book, evaluated);
   evaluated.destroy();
   if (problems.length > 0) throw new Error(`the demo workbook has error cells: ${problems.map((p) => `${p.sheet}!${p.address} ${p.error} ${p.message}`).join("; ")}`);
   writeFileSafely(out, await book.pkg.write(), undefined, true);

@@ -49,8 +49,8 @@ export interface FormulaCell {
 
 export interface SheetBook {
   name: string;
+  /** The worksheet part (its text is read again when written: big sheets hold one copy at a time). */
   path: string;
-  xml: string;
   formulas: FormulaCell[];
 }
 
@@ -259,7 +259,7 @@ export async function readBook(bytes: Buffer): Promise<LoadedBook> {
     }
     checkArrayRanges(part.name, formulas, cells);
     for (let r = 0; r < cells.length; r++) cells[r] ??= [];
-    sheets.push({ name: part.name, path: part.path, xml, formulas });
+    sheets.push({ name: part.name, path: part.path, formulas });
     inputs.push({ name: part.name, cells });
   }
   return { pkg, sheets, inputs, names: pkg.definedNames(), formulaCount, spanCallCount };
@@ -413,9 +413,10 @@ export interface StoreResult {
  * Writes the engine's values into the package's sheets (see the file comment). `onCell` is
  * called once per formula cell, for progress.
  */
-export function storeResults(book: LoadedBook, evaluated: SpanWorkbook, onCell?: () => void): StoreResult {
+export async function storeResults(book: LoadedBook, evaluated: SpanWorkbook, onCell?: () => void): Promise<StoreResult> {
   const problems: CellProblem[] = [];
-  book.sheets.forEach((sheet) => {
+  for (const sheet of book.sheets) {
+    const sheetXml = (await book.pkg.part(sheet.path))!;
     const id = evaluated.sheetId(sheet.name);
     const spills: Spill[] = [];
     const oldAreas: (Rect & { anchor: FormulaCell })[] = [];
@@ -448,12 +449,12 @@ export function storeResults(book: LoadedBook, evaluated: SpanWorkbook, onCell?:
       }
       if (isCellError(value)) problems.push({ sheet: sheet.name, address: a1(formula.row, formula.col), error: value.error, message: value.message });
       onCell?.();
-      return formulaCellText(sheet.xml, cell, value, ref);
+      return formulaCellText(sheetXml, cell, value, ref);
     };
     const newSweep = new RowSweep(spills);
     const oldSweep = new RowSweep(oldAreas);
     let nextFormula = 0;
-    const xml = rewriteSheetWith(sheet.xml, {
+    const xml = rewriteSheetWith(sheetXml, {
       cell: (cell) => {
         const formula = sheet.formulas[nextFormula];
         if (cell.formula && formula && formula.row === cell.row && formula.col === cell.col) {
@@ -461,9 +462,9 @@ export function storeResults(book: LoadedBook, evaluated: SpanWorkbook, onCell?:
           return formulaText(cell, formula);
         }
         const spill = newSweep.at(cell.row) && newSweep.find(cell.col);
-        if (spill) return valueCellText(sheet.xml, cell, cell.row, cell.col, spillValue(spill, cell.row, cell.col));
+        if (spill) return valueCellText(sheetXml, cell, cell.row, cell.col, spillValue(spill, cell.row, cell.col));
         oldSweep.at(cell.row);
-        if (oldSweep.find(cell.col)) return valueCellText(sheet.xml, cell, cell.row, cell.col, null);
+        if (oldSweep.find(cell.col)) return valueCellText(sheetXml, cell, cell.row, cell.col, null);
         return undefined;
       },
       adds: (row) => {
@@ -471,7 +472,7 @@ export function storeResults(book: LoadedBook, evaluated: SpanWorkbook, onCell?:
         for (const spill of newSweep.at(row)) {
           for (let col = spill.left; col <= spill.right; col++) {
             if (row === spill.top && col === spill.left) continue;
-            const text = valueCellText(sheet.xml, undefined, row, col, spillValue(spill, row, col));
+            const text = valueCellText(sheetXml, undefined, row, col, spillValue(spill, row, col));
             if (text) adds.push({ col, text });
           }
         }
@@ -480,6 +481,7 @@ export function storeResults(book: LoadedBook, evaluated: SpanWorkbook, onCell?:
       nextRow: (row) => newSweep.nextRow(row),
     });
     book.pkg.setPart(sheet.path, xml);
-  });
+    sheet.formulas = [];
+  }
   return { problems };
 }

@@ -105,7 +105,7 @@ export class SpanWorkbook {
     const contents: Record<string, CellInput[][]> = {};
     sheets.forEach((sheet, id) => {
       if (Object.prototype.hasOwnProperty.call(contents, sheet.name)) throw new RangeError(`two sheets are named "${sheet.name}"`);
-      contents[sheet.name] = sheet.cells.map((row, r) => Array.from(row ?? [], (input, c) => this.prepare({ sheet: id, row: r, col: c }, input)));
+      contents[sheet.name] = sheet.cells.map((row, r) => this.preparedRow(id, r, row ?? []));
     });
     // Built from all sheets at once: an empty engine filled in a batch exports every change
     // when the batch ends, and the engine joins spilled changes by copying (quadratic).
@@ -115,6 +115,20 @@ export class SpanWorkbook {
     attachContext(this.hf.dependencyGraph, this.context);
     this.building = undefined;
     this.settle();
+  }
+
+  /** A row as the engine takes it: the row itself when nothing in it changes (big sheets: no copy). */
+  private preparedRow(sheet: number, row: number, cells: readonly CellInput[]): CellInput[] {
+    let out: CellInput[] | undefined;
+    for (let col = 0; col < cells.length; col++) {
+      const input = cells[col];
+      if (typeof input !== "string" || !input.startsWith("=")) continue;
+      const prepared = this.prepare({ sheet, row, col }, input);
+      if (prepared === input) continue;
+      out ??= cells.slice();
+      out[col] = prepared;
+    }
+    return out ?? (cells as CellInput[]);
   }
 
   /** While the sheets are first read, their inputs; afterwards the engine's value cells. */

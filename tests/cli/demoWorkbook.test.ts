@@ -43,7 +43,7 @@ describe("the demo workbook", () => {
     for (const sheet of book.sheets) {
       const id = evaluated.sheetId(sheet.name);
       const cells = new Map<string, XmlCell>();
-      scanSheet(sheet.xml, (cell) => cells.set(`${cell.row}:${cell.col}`, cell));
+      scanSheet((await book.pkg.part(sheet.path))!, (cell) => cells.set(`${cell.row}:${cell.col}`, cell));
       for (const cell of cells.values()) {
         const f = cell.formula;
         if (!f) continue;
