@@ -212,7 +212,7 @@ export async function readBook(bytes: Buffer): Promise<LoadedBook> {
     const cells: CellInput[][] = [];
     const formulas: FormulaCell[] = [];
     const masters = new Map<string, { row: number; col: number; text: string }>();
-    const followers: { row: number; col: number; si: string }[] = [];
+    const followers: { row: number; col: number; si: string; entry: FormulaCell }[] = [];
     const whereOf = (row: number, col: number) => `${part.name}!${a1(row, col)}`;
     try {
       scanSheet(xml, (cell) => {
@@ -224,13 +224,9 @@ export async function readBook(bytes: Buffer): Promise<LoadedBook> {
         }
         formulaCount++;
         let text = f.text;
-        if (f.type === "shared" && f.si !== undefined) {
-          if (text.trim() !== "") masters.set(f.si, { row: cell.row, col: cell.col, text });
-          else {
-            followers.push({ row: cell.row, col: cell.col, si: f.si });
-            text = "";
-          }
-        }
+        const follows = f.type === "shared" && f.si !== undefined && text.trim() === "";
+        if (f.type === "shared" && f.si !== undefined && !follows) masters.set(f.si, { row: cell.row, col: cell.col, text });
+        if (follows) text = "";
         const entry: FormulaCell = { row: cell.row, col: cell.col, kind: "plain" };
         if (f.type === "array") {
           entry.ref = parseArrayRef(f.ref, cell.row, cell.col, whereOf(cell.row, cell.col));
@@ -242,6 +238,7 @@ export async function readBook(bytes: Buffer): Promise<LoadedBook> {
           }
         }
         formulas.push(entry);
+        if (follows) followers.push({ row: cell.row, col: cell.col, si: f.si!, entry });
         spanCallCount += text.match(SPAN_CALL)?.length ?? 0;
         row[cell.col] = text === "" ? null : engineFormula(text, entry);
       });
@@ -254,8 +251,7 @@ export async function readBook(bytes: Buffer): Promise<LoadedBook> {
       if (!master) throw new BookError(`${whereOf(follower.row, follower.col)}: its shared formula ${follower.si} has no first cell`);
       const text = shiftFormula(master.text, follower.row - master.row, follower.col - master.col);
       spanCallCount += text.match(SPAN_CALL)?.length ?? 0;
-      const entry = formulas.find((f) => f.row === follower.row && f.col === follower.col)!;
-      cells[follower.row][follower.col] = engineFormula(text, entry);
+      cells[follower.row][follower.col] = engineFormula(text, follower.entry);
     }
     checkArrayRanges(part.name, formulas, cells);
     for (let r = 0; r < cells.length; r++) cells[r] ??= [];

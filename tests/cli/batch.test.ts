@@ -57,6 +57,22 @@ describe("spanwise calc for pipelines", () => {
     expect(lines.slice(1).map((line) => line.split(",").slice(0, 3).join(","))).toEqual(["S,C1,#VALUE!", "S,D1,#DIV/0!"]);
   });
 
+  it("evaluates shared formulas in every cell of their group", async () => {
+    const input = path.join(dir, "shared.xlsx");
+    const workbook = new ExcelJS.Workbook();
+    const sheet = workbook.addWorksheet("S");
+    [1, 2, 3].forEach((n, i) => (sheet.getCell(i + 1, 1).value = n));
+    sheet.getCell("B1").value = { formula: "A1*2", shareType: "shared", ref: "B1:B3" } as ExcelJS.CellValue;
+    sheet.getCell("B2").value = { sharedFormula: "B1" } as ExcelJS.CellValue;
+    sheet.getCell("B3").value = { sharedFormula: "B1" } as ExcelJS.CellValue;
+    fs.writeFileSync(input, Buffer.from(await workbook.xlsx.writeBuffer()));
+    const xml = await (await JSZip.loadAsync(fs.readFileSync(input))).file("xl/worksheets/sheet1.xml")!.async("string");
+    expect(xml).toMatch(/<f t="shared" si="0"\/>/);
+    const run = capture();
+    expect(await main(["calc", input, "--csv", "S"], run.io)).toBe(0);
+    expect(run.out()).toBe("1,2\n2,4\n3,6\n");
+  });
+
   it("exits 2 on wrong usage, 3 on unreadable input, 4 when the output may not be written", async () => {
     expect(await main(["calc", "--bogus"], capture().io)).toBe(2);
     expect(await main(["calc"], capture().io)).toBe(2);
