@@ -108,6 +108,8 @@ export class RowSweep<T extends Rect> {
   private readonly pending: T[];
   private next = 0;
   private active: T[] = [];
+  private minBottom = Number.POSITIVE_INFINITY;
+  private maxBottom = Number.NEGATIVE_INFINITY;
   private row = -1;
 
   constructor(
@@ -120,10 +122,19 @@ export class RowSweep<T extends Rect> {
   at(row: number): readonly T[] {
     if (row !== this.row) {
       this.row = row;
-      if (this.active.some((rect) => rect.bottom < row)) this.active = this.active.filter((rect) => rect.bottom >= row);
+      // Each rectangle leaves once: the list is filtered only when the nearest bottom is passed.
+      if (this.minBottom < row) {
+        this.active = this.active.filter((rect) => rect.bottom >= row);
+        this.minBottom = this.active.reduce((least, rect) => Math.min(least, rect.bottom), Number.POSITIVE_INFINITY);
+        this.maxBottom = this.active.reduce((most, rect) => Math.max(most, rect.bottom), Number.NEGATIVE_INFINITY);
+      }
       while (this.next < this.pending.length && this.pending[this.next].top <= row) {
         const rect = this.pending[this.next++];
-        if (rect.bottom >= row) this.insert(rect);
+        if (rect.bottom >= row) {
+          this.insert(rect);
+          this.minBottom = Math.min(this.minBottom, rect.bottom);
+          this.maxBottom = Math.max(this.maxBottom, rect.bottom);
+        }
       }
     }
     return this.active;
@@ -131,7 +142,7 @@ export class RowSweep<T extends Rect> {
 
   /** The first row at or after `row` that some rectangle covers, or undefined. */
   nextRow(row: number): number | undefined {
-    if (this.active.some((rect) => rect.bottom >= row)) return row;
+    if (this.maxBottom >= row) return row;
     return this.next < this.pending.length ? Math.max(row, this.pending[this.next].top) : undefined;
   }
 
@@ -275,7 +286,8 @@ function checkArrayRanges(sheet: string, formulas: readonly FormulaCell[], cells
     throw new BookError(`${sheet}!${a1(b.anchor.row, b.anchor.col)}: the array formula's range ${rectText(b)} overlaps the range ${rectText(a)} of ${a1(a.anchor.row, a.anchor.col)}`);
   });
   const formulaAt = new Set(formulas.map((f) => `${f.row}:${f.col}`));
-  for (let row = sweep.nextRow(0); row !== undefined && row < SHEET_LIMITS.rows; row = sweep.nextRow(row + 1)) {
+  // Only rows that hold cells are visited: a range's area is never walked.
+  for (let row = sweep.nextRow(0); row !== undefined && row < cells.length; row = sweep.nextRow(row + 1)) {
     const active = sweep.at(row);
     const line = cells[row];
     if (!line) continue;
