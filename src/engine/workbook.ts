@@ -165,7 +165,9 @@ export class SpanWorkbook {
    * to the engine in one call (many single-cell calls in one batch cost quadratic time).
    */
   setCells(sheet: number, top: number, left: number, block: readonly (readonly CellInput[])[]): void {
-    const prepared = block.map((row, r) => Array.from(row, (input, c) => this.prepare({ sheet, row: top + r, col: left + c }, input)));
+    // Array.from, not block.map: a block from another frame (the pane writing into the workbench)
+    // would map into that frame's arrays, which the engine does not take for arrays.
+    const prepared = Array.from(block, (row, r) => Array.from(row, (input, c) => this.prepare({ sheet, row: top + r, col: left + c }, input)));
     const width = prepared[0]?.length ?? 0;
     if (width === 0) return;
     if (prepared.every((row) => row.length === width)) this.hf.setCellContents({ sheet, row: top, col: left }, prepared as never);
