@@ -1,15 +1,18 @@
 /**
  * `spanwise demo [--out <file.xlsx>] [--force]`: writes the demo workbook (assets/demo) as a
- * real .xlsx with its SPAN formulas in saved form and their values, spills as array formulas.
- * `npm run demo:xlsx` regenerates assets/spanwise-demo.xlsx with it.
+ * real .xlsx with its SPAN formulas in saved form and their cached values, every formula a
+ * dynamic array as the host stores them (dynamicArrays.ts), so the host shows the values on
+ * open. `npm run demo:xlsx` regenerates assets/spanwise-demo.xlsx with it.
  */
 import fs from "fs";
 import ExcelJS from "exceljs";
 import { DEMO_SHEETS, DEMO_TITLE } from "../../assets/demo/floorFraming";
-import { SpanWorkbook, type SheetInput } from "../engine";
+import { type SheetInput } from "../engine";
+import { storeAsDynamicArrays } from "./dynamicArrays";
 import { UsageError, type Io } from "./io";
+import { writeFileSafely } from "./safeWrite";
 import { toSavedForm } from "./savedForm";
-import { storeResults } from "./xlsxBook";
+import { evaluateBook, readBook, storeResults } from "./xlsxBook";
 
 export const DEMO_WORKBOOK = "assets/spanwise-demo.xlsx";
 
@@ -39,11 +42,12 @@ export async function writeDemoWorkbook(out: string, force: boolean, io: Io): Pr
       column.width = index === 0 ? 24 : 15;
     });
   }
-  const evaluated = new SpanWorkbook(sheets);
-  const formulaCount = sheets.reduce((n, s) => n + s.cells.flat().filter((v) => typeof v === "string" && v.startsWith("=")).length, 0);
-  storeResults({ workbook, sheets, formulaCount, spanCallCount: 0 }, evaluated);
+  const book = await readBook(await storeAsDynamicArrays(Buffer.from(await workbook.xlsx.writeBuffer())));
+  const evaluated = evaluateBook(book);
+  const { problems } = await storeResults(book, evaluated);
   evaluated.destroy();
-  await workbook.xlsx.writeFile(out);
+  if (problems.length > 0) throw new Error(`the demo workbook has error cells: ${problems.map((p) => `${p.sheet}!${p.address} ${p.error} ${p.message}`).join("; ")}`);
+  writeFileSafely(out, await book.pkg.write(), undefined, true);
   io.stderr.write(`spanwise: wrote the demo workbook to ${out}\n`);
   return 0;
 }

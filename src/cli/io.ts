@@ -4,11 +4,12 @@ export interface Io {
   stderr: { write(text: string): unknown; isTTY?: boolean };
 }
 
-/** A problem the user can fix: printed as "spanwise: <message>", exit code 2 (usage) or 1. */
+/** A problem the user can fix: printed as "spanwise: <message>", with its exit code (2: usage, then the command's usage text). */
 export class UsageError extends Error {
   constructor(
     message: string,
     readonly exitCode = 2,
+    readonly usage?: string,
   ) {
     super(message);
     this.name = "UsageError";

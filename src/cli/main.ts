@@ -4,39 +4,70 @@
  * stops it and removes the sideload registration (stop.ts).
  */
 import { optionText, parseArgs } from "./args";
-import { calc } from "./calc";
+import { calc, EXIT } from "./calc";
 import { DEMO_WORKBOOK, writeDemoWorkbook } from "./demoWorkbook";
 import { UsageError, type Io } from "./io";
 
-export const USAGE = `usage:
-  spanwise calc <book.xlsx> [--out <file.xlsx>] [--csv <sheet>] [--force]
-      evaluates every formula (SPAN functions included) and writes the values into a new
-      workbook (default <book>.calculated.xlsx); --csv prints a sheet's values as CSV.
+export const CALC_USAGE = `usage:
+  spanwise calc <book.xlsx> [--out <file.xlsx>] [--force] [--report <errors.csv>]
+      evaluates every formula (SPAN functions included) and writes a copy of the workbook
+      (default <book>.calculated.xlsx) in which only the formulas' cached values have changed:
+      formulas, styles, names, charts and every other part stay as they were.
+  spanwise calc <book.xlsx> --csv <sheet> [--report <errors.csv>]
+      prints one sheet's values as CSV (15 significant digits; text that would read as a
+      formula is escaped) and writes no workbook.
+  exit codes: 0 every formula evaluated; 1 some cells are errors (listed on stderr, all in
+  --report); 2 wrong usage; 3 the input cannot be read or is refused; 4 the output cannot be
+  written (it exists without --force, or it is the input); 5 an unexpected failure.
+`;
+
+export const DEMO_USAGE = `usage:
   spanwise demo [--out <file.xlsx>] [--force]
-      writes the demo workbook (default ${DEMO_WORKBOOK}).
+      writes the demo workbook (default ${DEMO_WORKBOOK}), its spills stored as dynamic arrays.
+`;
+
+export const START_USAGE = `usage:
   spanwise start [--port <n>]
       builds and serves the add-in and the workbench over HTTPS on localhost.
   spanwise stop
       stops that server and removes the add-in's sideload registration.
 `;
 
+export const USAGE = CALC_USAGE + DEMO_USAGE.replace("usage:\n", "") + START_USAGE.replace("usage:\n", "");
+
 const defaultIo: Io = { stdout: process.stdout, stderr: process.stderr };
+
+function wantsHelp(args: readonly string[]): boolean {
+  return args.includes("--help") || args.includes("-h");
+}
+
+function help(io: Io, text: string): number {
+  io.stdout.write(text);
+  return 0;
+}
 
 export async function main(argv: readonly string[], io: Io = defaultIo): Promise<number> {
   try {
     const [command, ...rest] = argv;
     switch (command) {
       case "calc": {
-        const args = parseArgs(rest, ["out", "csv"], ["force"]);
-        if (args.positional.length !== 1) throw new UsageError("calc takes one workbook: spanwise calc <book.xlsx>");
-        return await calc({ input: args.positional[0], out: optionText(args, "out"), csv: optionText(args, "csv"), force: args.options.has("force") }, io);
+        if (wantsHelp(rest)) return help(io, CALC_USAGE);
+        const args = parseArgs(rest, ["out", "csv", "report"], ["force"], CALC_USAGE);
+        if (args.positional.length !== 1) throw new UsageError("calc takes one workbook: spanwise calc <book.xlsx>", 2, CALC_USAGE);
+        return await calc(
+          { input: args.positional[0], out: optionText(args, "out"), csv: optionText(args, "csv"), report: optionText(args, "report"), force: args.options.has("force") },
+          io,
+        );
       }
       case "demo": {
-        const args = parseArgs(rest, ["out"], ["force"]);
+        if (wantsHelp(rest)) return help(io, DEMO_USAGE);
+        const args = parseArgs(rest, ["out"], ["force"], DEMO_USAGE);
+        if (args.positional.length > 0) throw new UsageError(`demo takes no workbook (${args.positional[0]}): use --out`, 2, DEMO_USAGE);
         return await writeDemoWorkbook(optionText(args, "out") ?? DEMO_WORKBOOK, args.options.has("force"), io);
       }
       case "start": {
-        const args = parseArgs(rest, ["port"], []);
+        if (wantsHelp(rest)) return help(io, START_USAGE);
+        const args = parseArgs(rest, ["port"], [], START_USAGE);
         const { start } = await import("./start");
         return await start({ port: Number(optionText(args, "port") ?? 3000) }, io);
       }
@@ -48,6 +79,7 @@ export async function main(argv: readonly string[], io: Io = defaultIo): Promise
       case undefined:
       case "help":
       case "--help":
+      case "-h":
         io.stdout.write(USAGE);
         return command === undefined ? 2 : 0;
       default:
@@ -56,10 +88,10 @@ export async function main(argv: readonly string[], io: Io = defaultIo): Promise
   } catch (error) {
     if (error instanceof UsageError) {
       io.stderr.write(`spanwise: ${error.message}\n`);
-      if (error.exitCode === 2) io.stderr.write(USAGE);
+      if (error.exitCode === 2) io.stderr.write(error.usage ?? USAGE);
       return error.exitCode;
     }
     io.stderr.write(`spanwise: unexpected failure: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);
-    return 1;
+    return EXIT.internal;
   }
 }

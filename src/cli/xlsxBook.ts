@@ -1,134 +1,495 @@
 /**
- * .xlsx workbooks in and out of the engine (exceljs reads and writes; the engine computes).
+ * A workbook package read into the engine and written back with new cached values.
  *
- * Reading keeps every formula as stored (saved forms such as `_xldudf_SPAN_MOMENT` or
- * `_xlfn.ANCHORARRAY` are understood by the engine) and drops the cached values that fill an
- * array formula's range, so the engine spills into it afresh. Writing keeps each formula's
- * text and stores its new value; a formula whose result spills is written as an array formula
- * over the range it covers now, with the spilled values in that range.
+ * Reading takes every worksheet's cells from its XML (shared strings, inline strings, shared
+ * formulas moved to each cell) and drops the cached values inside array formula ranges, so
+ * the engine spills afresh. Writing changes only the cached values of formula cells and of
+ * the cells a dynamic array spills into: each formula cell gets its new `<v>` and `t`, a
+ * dynamic array (an anchor whose `cm` marks it dynamic) gets its new `ref`, cells its spill no
+ * longer covers lose their cached value, cells it newly covers are added. Every other byte of
+ * every part stays as it was.
+ *
+ * Formula kinds, as the host stores them (ECMA-376 Part 1 §18.3.1.40; MS-XLSX dynamic arrays):
+ * - dynamic array: `<f t="array" ref=...>` on a cell with `cm` pointing at dynamicArrayProperties
+ *   fDynamic="1": evaluated as typed, spills at its computed size;
+ * - legacy array (no such `cm`): its range is fixed; the result is cut to it and the cells it
+ *   does not reach show #N/A, as the host fills them;
+ * - plain `<f>`: a single-cell formula. The host reads it with implicit intersection (Microsoft
+ *   support, "Implicit intersection operator: @"); a result of several cells is refused with a
+ *   message rather than guessed.
  */
-import ExcelJS from "exceljs";
-import { columnLetters, isCellError, type CellInput, type CellResult, type SheetInput, type SpanWorkbook } from "../engine";
+import { isCellError, normalizeFormula, SHEET_LIMITS, SpanWorkbook, type CellInput, type CellResult, type SheetInput } from "../engine";
+import { parseA1, rewriteSheetWith, scanSheet, type XmlCell } from "./sheetXml";
+import { shiftFormula } from "./sharedFormula";
+import { encodeXml } from "./xmlText";
+import { XlsxPackage, type DefinedName } from "./xlsxPackage";
+
+/** Problems with the file itself: it is refused as a whole (exit code for unreadable input). */
+export class BookError extends Error {}
+
+/** Cells in all legacy (fixed-size) array ranges together: each of them is written. */
+export const MAX_LEGACY_ARRAY_CELLS = 2_000_000;
+
+export interface Rect {
+  top: number;
+  left: number;
+  bottom: number;
+  right: number;
+}
+
+type ArrayKind = "dynamic" | "legacy";
+
+export interface FormulaCell {
+  row: number;
+  col: number;
+  kind: ArrayKind | "plain";
+  /** The stored range of an array formula. */
+  ref?: Rect;
+}
+
+export interface SheetBook {
+  name: string;
+  /** The worksheet part (its text is read again when written: big sheets hold one copy at a time). */
+  path: string;
+  formulas: FormulaCell[];
+}
 
 export interface LoadedBook {
-  workbook: ExcelJS.Workbook;
-  sheets: SheetInput[];
+  pkg: XlsxPackage;
+  sheets: SheetBook[];
+  inputs: SheetInput[];
+  names: DefinedName[];
   formulaCount: number;
   /** SPAN calls written in formulas (an estimate of the solver work, for progress). */
   spanCallCount: number;
 }
 
-const EXCEL_EPOCH = Date.UTC(1899, 11, 30);
+export interface CellProblem {
+  sheet: string;
+  address: string;
+  error: string;
+  message: string;
+}
+
 const SPAN_CALL = /(?:_xldudf_|_xll\.)?SPAN[._][A-Z]+\s*\(/gi;
 
-function serialOf(date: Date): number {
-  return (date.getTime() - EXCEL_EPOCH) / 86400000;
+export function a1(row: number, col: number): string {
+  let letters = "";
+  for (let n = col + 1; n > 0; n = Math.floor((n - 1) / 26)) letters = String.fromCharCode(65 + ((n - 1) % 26)) + letters;
+  return `${letters}${row + 1}`;
 }
 
-function inputOf(cell: ExcelJS.Cell): CellInput {
-  if (cell.type === ExcelJS.ValueType.Formula) return `=${cell.formula}`;
-  const value = cell.value as unknown;
-  if (value === null || value === undefined) return null;
-  if (typeof value === "number" || typeof value === "boolean") return value;
-  if (typeof value === "string") return value.startsWith("=") ? `'${value}` : value;
-  if (value instanceof Date) return serialOf(value);
-  if (typeof value === "object") {
-    const v = value as { richText?: { text: string }[]; text?: unknown; error?: string; result?: unknown };
-    if (v.richText) return v.richText.map((run) => run.text).join("");
-    if (typeof v.text === "string") return v.text;
-    if (typeof v.error === "string") return v.error;
+export function rectText(rect: Rect): string {
+  const from = a1(rect.top, rect.left);
+  return rect.bottom === rect.top && rect.right === rect.left ? from : `${from}:${a1(rect.bottom, rect.right)}`;
+}
+
+/** An array formula's `ref`, checked against its cell and the sheet's bounds. */
+export function parseArrayRef(ref: string | undefined, row: number, col: number, where: string): Rect {
+  const text = ref ?? "";
+  const [from, to = from, extra] = text.split(":");
+  const a = from === undefined ? undefined : parseA1(from);
+  const b = to === undefined ? undefined : parseA1(to);
+  if (extra !== undefined || !a || !b) throw new BookError(`${where}: the array formula's range "${text.slice(0, 40)}" is not a cell range`);
+  if (a.row !== row || a.col !== col) throw new BookError(`${where}: the array formula's range ${text} does not start at its own cell`);
+  if (b.row < a.row || b.col < a.col) throw new BookError(`${where}: the array formula's range ${text} runs backwards`);
+  if (b.row >= SHEET_LIMITS.rows || b.col >= SHEET_LIMITS.cols) {
+    throw new BookError(`${where}: the array formula's range ${text} reaches beyond the sheet (${SHEET_LIMITS.rows} rows, ${SHEET_LIMITS.cols} columns)`);
   }
-  return String(value);
+  return { top: a.row, left: a.col, bottom: b.row, right: b.col };
 }
 
-/** Reads a workbook; throws an Error whose message says why it cannot be read. */
-export async function readBook(path: string): Promise<LoadedBook> {
-  const workbook = new ExcelJS.Workbook();
-  await workbook.xlsx.readFile(path);
-  if (workbook.worksheets.length === 0) throw new Error("it holds no worksheets");
-  const sheets: SheetInput[] = [];
+/**
+ * Rectangles met row by row, in order of their top row: `at(row)` gives those covering the
+ * row, sorted by left column (pairwise apart, which `add` checks), `find(col)` the one
+ * covering a column. Rows must be asked in increasing order.
+ */
+export class RowSweep<T extends Rect> {
+  private readonly pending: T[];
+  private next = 0;
+  private active: T[] = [];
+  private minBottom = Number.POSITIVE_INFINITY;
+  private maxBottom = Number.NEGATIVE_INFINITY;
+  private row = -1;
+
+  constructor(
+    rects: readonly T[],
+    private readonly onOverlap?: (a: T, b: T) => void,
+  ) {
+    this.pending = [...rects].sort((x, y) => x.top - y.top || x.left - y.left);
+  }
+
+  at(row: number): readonly T[] {
+    if (row !== this.row) {
+      this.row = row;
+      // Each rectangle leaves once: the list is filtered only when the nearest bottom is passed.
+      if (this.minBottom < row) {
+        this.active = this.active.filter((rect) => rect.bottom >= row);
+        this.minBottom = this.active.reduce((least, rect) => Math.min(least, rect.bottom), Number.POSITIVE_INFINITY);
+        this.maxBottom = this.active.reduce((most, rect) => Math.max(most, rect.bottom), Number.NEGATIVE_INFINITY);
+      }
+      while (this.next < this.pending.length && this.pending[this.next].top <= row) {
+        const rect = this.pending[this.next++];
+        if (rect.bottom >= row) {
+          this.insert(rect);
+          this.minBottom = Math.min(this.minBottom, rect.bottom);
+          this.maxBottom = Math.max(this.maxBottom, rect.bottom);
+        }
+      }
+    }
+    return this.active;
+  }
+
+  /** The first row at or after `row` that some rectangle covers, or undefined. */
+  nextRow(row: number): number | undefined {
+    if (this.maxBottom >= row) return row;
+    return this.next < this.pending.length ? Math.max(row, this.pending[this.next].top) : undefined;
+  }
+
+  find(col: number): T | undefined {
+    let lo = 0;
+    let hi = this.active.length - 1;
+    while (lo <= hi) {
+      const mid = (lo + hi) >> 1;
+      const rect = this.active[mid];
+      if (col < rect.left) hi = mid - 1;
+      else if (col > rect.right) lo = mid + 1;
+      else return rect;
+    }
+    return undefined;
+  }
+
+  private insert(rect: T): void {
+    let lo = 0;
+    let hi = this.active.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (this.active[mid].left < rect.left) lo = mid + 1;
+      else hi = mid;
+    }
+    const before = this.active[lo - 1];
+    const after = this.active[lo];
+    if (before && before.right >= rect.left) this.onOverlap?.(before, rect);
+    else if (after && after.left <= rect.right) this.onOverlap?.(rect, after);
+    this.active.splice(lo, 0, rect);
+  }
+}
+
+function cellInput(cell: XmlCell, strings: readonly string[], where: () => string): CellInput {
+  const type = cell.attrs.get("t");
+  if (type === "inlineStr") return textInput(cell.inline ?? "");
+  const v = cell.value;
+  if (v === undefined) return null;
+  switch (type) {
+    case "s": {
+      const text = strings[Number(v)];
+      if (text === undefined) throw new BookError(`${where()}: shared string ${v} does not exist`);
+      return textInput(text);
+    }
+    case "str":
+      return textInput(v);
+    case "b":
+      return v === "1" || v === "true";
+    case "e":
+      return v;
+    default: {
+      const n = Number(v);
+      if (v.trim() === "" || !Number.isFinite(n)) throw new BookError(`${where()}: the value "${v.slice(0, 40)}" is not a number`);
+      return n;
+    }
+  }
+}
+
+/** Text that would read as a formula is kept as text (as the host keeps it). */
+function textInput(text: string): string {
+  return text.startsWith("=") ? `'${text}` : text;
+}
+
+/** Reads a package; throws BookError (or PackageError) saying why it cannot be used. */
+export async function readBook(bytes: Buffer): Promise<LoadedBook> {
+  const pkg = await XlsxPackage.open(bytes);
+  const parts = pkg.sheets();
+  if (parts.length === 0) throw new BookError("it holds no worksheets");
+  const strings = await pkg.sharedStrings();
+  const dynamic = await pkg.dynamicArrayIndexes();
+  const sheets: SheetBook[] = [];
+  const inputs: SheetInput[] = [];
   let formulaCount = 0;
   let spanCallCount = 0;
-  for (const sheet of workbook.worksheets) {
+  let legacyCells = 0;
+  for (const part of parts) {
+    const xml = await pkg.part(part.path);
+    if (xml === undefined) throw new BookError(`sheet "${part.name}" is missing from the package (${part.path})`);
     const cells: CellInput[][] = [];
-    const spilledInto: string[] = [];
-    sheet.eachRow({ includeEmpty: false }, (row, rowNumber) => {
-      row.eachCell({ includeEmpty: false }, (cell, colNumber) => {
-        const input = inputOf(cell);
-        (cells[rowNumber - 1] ??= [])[colNumber - 1] = input;
-        if (typeof input === "string" && input.startsWith("=")) {
-          formulaCount++;
-          spanCallCount += input.match(SPAN_CALL)?.length ?? 0;
-          const model = cell.value as { shareType?: string; ref?: string };
-          if (model && model.shareType === "array" && model.ref) spilledInto.push(model.ref);
+    const formulas: FormulaCell[] = [];
+    const masters = new Map<string, { row: number; col: number; text: string }>();
+    const followers: { row: number; col: number; si: string; entry: FormulaCell }[] = [];
+    const whereOf = (row: number, col: number) => `${part.name}!${a1(row, col)}`;
+    try {
+      scanSheet(xml, (cell) => {
+        const row = (cells[cell.row] ??= []);
+        const f = cell.formula;
+        if (!f) {
+          row[cell.col] = cellInput(cell, strings, () => whereOf(cell.row, cell.col));
+          return;
         }
-      });
-    });
-    for (const ref of spilledInto) clearSpillArea(cells, ref);
-    for (let r = 0; r < cells.length; r++) cells[r] ??= [];
-    sheets.push({ name: sheet.name, cells });
-  }
-  return { workbook, sheets, formulaCount, spanCallCount };
-}
-
-function parseCell(text: string): { row: number; col: number } {
-  const match = /^\$?([A-Za-z]+)\$?(\d+)$/.exec(text);
-  if (!match) throw new Error(`bad cell address ${text}`);
-  let col = 0;
-  for (const letter of match[1].toUpperCase()) col = col * 26 + letter.charCodeAt(0) - 64;
-  return { row: Number(match[2]) - 1, col: col - 1 };
-}
-
-/** Empties an array formula's range except its top-left cell (cached values of the last spill). */
-function clearSpillArea(cells: CellInput[][], ref: string): void {
-  const [from, to = from] = ref.split(":");
-  const a = parseCell(from);
-  const b = parseCell(to);
-  for (let row = a.row; row <= b.row; row++)
-    for (let col = a.col; col <= b.col; col++) if ((row !== a.row || col !== a.col) && cells[row]) cells[row][col] = null;
-}
-
-function excelValue(value: CellResult): ExcelJS.CellValue {
-  if (value === null) return null;
-  if (isCellError(value)) return { error: value.error as ExcelJS.CellErrorValue["error"] };
-  return value;
-}
-
-/** Stores the engine's values into the workbook read by readBook. */
-export function storeResults(book: LoadedBook, evaluated: SpanWorkbook, onCell?: () => void): void {
-  book.workbook.worksheets.forEach((sheet, index) => {
-    const id = evaluated.sheetId(book.sheets[index].name);
-    const values = evaluated.getSheetValues(id);
-    const inputs = book.sheets[index].cells;
-    const covered = new Set<string>();
-    for (const address of evaluated.formulaCells(id)) {
-      const formula = inputs[address.row]?.[address.col];
-      if (typeof formula !== "string" || !formula.startsWith("=")) continue;
-      const cell = sheet.getCell(address.row + 1, address.col + 1);
-      const result = excelValue(values[address.row][address.col]);
-      const spill = evaluated.spillSize(id, address.row, address.col);
-      if (spill && (spill.rows > 1 || spill.cols > 1)) {
-        const ref = `${columnLetters(address.col)}${address.row + 1}:${columnLetters(address.col + spill.cols - 1)}${address.row + spill.rows}`;
-        cell.value = { formula: formula.slice(1), result, shareType: "array", ref } as ExcelJS.CellValue;
-        for (let r = 0; r < spill.rows; r++)
-          for (let c = 0; c < spill.cols; c++) {
-            if (r === 0 && c === 0) continue;
-            covered.add(`${address.row + r}:${address.col + c}`);
-            sheet.getCell(address.row + r + 1, address.col + c + 1).value = excelValue(values[address.row + r]?.[address.col + c] ?? null);
+        formulaCount++;
+        let text = f.text;
+        const follows = f.type === "shared" && f.si !== undefined && text.trim() === "";
+        if (f.type === "shared" && f.si !== undefined && !follows) masters.set(f.si, { row: cell.row, col: cell.col, text });
+        if (follows) text = "";
+        const entry: FormulaCell = { row: cell.row, col: cell.col, kind: "plain" };
+        if (f.type === "array") {
+          entry.ref = parseArrayRef(f.ref, cell.row, cell.col, whereOf(cell.row, cell.col));
+          const cm = Number(cell.attrs.get("cm"));
+          entry.kind = dynamic.has(cm) ? "dynamic" : "legacy";
+          if (entry.kind === "legacy") {
+            legacyCells += (entry.ref.bottom - entry.ref.top + 1) * (entry.ref.right - entry.ref.left + 1);
+            if (legacyCells > MAX_LEGACY_ARRAY_CELLS) throw new BookError(`${whereOf(cell.row, cell.col)}: legacy array formulas cover more than ${MAX_LEGACY_ARRAY_CELLS} cells in all`);
           }
-      } else {
-        cell.value = { formula: formula.slice(1), result } as ExcelJS.CellValue;
-      }
-      onCell?.();
-    }
-    // Cells an old spill covered and the new one does not: empty, as in the spreadsheet.
-    inputs.forEach((row, r) =>
-      row.forEach((input, c) => {
-        if (input === null && !covered.has(`${r}:${c}`)) {
-          const cell = sheet.getCell(r + 1, c + 1);
-          if (cell.value !== null && cell.type !== ExcelJS.ValueType.Merge) cell.value = null;
         }
-      }),
-    );
+        formulas.push(entry);
+        if (follows) followers.push({ row: cell.row, col: cell.col, si: f.si!, entry });
+        spanCallCount += text.match(SPAN_CALL)?.length ?? 0;
+        row[cell.col] = text === "" ? null : engineFormula(text, entry);
+      });
+    } catch (error) {
+      if (error instanceof BookError) throw error;
+      throw new BookError(`sheet "${part.name}" cannot be read: ${error instanceof Error ? error.message : String(error)}`);
+    }
+    for (const follower of followers) {
+      const master = masters.get(follower.si);
+      if (!master) throw new BookError(`${whereOf(follower.row, follower.col)}: its shared formula ${follower.si} has no first cell`);
+      const text = shiftFormula(master.text, follower.row - master.row, follower.col - master.col);
+      spanCallCount += text.match(SPAN_CALL)?.length ?? 0;
+      cells[follower.row][follower.col] = engineFormula(text, follower.entry);
+    }
+    checkArrayRanges(part.name, formulas, cells);
+    for (let r = 0; r < cells.length; r++) cells[r] ??= [];
+    sheets.push({ name: part.name, path: part.path, formulas });
+    inputs.push({ name: part.name, cells });
+  }
+  return { pkg, sheets, inputs, names: pkg.definedNames(), formulaCount, spanCallCount };
+}
+
+function engineFormula(text: string, entry: FormulaCell): string {
+  const typed = normalizeFormula(`=${text}`);
+  if (entry.kind !== "legacy" || !entry.ref) return typed;
+  return `=ARRAY_CONSTRAIN(${typed.slice(1)},${entry.ref.bottom - entry.ref.top + 1},${entry.ref.right - entry.ref.left + 1})`;
+}
+
+/** Array ranges must not overlap, nor hold another formula; their cached values are dropped. */
+function checkArrayRanges(sheet: string, formulas: readonly FormulaCell[], cells: CellInput[][]): void {
+  const arrays = formulas.filter((f): f is FormulaCell & { ref: Rect } => f.ref !== undefined).map((f) => ({ ...f.ref, anchor: f }));
+  if (arrays.length === 0) return;
+  const sweep = new RowSweep(arrays, (a, b) => {
+    throw new BookError(`${sheet}!${a1(b.anchor.row, b.anchor.col)}: the array formula's range ${rectText(b)} overlaps the range ${rectText(a)} of ${a1(a.anchor.row, a.anchor.col)}`);
   });
+  const formulaAt = new Set(formulas.map((f) => `${f.row}:${f.col}`));
+  // Only rows that hold cells are visited: a range's area is never walked.
+  for (let row = sweep.nextRow(0); row !== undefined && row < cells.length; row = sweep.nextRow(row + 1)) {
+    const active = sweep.at(row);
+    const line = cells[row];
+    if (!line) continue;
+    if (active.length === 0) continue;
+    for (let col = 0; col < line.length; col++) {
+      if (line[col] === undefined) continue;
+      const rect = sweep.find(col);
+      if (!rect || (rect.anchor.row === row && rect.anchor.col === col)) continue;
+      if (formulaAt.has(`${row}:${col}`)) {
+        throw new BookError(`${sheet}!${a1(rect.anchor.row, rect.anchor.col)}: the array formula's range ${rectText(rect)} covers the formula in ${a1(row, col)}`);
+      }
+      line[col] = null;
+    }
+  }
+}
+
+/**
+ * A workbook evaluated from a loaded book. A plain (single-cell) formula whose result spills
+ * is refused (see the file comment): the engine holds an error there instead, so nothing
+ * reads values the host would not show.
+ */
+export function evaluateBook(book: LoadedBook, onSpanCall?: () => void): SpanWorkbook {
+  const evaluated = new SpanWorkbook(book.inputs, { onSpanCall, names: book.names });
+  // The engine holds the cells now: the read copy is let go (big schedules).
+  book.inputs.splice(0);
+  book.sheets.forEach((sheet) => {
+    const id = evaluated.sheetId(sheet.name);
+    for (const formula of sheet.formulas) {
+      if (formula.kind !== "plain") continue;
+      const size = evaluated.spillSize(id, formula.row, formula.col);
+      if (size && (size.rows > 1 || size.cols > 1)) {
+        (formula as FormulaCell & { spilled?: { rows: number; cols: number } }).spilled = size;
+        evaluated.setCell(id, formula.row, formula.col, "=#VALUE!");
+      }
+    }
+  });
+  return evaluated;
+}
+
+/** Text of a number as the file stores it (xsd:double; shortest text that reads back the same). */
+function numberText(n: number): string {
+  return Object.is(n, -0) ? "0" : String(n);
+}
+
+interface ValueXml {
+  type?: string;
+  content: string;
+}
+
+function formulaValue(value: CellResult): ValueXml {
+  if (value === null) return { content: "" };
+  if (isCellError(value)) return { type: "e", content: `<v>${encodeXml(value.error)}</v>` };
+  if (typeof value === "number") return { content: `<v>${numberText(value)}</v>` };
+  if (typeof value === "boolean") return { type: "b", content: `<v>${value ? 1 : 0}</v>` };
+  return { type: "str", content: `<v>${encodeXml(value)}</v>` };
+}
+
+function plainValue(value: CellResult): ValueXml {
+  if (typeof value === "string") {
+    const space = /^\s|\s$/.test(value) ? ' xml:space="preserve"' : "";
+    return { type: "inlineStr", content: `<is><t${space}>${encodeXml(value)}</t></is>` };
+  }
+  return formulaValue(value);
+}
+
+/** The start tag with its `t` attribute set to `type` (or removed). */
+function withType(startTag: string, type: string | undefined): string {
+  const closing = startTag.endsWith("/>") ? "/>" : ">";
+  const body = startTag.slice(0, -closing.length).replace(/\s+t\s*=\s*(?:"[^"]*"|'[^']*')/, "");
+  return `${body.trimEnd()}${type ? ` t="${type}"` : ""}${closing}`;
+}
+
+/** The `<f>` start tag with a new `ref`. */
+function withRef(tag: string, ref: string): string {
+  return tag.replace(/(\sref\s*=\s*)(?:"[^"]*"|'[^']*')/, `$1"${ref}"`);
+}
+
+function closeTagOf(xml: string, cell: XmlCell): string {
+  return `</${xml.slice(cell.start + 1, cell.tagEnd).split(/[\s/>]/, 1)[0]}>`;
+}
+
+/** A formula cell with its new cached value (and `ref`), everything else as it was. */
+function formulaCellText(xml: string, cell: XmlCell, value: CellResult, ref: string | undefined): string {
+  const next = formulaValue(value);
+  const startTag = withType(xml.slice(cell.start, cell.tagEnd), next.type);
+  const f = cell.formula!;
+  const fTag = ref === undefined ? xml.slice(f.tagStart, f.tagEnd) : withRef(xml.slice(f.tagStart, f.tagEnd), ref);
+  let body = xml.slice(cell.tagEnd, cell.end - closeTagOf(xml, cell).length);
+  const offset = cell.tagEnd;
+  if (cell.valueStart !== undefined) {
+    body = body.slice(0, cell.valueStart - offset) + next.content + body.slice(cell.valueEnd! - offset);
+  } else {
+    const fEnd = body.indexOf(">", f.tagStart - offset) + 1;
+    const selfClosingF = body[fEnd - 2] === "/";
+    const after = selfClosingF ? fEnd : body.indexOf("</", fEnd) >= 0 ? body.indexOf(">", body.indexOf("</", fEnd)) + 1 : fEnd;
+    body = body.slice(0, after) + next.content + body.slice(after);
+  }
+  body = body.slice(0, f.tagStart - offset) + fTag + body.slice(f.tagEnd - offset);
+  return `${startTag}${body}${closeTagOf(xml, cell)}`;
+}
+
+/** A value cell (inside a spill) with a new value, its other attributes (style) kept; null empties it. */
+function valueCellText(xml: string, cell: XmlCell | undefined, row: number, col: number, value: CellResult): string {
+  if (!cell) {
+    if (value === null) return "";
+    const next = plainValue(value);
+    return `<c r="${a1(row, col)}"${next.type ? ` t="${next.type}"` : ""}>${next.content}</c>`;
+  }
+  const startTag = xml.slice(cell.start, cell.tagEnd);
+  if (value === null) {
+    const bare = withType(startTag, undefined);
+    return bare.endsWith("/>") ? bare : `${bare.slice(0, -1)}/>`;
+  }
+  const next = plainValue(value);
+  const open = withType(startTag.endsWith("/>") ? `${startTag.slice(0, -2)}>` : startTag, next.type);
+  return `${open}${next.content}${startTag.endsWith("/>") ? `</${startTag.slice(1).split(/[\s/>]/, 1)[0]}>` : closeTagOf(xml, cell)}`;
+}
+
+interface Spill extends Rect {
+  anchor: FormulaCell;
+  /** Rows and columns the engine's result covers (a legacy range may be larger). */
+  rows: number;
+  cols: number;
+}
+
+export interface StoreResult {
+  problems: CellProblem[];
+}
+
+/**
+ * Writes the engine's values into the package's sheets (see the file comment). `onCell` is
+ * called once per formula cell, for progress.
+ */
+export async function storeResults(book: LoadedBook, evaluated: SpanWorkbook, onCell?: () => void): Promise<StoreResult> {
+  const problems: CellProblem[] = [];
+  for (const sheet of book.sheets) {
+    const sheetXml = (await book.pkg.part(sheet.path))!;
+    const id = evaluated.sheetId(sheet.name);
+    const spills: Spill[] = [];
+    const oldAreas: (Rect & { anchor: FormulaCell })[] = [];
+    for (const formula of sheet.formulas) {
+      if (formula.ref) oldAreas.push({ ...formula.ref, anchor: formula });
+      if (formula.kind === "plain") continue;
+      const size = evaluated.spillSize(id, formula.row, formula.col) ?? { rows: 1, cols: 1 };
+      if (formula.kind === "dynamic") {
+        if (size.rows > 1 || size.cols > 1) {
+          spills.push({ top: formula.row, left: formula.col, bottom: formula.row + size.rows - 1, right: formula.col + size.cols - 1, anchor: formula, ...size });
+        }
+      } else if (formula.ref) spills.push({ ...formula.ref, anchor: formula, ...size });
+    }
+    const spillValue = (spill: Spill, row: number, col: number): CellResult => {
+      if (row - spill.top >= spill.rows || col - spill.left >= spill.cols) return { error: "#N/A", message: "" };
+      return evaluated.getValue(id, row, col);
+    };
+    const formulaText = (cell: XmlCell, formula: FormulaCell): string => {
+      let value = evaluated.getValue(id, formula.row, formula.col);
+      const refused = (formula as FormulaCell & { spilled?: { rows: number; cols: number } }).spilled;
+      let ref: string | undefined;
+      if (refused) {
+        value = {
+          error: "#VALUE!",
+          message: `a single-cell (legacy) formula whose result is ${refused.rows} x ${refused.cols} cells: the host reads it with implicit intersection, which spanwise calc does not evaluate; enter it as a dynamic array, or pick one value with INDEX`,
+        };
+      } else if (formula.kind === "dynamic") {
+        const size = evaluated.spillSize(id, formula.row, formula.col) ?? { rows: 1, cols: 1 };
+        ref = rectText({ top: formula.row, left: formula.col, bottom: formula.row + size.rows - 1, right: formula.col + size.cols - 1 });
+      }
+      if (isCellError(value)) problems.push({ sheet: sheet.name, address: a1(formula.row, formula.col), error: value.error, message: value.message });
+      onCell?.();
+      return formulaCellText(sheetXml, cell, value, ref);
+    };
+    const newSweep = new RowSweep(spills);
+    const oldSweep = new RowSweep(oldAreas);
+    let nextFormula = 0;
+    const xml = rewriteSheetWith(sheetXml, {
+      cell: (cell) => {
+        const formula = sheet.formulas[nextFormula];
+        if (cell.formula && formula && formula.row === cell.row && formula.col === cell.col) {
+          nextFormula++;
+          return formulaText(cell, formula);
+        }
+        const spill = newSweep.at(cell.row) && newSweep.find(cell.col);
+        if (spill) return valueCellText(sheetXml, cell, cell.row, cell.col, spillValue(spill, cell.row, cell.col));
+        oldSweep.at(cell.row);
+        if (oldSweep.find(cell.col)) return valueCellText(sheetXml, cell, cell.row, cell.col, null);
+        return undefined;
+      },
+      adds: (row) => {
+        const adds: { col: number; text: string }[] = [];
+        for (const spill of newSweep.at(row)) {
+          for (let col = spill.left; col <= spill.right; col++) {
+            if (row === spill.top && col === spill.left) continue;
+            const text = valueCellText(sheetXml, undefined, row, col, spillValue(spill, row, col));
+            if (text) adds.push({ col, text });
+          }
+        }
+        return adds;
+      },
+      nextRow: (row) => newSweep.nextRow(row),
+    });
+    book.pkg.setPart(sheet.path, xml);
+    sheet.formulas = [];
+  }
+  return { problems };
 }

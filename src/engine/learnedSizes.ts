@@ -19,6 +19,15 @@ export interface EngineContext {
   mismatched: Map<string, CellAddress>;
   /** Called once per SPAN evaluation (progress reporting). */
   onCall?: () => void;
+  /** The plain text a cell holds as typed (not a formula), for size prediction. */
+  textAt?: (address: CellAddress) => string | undefined;
+  /**
+   * Results computed in a size other than reserved, kept until the cell is set again with the
+   * learned size: the second evaluation hands them back instead of calling the function again.
+   */
+  computed: Map<string, { args: string; result: unknown }>;
+  /** Spill sizes reserved from a prediction that read another cell (see spanPlugin.ts). */
+  reserved: Map<string, BlockSize>;
 }
 
 export function cellKey(address: CellAddress): string {
@@ -31,9 +40,22 @@ export function callKey(address: CellAddress, callText: string): string {
 
 const contexts = new WeakMap<object, EngineContext>();
 
+/** The context of a workbook whose engine is being built (before its graph can be attached). */
+let building: EngineContext | undefined;
+
 /** The context of the workbook that owns `owner` (the engine's dependency graph). */
 export function contextOf(owner: object): EngineContext | undefined {
-  return contexts.get(owner);
+  return contexts.get(owner) ?? building;
+}
+
+export function buildingWith<T>(context: EngineContext, build: () => T): T {
+  const outer = building;
+  building = context;
+  try {
+    return build();
+  } finally {
+    building = outer;
+  }
 }
 
 export function attachContext(owner: object, context: EngineContext): void {

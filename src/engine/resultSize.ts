@@ -21,6 +21,9 @@ export interface ArgumentNode {
 /** Size of an argument's value as the engine predicts it (a range's shape, 1 x 1 for a cell). */
 export type ArgumentSize = (node: ArgumentNode) => BlockSize;
 
+/** The text a single-cell reference holds as typed, when it is a plain text (not a formula). */
+export type ReferencedText = (node: ArgumentNode) => string | undefined;
+
 export const DEFAULT_DIAGRAM_POINTS = 101;
 
 export function isGiven(node: ArgumentNode | undefined): node is ArgumentNode {
@@ -28,23 +31,34 @@ export function isGiven(node: ArgumentNode | undefined): node is ArgumentNode {
 }
 
 /** Number of spans written in the spans argument, as far as the text tells. */
-export function spanCountFromText(node: ArgumentNode, sizeOf: ArgumentSize): number {
-  if (node.type === "STRING" && typeof node.value === "string") {
-    const entries = node.value.split(/[\s,;]+/).filter((entry) => entry !== "");
-    return Math.max(1, entries.length);
-  }
+export function spanCountFromText(node: ArgumentNode, sizeOf: ArgumentSize, textOf?: ReferencedText): number {
+  const text = node.type === "STRING" && typeof node.value === "string" ? node.value : node.type === "CELL_REFERENCE" ? textOf?.(node) : undefined;
+  if (text !== undefined) return Math.max(1, countEntries(text));
   if (node.type === "NUMBER") return 1;
   const size = sizeOf(node);
   return Math.max(1, size.rows * size.cols);
 }
 
-export function predictSize(entry: SpanFunctionEntry, args: readonly ArgumentNode[], sizeOf: ArgumentSize): BlockSize {
+/** Entries of a one-cell list such as "6 8 6" or "6, 8": a linear scan, no backtracking. */
+export function countEntries(text: string): number {
+  let count = 0;
+  let inEntry = false;
+  for (let i = 0; i < text.length; i++) {
+    const ch = text.charCodeAt(i);
+    const separator = ch === 32 || ch === 44 || ch === 59 || (ch >= 9 && ch <= 13) || ch === 160;
+    if (!separator && !inEntry) count++;
+    inEntry = !separator;
+  }
+  return count;
+}
+
+export function predictSize(entry: SpanFunctionEntry, args: readonly ArgumentNode[], sizeOf: ArgumentSize, textOf?: ReferencedText): BlockSize {
   const argument = (name: string): ArgumentNode | undefined => args[entry.arguments.findIndex((arg) => arg.name === name)];
   const rule: SizeRule = entry.sizeRule;
   switch (rule) {
     case "perNode": {
       const spans = argument("spans");
-      return { rows: (spans ? spanCountFromText(spans, sizeOf) : 1) + 1, cols: 3 };
+      return { rows: (spans ? spanCountFromText(spans, sizeOf, textOf) : 1) + 1, cols: 3 };
     }
     case "shapeOfX": {
       const x = argument("x");

@@ -17,6 +17,11 @@ interface CallNode {
   args: (ArgumentNode & object)[];
 }
 
+interface ReferenceNode {
+  type: string;
+  reference?: { toSimpleCellAddress(base: CellAddress): CellAddress };
+}
+
 interface CallState {
   formulaAddress: CellAddress;
 }
@@ -29,8 +34,16 @@ function sizeMethodName(entry: SpanFunctionEntry): string {
   return `size_${entry.exportName}`;
 }
 
+/** The engine shares one syntax tree among formulas of the same shape: its text is made once. */
+const callTexts = new WeakMap<CallNode, string>();
+
 function callText(node: CallNode): string {
-  return `${node.procedureName}${JSON.stringify(node.args)}`;
+  let text = callTexts.get(node);
+  if (text === undefined) {
+    text = `${node.procedureName}${JSON.stringify(node.args)}`;
+    callTexts.set(node, text);
+  }
+  return text;
 }
 
 class SpanPlugin extends FunctionPlugin {
@@ -52,27 +65,55 @@ class SpanPlugin extends FunctionPlugin {
     return context;
   }
 
-  private expectedSize(entry: SpanFunctionEntry, node: CallNode, state: CallState): BlockSize {
+  /** The size a call gets: learned from an earlier evaluation, else predicted from its text. */
+  private expectedSize(entry: SpanFunctionEntry, node: CallNode, state: CallState, readCells: boolean): { size: BlockSize; usedCells: boolean } {
     const learned = this.context().learned.get(callKey(state.formulaAddress, callText(node)));
-    if (learned) return learned;
-    return predictSize(entry, node.args, (arg) => {
-      const size = this.arraySizeForAst(arg as never, state as never);
-      return { rows: size.height, cols: size.width };
-    });
+    if (learned) return { size: learned, usedCells: false };
+    const textAt = readCells ? this.context().textAt : undefined;
+    let usedCells = false;
+    const size = predictSize(
+      entry,
+      node.args,
+      (arg) => {
+        const size = this.arraySizeForAst(arg as never, state as never);
+        return { rows: size.height, cols: size.width };
+      },
+      textAt
+        ? (arg) => {
+            const reference = (arg as ReferenceNode).reference;
+            const text = reference ? textAt(reference.toSimpleCellAddress(state.formulaAddress)) : undefined;
+            if (text !== undefined) usedCells = true;
+            return text;
+          }
+        : undefined,
+    );
+    return { size, usedCells };
   }
 
+  /**
+   * Called when the engine reads the formula: the spill it reserves. A prediction that read
+   * another cell (a spans list typed in one cell) is remembered, since that cell may change
+   * before the call is evaluated.
+   */
   predict(node: CallNode, state: CallState): ArraySize {
     const entry = entryFor(node.procedureName);
     if (!entry) return ArraySize.error();
-    const size = this.expectedSize(entry, node, state);
+    const { size, usedCells } = this.expectedSize(entry, node, state, true);
+    const reserved = this.context().reserved;
+    const key = callKey(state.formulaAddress, callText(node));
+    if (usedCells || reserved.has(key)) reserved.set(key, size);
     return new ArraySize(size.cols, size.rows);
+  }
+
+  /** The size reserved for the call when its formula was read. */
+  private reservedSize(entry: SpanFunctionEntry, node: CallNode, state: CallState, key: string): BlockSize {
+    return this.context().reserved.get(key) ?? this.expectedSize(entry, node, state, false).size;
   }
 
   evaluate(node: CallNode, state: CallState): unknown {
     const entry = entryFor(node.procedureName);
     if (!entry) return new CellError(ErrorType.NAME, `unknown function ${node.procedureName}`);
     const context = this.context();
-    context.onCall?.();
     const given = node.args.length;
     const required = entry.arguments.filter((arg) => !arg.optional).length;
     if (given < required || given > entry.arguments.length) {
@@ -88,18 +129,27 @@ class SpanPlugin extends FunctionPlugin {
       if (error) return error;
       args.push(hostArgument(value, spec.kind, skipped));
     }
+    const call = callText(node);
+    const key = callKey(state.formulaAddress, call);
+    const kept = context.computed.get(key);
+    if (kept) context.computed.delete(key);
     let result: ReturnType<typeof engineResult>;
-    try {
-      result = engineResult(context.functions[entry.exportName](...args));
-    } catch (thrown) {
-      return engineError(thrown);
+    if (kept && kept.args === JSON.stringify(args)) result = kept.result as ReturnType<typeof engineResult>;
+    else {
+      context.onCall?.();
+      try {
+        result = engineResult(context.functions[entry.exportName](...args));
+      } catch (thrown) {
+        return engineError(thrown);
+      }
     }
     const actual = resultSize(result);
     if (!actual) return result;
-    const expected = this.expectedSize(entry, node, state);
+    const expected = this.reservedSize(entry, node, state, key);
     if (sameSize(actual, expected)) return result;
-    context.learned.set(callKey(state.formulaAddress, callText(node)), actual);
+    context.learned.set(key, actual);
     context.mismatched.set(cellKey(state.formulaAddress), state.formulaAddress);
+    context.computed.set(key, { args: JSON.stringify(args), result });
     // The engine cannot grow a reserved spill: hand back the reserved size until the cell is set again.
     return resizeResult(result, expected);
   }

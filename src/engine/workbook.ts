@@ -11,10 +11,11 @@
  */
 import { DetailedCellError, HyperFormula } from "hyperformula";
 import type { SpanFunctions } from "./catalogue";
-import { cellKey, attachContext, type CellAddress, type EngineContext } from "./learnedSizes";
+import { cellKey, attachContext, buildingWith, type CellAddress, type EngineContext } from "./learnedSizes";
 import { columnLetters, expandSpillReferences, hasSpillReference, normalizeFormula } from "./formulaText";
 import type { BlockSize } from "./resultSize";
 import { registerSpanPlugin } from "./spanPlugin";
+import { registerSinglePlugin } from "./singlePlugin";
 import { SPAN_EXPORTS } from "./spanFunctions";
 
 /** What a cell holds as typed: text starting with "=" is a formula. */
@@ -37,9 +38,40 @@ export interface WorkbookOptions {
   functions?: SpanFunctions;
   /** Called once per SPAN function evaluation (for progress bars). */
   onSpanCall?: () => void;
+  /** Defined names: workbook-wide, or local to the sheet of index `localSheet`. */
+  names?: readonly { name: string; formula: string; localSheet?: number }[];
 }
 
 const MAX_PASSES = 8;
+
+/**
+ * The spreadsheet host's sheet size (Microsoft support, "Excel specifications and limits":
+ * 1,048,576 rows by 16,384 columns); the formula engine's own default is 40,000 rows.
+ */
+export const SHEET_LIMITS = { rows: 1_048_576, cols: 16_384 } as const;
+
+const CONFIG = {
+  licenseKey: "gpl-v3",
+  maxRows: SHEET_LIMITS.rows,
+  maxColumns: SHEET_LIMITS.cols,
+  // Nothing here is ever undone: no undo history to keep (and scan) per change.
+  undoLimit: 0,
+  useArrayArithmetic: true,
+  evaluateNullToZero: true,
+  // Values leave the engine exactly as computed (no rounding to 10 digits on export).
+  smartRounding: false,
+  // Text such as "6 8 6" (a spans list) stays text: no dates are read from typed text.
+  parseDateTime: () => undefined,
+} as const;
+
+const NAME = /^[A-Za-z_\\][\w.]*$/;
+
+/** Defined names as the engine takes them; built-in names (_xlnm.Print_Area and the like) are no formulas' business. */
+function namedExpressions(names: NonNullable<WorkbookOptions["names"]>): { name: string; expression: string; scope?: number }[] {
+  return names
+    .filter(({ name, formula }) => NAME.test(name) && !name.startsWith("_xlnm.") && formula.trim() !== "")
+    .map(({ name, formula, localSheet }) => ({ name, expression: normalizeFormula(`=${formula}`), ...(localSheet === undefined ? {} : { scope: localSheet }) }));
+}
 
 export function isCellError(value: unknown): value is CellErrorValue {
   return typeof value === "object" && value !== null && "error" in value;
@@ -53,26 +85,63 @@ export class SpanWorkbook {
 
   constructor(sheets: readonly SheetInput[], options: WorkbookOptions = {}) {
     registerSpanPlugin();
-    this.hf = HyperFormula.buildEmpty({
-      licenseKey: "gpl-v3",
-      useArrayArithmetic: true,
-      evaluateNullToZero: true,
-      // Values leave the engine exactly as computed (no rounding to 10 digits on export).
-      smartRounding: false,
-      // Text such as "6 8 6" (a spans list) stays text: no dates are read from typed text.
-      parseDateTime: () => undefined,
-    });
-    this.context = { functions: options.functions ?? SPAN_EXPORTS, learned: new Map(), mismatched: new Map(), onCall: options.onSpanCall };
-    attachContext(this.hf.dependencyGraph, this.context);
-    this.hf.batch(() => {
-      for (const sheet of sheets) {
-        const name = this.hf.addSheet(sheet.name);
-        const id = this.sheetId(name);
-        const cells = sheet.cells.map((row, r) => row.map((input, c) => this.prepare({ sheet: id, row: r, col: c }, input)));
-        this.hf.setSheetContent(id, cells);
+    registerSinglePlugin();
+    for (const sheet of sheets) {
+      const widest = sheet.cells.reduce((most, row) => Math.max(most, row?.length ?? 0), 0);
+      if (sheet.cells.length > SHEET_LIMITS.rows || widest > SHEET_LIMITS.cols) {
+        throw new RangeError(`sheet "${sheet.name}" is larger than a spreadsheet allows (${SHEET_LIMITS.rows} rows, ${SHEET_LIMITS.cols} columns)`);
       }
+    }
+    this.context = {
+      functions: options.functions ?? SPAN_EXPORTS,
+      learned: new Map(),
+      mismatched: new Map(),
+      computed: new Map(),
+      reserved: new Map(),
+      onCall: options.onSpanCall,
+      textAt: (address) => this.textAt(address),
+    };
+    this.building = sheets;
+    const contents: Record<string, CellInput[][]> = {};
+    sheets.forEach((sheet, id) => {
+      if (Object.prototype.hasOwnProperty.call(contents, sheet.name)) throw new RangeError(`two sheets are named "${sheet.name}"`);
+      contents[sheet.name] = sheet.cells.map((row, r) => this.preparedRow(id, r, row ?? []));
     });
+    // Built from all sheets at once: an empty engine filled in a batch exports every change
+    // when the batch ends, and the engine joins spilled changes by copying (quadratic).
+    this.hf = buildingWith(this.context, () =>
+      HyperFormula.buildFromSheets(contents as never, CONFIG, namedExpressions(options.names ?? [])),
+    );
+    attachContext(this.hf.dependencyGraph, this.context);
+    this.building = undefined;
     this.settle();
+  }
+
+  /** A row as the engine takes it: the row itself when nothing in it changes (big sheets: no copy). */
+  private preparedRow(sheet: number, row: number, cells: readonly CellInput[]): CellInput[] {
+    let out: CellInput[] | undefined;
+    for (let col = 0; col < cells.length; col++) {
+      const input = cells[col];
+      if (typeof input !== "string" || !input.startsWith("=")) continue;
+      const prepared = this.prepare({ sheet, row, col }, input);
+      if (prepared === input) continue;
+      out ??= cells.slice();
+      out[col] = prepared;
+    }
+    return out ?? (cells as CellInput[]);
+  }
+
+  /** While the sheets are first read, their inputs; afterwards the engine's value cells. */
+  private building: readonly SheetInput[] | undefined;
+
+  private textAt(address: CellAddress): string | undefined {
+    const input = this.building ? this.building[address.sheet]?.cells[address.row]?.[address.col] : this.valueAt(address);
+    return typeof input === "string" && !input.startsWith("=") ? input : undefined;
+  }
+
+  private valueAt(address: CellAddress): unknown {
+    const vertex = (this.hf.dependencyGraph as unknown as { getCell(a: CellAddress): unknown }).getCell(address) as { getValues?: () => { rawValue: unknown } } | undefined;
+    return vertex && typeof vertex.getValues === "function" ? vertex.getValues().rawValue : undefined;
   }
 
   sheetNames(): string[] {
@@ -91,16 +160,18 @@ export class SpanWorkbook {
     return { rows: height, cols: width };
   }
 
-  /** Sets cells from a top-left corner, then recalculates what depends on them. */
+  /**
+   * Sets cells from a top-left corner, then recalculates what depends on them. The block goes
+   * to the engine in one call (many single-cell calls in one batch cost quadratic time).
+   */
   setCells(sheet: number, top: number, left: number, block: readonly (readonly CellInput[])[]): void {
-    this.hf.batch(() => {
-      block.forEach((row, r) =>
-        row.forEach((input, c) => {
-          const address = { sheet, row: top + r, col: left + c };
-          this.hf.setCellContents(address, [[this.prepare(address, input)]]);
-        }),
-      );
-    });
+    // Array.from, not block.map: a block from another frame (the pane writing into the workbench)
+    // would map into that frame's arrays, which the engine does not take for arrays.
+    const prepared = Array.from(block, (row, r) => Array.from(row, (input, c) => this.prepare({ sheet, row: top + r, col: left + c }, input)));
+    const width = prepared[0]?.length ?? 0;
+    if (width === 0) return;
+    if (prepared.every((row) => row.length === width)) this.hf.setCellContents({ sheet, row: top, col: left }, prepared as never);
+    else this.hf.batch(() => prepared.forEach((row, r) => row.length > 0 && this.hf.setCellContents({ sheet, row: top + r, col: left }, [row] as never)));
     this.settle();
   }
 
@@ -138,6 +209,8 @@ export class SpanWorkbook {
 
   /** Size of the array a formula cell spills into, when it spills (more than one cell). */
   spillSize(sheet: number, row: number, col: number): BlockSize | undefined {
+    // While the engine is being built nothing has spilled yet (settle() resolves A1# after).
+    if (this.hf === undefined) return undefined;
     const vertex = (this.hf.dependencyGraph as unknown as { getCell(a: CellAddress): unknown }).getCell({ sheet, row, col }) as
       | { width?: unknown; height?: unknown; isLeftCorner?: (a: CellAddress) => boolean }
       | undefined;
@@ -191,7 +264,7 @@ export class SpanWorkbook {
   /** The typed formula as the engine takes it: saved forms normalized, `A1#` resolved. */
   private engineText(address: CellAddress, formula: string): string {
     return expandSpillReferences(normalizeFormula(formula), (reference, written) => {
-      const sheet = reference.sheetName === undefined ? address.sheet : this.hf.getSheetId(reference.sheetName);
+      const sheet = reference.sheetName === undefined ? address.sheet : this.hf?.getSheetId(reference.sheetName);
       const size = sheet === undefined ? undefined : this.spillSize(sheet, reference.row, reference.col);
       if (!size) return "#REF!";
       return `${written}:${columnLetters(reference.col + size.cols - 1)}${reference.row + size.rows}`;

@@ -1,4 +1,4 @@
-import { SpanWorkbook } from "../../src/engine";
+import { SpanWorkbook, SPAN_EXPORTS } from "../../src/engine";
 import { deflection, diagram, extremes, maxMoment, moment, reactions, shear } from "../../functions/functions";
 import { block, direct } from "./support/direct";
 
@@ -102,5 +102,56 @@ describe("SpanWorkbook", () => {
     expect(block(values2, 0, 2, 4, 3)).toEqual(expected);
     expect(values2[0][5]).toBeCloseTo(expected.flat().reduce((a, b) => a + b, 0), 9);
     expect(block(values2, 0, 6, 2, 2)).toEqual(direct(() => maxMoment([[spans]], [[loads]])));
+  });
+});
+
+describe("SpanWorkbook sizes, single evaluation and @", () => {
+  it("evaluates each SPAN call once, a spans list typed in one cell included", () => {
+    const calls: Record<string, number> = {};
+    const counted = Object.fromEntries(
+      Object.entries(SPAN_EXPORTS).map(([name, fn]) => [name, (...args: unknown[]) => ((calls[name] = (calls[name] ?? 0) + 1), fn(...args))]),
+    ) as typeof SPAN_EXPORTS;
+    const wb = new SpanWorkbook(
+      [{ name: "S", cells: [[spans, loads, "=SPAN.REACTIONS(A1,B1)", null, null, "=SPAN.DIAGRAM(A1,B1,5)", null, null, null, null, "=_xldudf_SPAN_MAXMOMENT(A1,B1)"]] }],
+      { functions: counted },
+    );
+    expect(wb.spillSize(0, 0, 2)).toEqual({ rows: 4, cols: 3 });
+    expect(wb.spillSize(0, 0, 5)?.rows).toBe(direct(() => diagram([[spans]], [[loads]], 5)).length);
+    // DIAGRAM's rows are learned from its first evaluation; the learned result is kept, not recomputed.
+    expect(calls).toEqual({ reactions: 1, diagram: 1, maxMoment: 1 });
+    wb.setCell(0, 0, 0, "5 5");
+    expect(wb.spillSize(0, 0, 2)).toEqual({ rows: 3, cols: 3 });
+    expect(calls).toEqual({ reactions: 2, diagram: 2, maxMoment: 2 });
+  });
+
+  it("takes sheets past the engine's default 40,000 rows, up to the host's 1,048,576", () => {
+    const cells: (string | number | null)[][] = Array.from({ length: 60_000 }, () => []);
+    cells[59_999] = [6, "=A60000*2"];
+    const wb = new SpanWorkbook([{ name: "Tall", cells }]);
+    expect(wb.getValue(0, 59_999, 1)).toBe(12);
+    expect(() => new SpanWorkbook([{ name: "Huge", cells: Array.from({ length: 1_048_577 }, () => []) }])).toThrow(/1048576 rows/);
+  });
+
+  it("reads _xlfn.SINGLE (an explicit @) as implicit intersection", () => {
+    // Microsoft support, "Implicit intersection operator: @": a range gives the cell in the
+    // formula's row or column, an array its top-left value, a single value itself.
+    const wb = new SpanWorkbook([
+      {
+        name: "S",
+        cells: [
+          [10, "=_xlfn.SINGLE(A1:A3)", "=_xlfn.SINGLE(_xldudf_SPAN_REACTIONS(\"6 8 6\",\"udl 2.5 D; point 10 at 3 L\"))", "=_xlfn.SINGLE(A1:B2)"],
+          [20, "=_xlfn.SINGLE(A1:A3)", "=_xlfn.SINGLE(7)", "=_xlfn.SINGLE(A1:A2)"],
+          [30],
+          [null, null, null, null],
+        ],
+      },
+    ]);
+    expect(wb.getValue(0, 0, 1)).toBe(10);
+    expect(wb.getValue(0, 1, 1)).toBe(20);
+    expect(wb.getValue(0, 0, 2)).toBe(0); // REACTIONS' first cell is the x of node 1
+    expect(wb.getValue(0, 1, 2)).toBe(7);
+    expect(wb.getValue(0, 0, 3)).toMatchObject({ error: "#VALUE!" });
+    expect(wb.getValue(0, 1, 3)).toBe(20);
+    expect(wb.spillSize(0, 0, 2)).toBeUndefined();
   });
 });
