@@ -239,7 +239,7 @@ async function growth(functions: Record<string, Fn>): Promise<void> {
 }
 
 /** Rows for other scripts (the profile run, rowProfile.ts). */
-export { rows };
+export { rows, growthMember };
 
 function scheduleRows(): void {
   const list = rows(9000, 1000);
