@@ -1,18 +1,20 @@
 /**
- * Solved members, keyed on the raw member arguments, so that a diagram, or many x-cells of
- * one member, solve once. Solving is pure, so a cached solution is always the right one.
+ * Solved members, keyed on the raw member arguments, so that a diagram, many x-cells of one
+ * member, or a schedule row asking several functions about one member, solve once. Solving is
+ * pure, so a cached solution is always the right one.
  *
- * The hot path is lean: a 32-bit hash of the cell values (no strings built, no parsing)
- * finds the entry, and a cell-by-cell comparison with a copy of the arguments it was solved
- * from confirms it, so a hash collision is only ever a miss. Different spellings of one
- * member (6 vs "6", a range vs a text cell) just get separate entries. Least recently used
- * entries are dropped beyond the capacity.
+ * The hot path is lean: the member used last is compared cell by cell first (no hashing);
+ * otherwise a 32-bit hash of the cell values (no strings built, no parsing) finds the entry
+ * and a cell-by-cell comparison with a copy of the arguments it was solved from confirms it,
+ * so a hash collision is only ever a miss. Different spellings of one member (6 vs "6", a
+ * range vs a text cell) just get separate entries.
  *
- * Admission on second sight: a member is kept in the cache only when its hash has been seen
- * before (a small table of recent hashes, no allocation). A schedule of thousands of distinct
- * members then retains nothing for the garbage collector to promote, which halves the cost
- * of a parametric study, while a member read twice (many x-cells, a diagram after a moment)
- * is cached from its second call on. The member solved last is always kept for the next call.
+ * Two tiers (see MemberCache): the last RECENT_MEMBERS (8) members, each as a flat copy of
+ * its cells in a buffer the slot reuses, and up to MEMBER_CACHE_SIZE (256) members admitted
+ * on second sight (their hash was seen before, from a table of 4,096 recent hashes), each
+ * with a structured copy of its arguments, least recently used dropped first. A schedule of
+ * thousands of distinct members therefore retains only the recent tier, while a member that
+ * comes back after leaving it is cached from then on.
  */
 import type { Solution } from "../core";
 import type { MemberArgs } from "./member";
@@ -133,73 +135,217 @@ function copyOf(args: MemberArgs): MemberArgs {
 /** Slots of the table of recently seen hashes (a power of two). */
 const SEEN_SLOTS = 4096;
 
+/** How many recently solved members are kept as a flat copy of their cells (a row's members). */
+export const RECENT_MEMBERS = 8;
+
+/** Marks the start of an array in a flat copy (followed by its length); never a cell value. */
+const ARRAY_MARK: object = Object.freeze({});
+
+/** Writes an argument's cells into `cells` from index n (arrays as mark, length, items); the next index. */
+function flatten(arg: unknown, cells: unknown[], n: number): number {
+  if (Array.isArray(arg)) {
+    cells[n++] = ARRAY_MARK;
+    cells[n++] = arg.length;
+    for (let i = 0; i < arg.length; i++) n = flatten(arg[i], cells, n);
+    return n;
+  }
+  cells[n] = arg ?? null;
+  return n + 1;
+}
+
+/** The index after the argument when `cells` from n hold exactly its cells (as sameCells judges), else -1. */
+function matchFlat(arg: unknown, cells: unknown[], n: number): number {
+  if (Array.isArray(arg)) {
+    if (cells[n] !== ARRAY_MARK || cells[n + 1] !== arg.length) return -1;
+    n += 2;
+    for (let i = 0; i < arg.length && n >= 0; i++) n = matchFlat(arg[i], cells, n);
+    return n;
+  }
+  return cells[n] === (arg ?? null) ? n + 1 : -1;
+}
+
+/** One recently solved member: its hash, a flat copy of its cells (a buffer reused slot by slot) and its solution. */
+export interface Recent {
+  hash: number;
+  cells: unknown[];
+  size: number;
+  solution: Solution | undefined;
+}
+
+function flattenArgs(args: MemberArgs, cells: unknown[]): number {
+  let n = flatten(args.spans, cells, 0);
+  n = flatten(args.loads, cells, n);
+  n = flatten(args.supports, cells, n);
+  n = flatten(args.EI, cells, n);
+  n = flatten(args.combo, cells, n);
+  return flatten(args.units ?? null, cells, n);
+}
+
+function matchesRecent(args: MemberArgs, slot: Recent): boolean {
+  if (slot.solution === undefined) return false;
+  const { cells } = slot;
+  let n = matchFlat(args.spans, cells, 0);
+  if (n >= 0) n = matchFlat(args.loads, cells, n);
+  if (n >= 0) n = matchFlat(args.supports, cells, n);
+  if (n >= 0) n = matchFlat(args.EI, cells, n);
+  if (n >= 0) n = matchFlat(args.combo, cells, n);
+  if (n >= 0) n = matchFlat(args.units ?? null, cells, n);
+  return n === slot.size;
+}
+
+/** A flat copy of member arguments and whether arguments match it: the recent tier's comparison, exported for tests. */
+export function flatCopy(args: MemberArgs): Recent {
+  const cells: unknown[] = [];
+  return { hash: 0, cells, size: flattenArgs(args, cells), solution: {} as Solution };
+}
+
+export function matchesFlatCopy(args: MemberArgs, copy: Recent): boolean {
+  return matchesRecent(args, copy);
+}
+
 interface Entry {
   args: MemberArgs;
   solution: Solution;
 }
 
-/** Solutions keyed on the raw member arguments. */
+/** What the cache did, for tests and benchmarks (never for timing). */
+export interface CacheCounts {
+  /** Lookups that found nothing: each is followed by exactly one solve. */
+  misses: number;
+  /** Lookups answered by a recent member. */
+  recentHits: number;
+  /** Lookups answered by the least-recently-used cache. */
+  cachedHits: number;
+  /** Members copied into the least-recently-used cache (on second sight). */
+  admitted: number;
+}
+
+/**
+ * Solutions keyed on the raw member arguments, in two tiers:
+ * - the last RECENT_MEMBERS members solved or found, each as a flat copy of its cells written
+ *   into a buffer the slot reuses (no allocation once the buffer has grown), so a spreadsheet
+ *   row that asks several functions about a few members solves each member once;
+ * - up to `capacity` members admitted on second sight (their hash was seen before, so they came
+ *   back after leaving the recent tier), each with a structured copy of its arguments.
+ * Both confirm a hash match cell by cell, so a hash collision is only ever a miss.
+ */
 export class MemberCache {
   private readonly entries: LruCache<number, Entry>;
-  /** The entry used last: already the most recent, so a repeat hit skips the LRU update. */
-  private lastHash = -1;
-  private lastEntry: Entry | undefined = undefined;
+  private readonly recent: Recent[] = [];
+  /** The slot looked at first (the one used last) and the slot overwritten next. */
+  private newest = 0;
+  private nextSlot = 0;
   /** Hashes seen recently, one per slot (0 = empty). */
   private readonly seen = new Uint32Array(SEEN_SLOTS);
-  constructor(readonly capacity: number) {
+  /** The arguments of the last miss and their hash, so keeping its solution does not hash again. */
+  private missArgs: MemberArgs | undefined = undefined;
+  private missHash: number | null = null;
+  readonly counts: CacheCounts = { misses: 0, recentHits: 0, cachedHits: 0, admitted: 0 };
+
+  constructor(
+    readonly capacity: number,
+    readonly recentCapacity: number = RECENT_MEMBERS,
+  ) {
     this.entries = new LruCache(capacity);
+    for (let i = 0; i < recentCapacity; i++) this.recent.push({ hash: 0, cells: [], size: 0, solution: undefined });
   }
 
+  /** Members in the least-recently-used tier. */
   get size(): number {
     return this.entries.size;
   }
 
+  /** Members in the recent tier. */
+  get recentSize(): number {
+    return this.recent.filter((slot) => slot.solution !== undefined).length;
+  }
+
   /**
-   * The solution of the last member used, when these arguments hold the same cells: the
-   * common case of many x-cells of one member, answered without even hashing.
+   * The solution for exactly these arguments, if kept: the member used last is checked first
+   * without hashing (many x-cells of one member), then the recent members, then the cache.
    */
-  getLast(args: MemberArgs): Solution | undefined {
-    const entry = this.lastEntry;
+  find(args: MemberArgs): Solution | undefined {
+    const first = this.recent[this.newest];
+    if (first !== undefined && matchesRecent(args, first)) {
+      this.counts.recentHits++;
+      return first.solution;
+    }
+    const hash = memberHash(args);
+    this.missArgs = args;
+    this.missHash = hash;
+    if (hash === null) {
+      this.counts.misses++;
+      return undefined;
+    }
+    for (let i = 0; i < this.recent.length; i++) {
+      const slot = this.recent[i];
+      if (i !== this.newest && slot.hash === hash && matchesRecent(args, slot)) {
+        this.newest = i;
+        this.counts.recentHits++;
+        return slot.solution;
+      }
+    }
+    const cached = this.get(args, hash);
+    if (cached !== undefined) {
+      this.counts.cachedHits++;
+      this.putRecent(args, hash, cached);
+      return cached;
+    }
+    this.counts.misses++;
+    return undefined;
+  }
+
+  /**
+   * Keeps a fresh solution of these arguments (after a miss): among the recent members, and
+   * in the cache when its hash was seen before (the member came back).
+   */
+  keep(args: MemberArgs, solution: Solution): void {
+    const hash = args === this.missArgs ? this.missHash : memberHash(args);
+    this.missArgs = undefined;
+    if (hash === null) return;
+    const slot = hash & (SEEN_SLOTS - 1);
+    const tag = hash === 0 ? 1 : hash;
+    if (this.seen[slot] === tag) this.set(args, hash, solution);
+    else this.seen[slot] = tag;
+    this.putRecent(args, hash, solution);
+  }
+
+  /** The solution in the cache tier for exactly these arguments, if any. */
+  get(args: MemberArgs, hash: number): Solution | undefined {
+    const entry = this.entries.get(hash);
     return entry !== undefined && sameArgs(entry.args, args) ? entry.solution : undefined;
   }
 
-  /** The solution cached for exactly these arguments, if any. */
-  get(args: MemberArgs, hash: number): Solution | undefined {
-    const entry = hash === this.lastHash ? this.lastEntry : this.entries.get(hash);
-    if (entry === undefined) return undefined;
-    this.lastHash = hash;
-    this.lastEntry = entry;
-    return sameArgs(entry.args, args) ? entry.solution : undefined;
-  }
-
+  /** Admits a member to the cache tier, with a copy of its arguments. */
   set(args: MemberArgs, hash: number, solution: Solution): void {
-    const entry = { args: copyOf(args), solution };
-    this.entries.set(hash, entry);
-    this.lastHash = hash;
-    this.lastEntry = entry;
+    this.counts.admitted++;
+    this.entries.set(hash, { args: copyOf(args), solution });
   }
 
-  /**
-   * Keeps a fresh solution: in the cache when its hash was seen before, otherwise only as
-   * the last member used (and its hash is remembered for next time).
-   */
-  remember(args: MemberArgs, hash: number, solution: Solution): void {
-    const slot = hash & (SEEN_SLOTS - 1);
-    const tag = hash === 0 ? 1 : hash;
-    if (this.seen[slot] === tag) {
-      this.set(args, hash, solution);
-      return;
-    }
-    this.seen[slot] = tag;
-    this.lastHash = -1;
-    this.lastEntry = { args: copyOf(args), solution };
+  private putRecent(args: MemberArgs, hash: number, solution: Solution): void {
+    if (this.recent.length === 0) return;
+    const index = this.nextSlot;
+    const slot = this.recent[index];
+    slot.hash = hash;
+    slot.size = flattenArgs(args, slot.cells);
+    slot.solution = solution;
+    this.newest = index;
+    this.nextSlot = (index + 1) % this.recent.length;
   }
 
+  /** Forgets every member, the seen hashes and the counts. */
   clear(): void {
     this.entries.clear();
     this.seen.fill(0);
-    this.lastHash = -1;
-    this.lastEntry = undefined;
+    for (const slot of this.recent) {
+      slot.cells.length = 0;
+      slot.size = 0;
+      slot.solution = undefined;
+    }
+    this.newest = 0;
+    this.nextSlot = 0;
+    this.missArgs = undefined;
+    this.counts.misses = this.counts.recentHits = this.counts.cachedHits = this.counts.admitted = 0;
   }
 }
 

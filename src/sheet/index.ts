@@ -12,7 +12,7 @@ export { isEmpty, isBlank, errorCodeOf, numberFromText, readNumber, readText, sh
 export { rowsOf, singleCell, isOmitted, isAllBlank, vectorCells, splitList, listEntries } from "./ranges";
 export { mapPositions, orBlank, finite } from "./shape";
 export { hostError, describeError, guarded, MESSAGE_LIMIT } from "./hostError";
-export { memberHash, sameCells, LruCache, MemberCache, solvedMembers, MEMBER_CACHE_SIZE } from "./cache";
+export { memberHash, sameCells, LruCache, MemberCache, solvedMembers, MEMBER_CACHE_SIZE, RECENT_MEMBERS } from "./cache";
 export { readUnit, readMemberUnits, memberInSI, memberInOwnUnits, UNIT_KEYS } from "./units";
 export type { MemberUnits } from "./units";
 export { sheetSection, readShape, readDimensions, SECTION_ROWS } from "./section";

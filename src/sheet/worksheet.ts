@@ -5,7 +5,7 @@
  */
 import { diagram, extremes, invalid, solve, unavailable, valueAt, type Quantity, type Solution } from "../core";
 import { errorCodeOf, isEmpty, readNumber } from "./cells";
-import { memberHash, solvedMembers } from "./cache";
+import { solvedMembers } from "./cache";
 import { guarded } from "./hostError";
 import { readMember, type MemberArgs } from "./member";
 import { memberInOwnUnits, readMemberUnits, type MemberUnits } from "./units";
@@ -25,17 +25,12 @@ export const MAX_POINTS = 10001;
  * converted and a node stays exactly the node the user typed.
  */
 export function solvedMember(args: MemberArgs, units?: MemberUnits | null): Solution {
-  const last = solvedMembers.getLast(args);
-  if (last !== undefined) return last;
-  const hash = memberHash(args);
-  if (hash !== null) {
-    const cached = solvedMembers.get(args, hash);
-    if (cached !== undefined) return cached;
-  }
+  const kept = solvedMembers.find(args);
+  if (kept !== undefined) return kept;
   const given = units === undefined ? readMemberUnits(args.units ?? null) : units;
   const member = readMember(args);
   const solution = solve(given === null ? member : memberInOwnUnits(member, given));
-  if (hash !== null) solvedMembers.remember(args, hash, solution);
+  solvedMembers.keep(args, solution);
   return solution;
 }
 

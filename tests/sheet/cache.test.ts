@@ -1,6 +1,6 @@
 import * as core from "../../src/core";
-import { LruCache, MemberCache, memberHash, sameCells, solvedMembers } from "../../src/sheet/cache";
-import { solvedMember } from "../../src/sheet/worksheet";
+import { flatCopy, LruCache, matchesFlatCopy, MemberCache, memberHash, RECENT_MEMBERS, sameCells, solvedMembers } from "../../src/sheet/cache";
+import { sheetMaxMoment, sheetReactions, sheetValuesAt, solvedMember } from "../../src/sheet/worksheet";
 import type { MemberArgs } from "../../src/sheet/member";
 
 const args = (partial: Partial<MemberArgs> = {}): MemberArgs => ({ spans: [[6, 8]], loads: [["udl", 2, "", "", "", "D"]], supports: null, EI: null, combo: null, ...partial });
@@ -66,6 +66,42 @@ describe("MemberCache", () => {
     for (const [, change] of changes) expect(cache.get(args(change), 42)).toBeUndefined();
   });
 
+  test.each(changes)("recent tier: %s makes the flat copy differ, exactly when the cells differ", (_label, change) => {
+    const copy = flatCopy(args());
+    expect(matchesFlatCopy(args(), copy)).toBe(true);
+    expect(matchesFlatCopy(args(change), copy)).toBe(false);
+    expect(matchesFlatCopy(args(), flatCopy(args(change)))).toBe(false);
+  });
+
+  test("recent tier: a longer or shorter member never matches a copy's prefix", () => {
+    const long = args({ spans: [[6, 8, 4]] });
+    expect(matchesFlatCopy(args(), flatCopy(long))).toBe(false);
+    expect(matchesFlatCopy(long, flatCopy(args()))).toBe(false);
+  });
+
+  test("recent tier: later edits to the caller's arrays do not change what was kept", () => {
+    const cache = new MemberCache(4);
+    const given = args();
+    expect(cache.find(given)).toBeUndefined();
+    cache.keep(given, solution);
+    expect(cache.find(args())).toBe(solution);
+    (given.spans as number[][])[0][0] = 99;
+    expect(cache.find(given)).toBeUndefined();
+    expect(cache.find(args())).toBe(solution);
+  });
+
+  test("recent tier is bounded by its capacity, reusing its slots", () => {
+    const cache = new MemberCache(4, 3);
+    for (let i = 0; i < 10; i++) {
+      const a = args({ spans: [[6, 8 + i]] });
+      cache.find(a);
+      cache.keep(a, solution);
+    }
+    expect(cache.recentSize).toBe(3);
+    expect(cache.find(args({ spans: [[6, 17]] }))).toBe(solution);
+    expect(cache.find(args({ spans: [[6, 14]] }))).toBeUndefined();
+  });
+
   test("later edits to the caller's arrays do not change what was cached", () => {
     const cache = new MemberCache(4);
     const given = args();
@@ -92,11 +128,9 @@ describe("solvedMember", () => {
     }
   });
 
-  test("alternating members (two diagrams on one sheet) solve at most twice each: on first sight and when admitted", () => {
+  test("alternating members (two diagrams on one sheet) solve once each", () => {
     const spy = jest.spyOn(core, "solve");
     try {
-      solvedMember(args());
-      solvedMember(args({ combo: "D" }));
       const a = solvedMember(args());
       const b = solvedMember(args({ combo: "D" }));
       expect(b).not.toBe(a);
@@ -104,7 +138,44 @@ describe("solvedMember", () => {
         expect(solvedMember(args())).toBe(a);
         expect(solvedMember(args({ combo: "D" }))).toBe(b);
       }
-      expect(spy).toHaveBeenCalledTimes(4);
+      expect(spy).toHaveBeenCalledTimes(2);
+      expect(solvedMembers.counts.misses).toBe(2);
+    } finally {
+      spy.mockRestore();
+    }
+  });
+
+  test(`up to ${RECENT_MEMBERS} members used in turn solve once each; one more and they come back through the cache`, () => {
+    const member = (i: number): MemberArgs => args({ spans: [[6, 8 + i]] });
+    for (let pass = 0; pass < 3; pass++) for (let i = 0; i < RECENT_MEMBERS; i++) solvedMember(member(i));
+    expect(solvedMembers.counts.misses).toBe(RECENT_MEMBERS);
+    expect(solvedMembers.size).toBe(0);
+    solvedMembers.clear();
+    const more = RECENT_MEMBERS + 1;
+    for (let pass = 0; pass < 3; pass++) for (let i = 0; i < more; i++) solvedMember(member(i));
+    // First pass: each solved once; second pass: each comes back after leaving the recent tier
+    // and is admitted; third pass: all answered from the cache.
+    expect(solvedMembers.counts.misses).toBe(2 * more);
+    expect(solvedMembers.size).toBe(more);
+  });
+
+  test("a schedule row (MAXMOMENT, REACTIONS, DEFLECTION of another combination, SHEAR of one member) solves once per member", () => {
+    const spy = jest.spyOn(core, "solve");
+    try {
+      const rows = 40;
+      for (let r = 0; r < rows; r++) {
+        const spans = [[6, 8 + r / 4, 5]];
+        const loads = [["udl", 2, "", "", "", "D"], ["point", 10, 3 + r / 8, "", "", "L"]];
+        expect(sheetMaxMoment(spans, loads, null, null, "1.2D+1.6L")[0][0]).toEqual(expect.any(Number));
+        expect(sheetReactions(spans, loads, null, null, "1.2D+1.6L")).toHaveLength(4);
+        expect(sheetValuesAt("deflection", spans, loads, [[3]], null, [[2e4]], "D+L")[0][0]).toEqual(expect.any(Number));
+        expect(sheetValuesAt("shear", spans, loads, [[3]], null, null, "1.2D+1.6L")[0][0]).toEqual(expect.any(Number));
+      }
+      // Two members per row: the strength combination (three functions) and the other one.
+      expect(solvedMembers.counts.misses).toBe(2 * rows);
+      expect(spy).toHaveBeenCalledTimes(2 * rows);
+      expect(solvedMembers.counts.recentHits).toBe(2 * rows);
+      expect(solvedMembers.size).toBe(0);
     } finally {
       spy.mockRestore();
     }
@@ -113,6 +184,7 @@ describe("solvedMember", () => {
   test("a schedule of distinct members keeps nothing (admission on second sight)", () => {
     for (let i = 0; i < 50; i++) solvedMember(args({ spans: [[6, 8 + i]] }));
     expect(solvedMembers.size).toBe(0);
+    expect(solvedMembers.recentSize).toBe(RECENT_MEMBERS);
   });
 
   test("the cache is bounded", () => {

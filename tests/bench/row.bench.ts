@@ -1,0 +1,276 @@
+/**
+ * Per-row and growth benchmarks of the production build (printed, never asserted; targets
+ * from issue 15). Runs dist/functions.js (build it first: `npx webpack --mode production`),
+ * loaded with a stand-in CustomFunctions that records what the bundle associates, so the
+ * code measured is the code users run (no name-keeping transform, see ../shared/TOOLCHAIN.md
+ * "Benchmarks").
+ *
+ * 1. Per row: 20,000 distinct 3-span members on pins, each span with a full-span UDL and a
+ *    point load, given as a schedule row gives them (spans and loads as text cells), one
+ *    SPAN.MAXMOMENT per row, against the lean yardstick (yardstick.ts) on the same members in
+ *    the same process. Target: at most 3 times the yardstick. Every row's answer is checked
+ *    against the yardstick's to 1e-9 (the bench says how many agree).
+ * 2. Growth: one SPAN.MAXMOMENT of a 1,000-span and of a 10,000-span member given as ranges
+ *    (pins, one UDL over the whole member and a point load on every other span; a fresh load
+ *    magnitude each call so the member cache never answers). Target: 10,000 spans at most 12 times 1,000.
+ *    Garbage collection's share of the time is printed (perf_hooks gc entries).
+ *
+ * 3. Schedule rows: MAXMOMENT, REACTIONS, DEFLECTION (another combination) and SHEAR of one
+ *    member per row, through the sources, counting solves with the member cache's counter.
+ *    Target: one solve per member per row (here two members a row).
+ *
+ * Invented data from a seeded generator. Usage: node tests/bench/run.js row
+ */
+import * as fs from "fs";
+import * as os from "os";
+import * as path from "path";
+import { PerformanceObserver, performance } from "perf_hooks";
+import { sheetMaxMoment, sheetReactions, sheetValuesAt, solvedMembers } from "../../src/sheet";
+import { yardstickMaxMoment, type YardstickBeam } from "./yardstick";
+
+const ROWS = 20000;
+const PASSES = 3;
+const AGREEMENT = 1e-9;
+
+type Fn = (...args: unknown[]) => unknown;
+
+function loadBundle(): Record<string, Fn> {
+  const file = path.join(__dirname, "..", "..", "dist", "functions.js");
+  if (!fs.existsSync(file)) throw new Error(`${file} is missing: run npx webpack --mode production first`);
+  const functions: Record<string, Fn> = {};
+  const host = globalThis as unknown as { CustomFunctions?: unknown };
+  host.CustomFunctions = {
+    associate(name: string, fn: Fn) {
+      functions[name] = fn;
+    },
+  };
+  // The production bundle is a plain script that calls CustomFunctions.associate; it has no module exports.
+  // eslint-disable-next-line @typescript-eslint/no-require-imports
+  require(file);
+  return functions;
+}
+
+function random(seed: number): () => number {
+  let state = seed >>> 0;
+  return () => {
+    state = (Math.imul(state, 1664525) + 1013904223) >>> 0;
+    return state / 4294967296;
+  };
+}
+
+const twoPlaces = (v: number): string => v.toFixed(2);
+
+interface Row {
+  spansText: string;
+  loadsText: string;
+  /** The same member as ranges: a row of spans and a load table (numbers in cells). */
+  spansRange: number[][];
+  loadsRange: (string | number)[][];
+  beam: YardstickBeam;
+}
+
+/** 3-span rows; every number is written with two decimals and the yardstick reads the same text. */
+function rows(seed: number, count: number): Row[] {
+  const next = random(seed);
+  const out: Row[] = [];
+  for (let r = 0; r < count; r++) {
+    const spanText = [0, 1, 2].map(() => twoPlaces(3 + 5 * next()));
+    const spans = spanText.map(Number);
+    const udlText = spans.map(() => twoPlaces(0.5 + 4 * next()));
+    const pointText = spans.map(() => twoPlaces(2 + 20 * next()));
+    const loads: string[] = [];
+    const at: number[] = [];
+    let x0 = 0;
+    let x0Text = "0";
+    spans.forEach((l, e) => {
+      const endText = e === 2 ? "" : twoPlaces(x0 + l);
+      const xText = twoPlaces(x0 + l * (0.1 + 0.8 * next()));
+      loads.push(`udl ${udlText[e]}${e > 0 ? ` from ${x0Text}` : ""}${endText ? ` to ${endText}` : ""}`);
+      loads.push(`point ${pointText[e]} at ${xText}`);
+      at.push(Number(xText) - x0);
+      x0 += l;
+      x0Text = endText;
+    });
+    // The sheet places nodes at the running sum of the spans and each point load at its
+    // written position, so the yardstick takes the same spans and offsets from those sums.
+    const table: (string | number)[][] = [];
+    let start = 0;
+    spans.forEach((l, e) => {
+      table.push(["udl", Number(udlText[e]), start, start + l, "", ""]);
+      table.push(["point", Number(pointText[e]), start + at[e], "", "", ""]);
+      start += l;
+    });
+    out.push({ spansText: spanText.join(" "), loadsText: loads.join("; "), spansRange: [spans], loadsRange: table, beam: { spans, udl: udlText.map(Number), point: pointText.map(Number), at } });
+  }
+  return out;
+}
+
+/** CPU time of this process in ms (user + system): on a loaded machine it counts only the time this process ran. */
+function cpuMs(): number {
+  const u = process.cpuUsage();
+  return (u.user + u.system) / 1000;
+}
+
+/** Repeats of the yardstick's rows per pass, so its timed window is not a single scheduler slice. */
+const YARD_REPEATS = 20;
+
+function median(values: number[]): number {
+  const sorted = values.slice().sort((a, b) => a - b);
+  return sorted[Math.floor(sorted.length / 2)];
+}
+
+type RowCall = (row: Row) => number[][];
+
+/** Median CPU and wall microseconds per row of `call` over passes of distinct rows; checks pass 0 against the yardstick. */
+function timeRows(passes: Row[][], call: RowCall, check: boolean): { cpu: number; wall: number; agree: number; worst: number; firstBad: string } {
+  const out = { max: 0, x: 0 };
+  let agree = 0;
+  let worst = 0;
+  let firstBad = "";
+  const cpus: number[] = [];
+  const walls: number[] = [];
+  passes.forEach((list, p) => {
+    const cpu = cpuMs();
+    const start = performance.now();
+    let sink = 0;
+    for (const row of list) {
+      const result = call(row);
+      sink += result[0][0];
+      if (p === 0 && check) {
+        yardstickMaxMoment(row.beam, out);
+        const scale = Math.max(Math.abs(result[0][0]), Math.abs(result[1][0]));
+        const diff = Math.abs(result[0][0] - out.max) / scale;
+        const length = row.beam.spans[0] + row.beam.spans[1] + row.beam.spans[2];
+        const xDiff = Math.abs(result[0][1] - out.x) / length;
+        worst = Math.max(worst, diff);
+        if (diff <= AGREEMENT && xDiff <= AGREEMENT) agree++;
+        else if (!firstBad) firstBad = `${row.spansText} | ${row.loadsText}: sheet ${result[0][0]} at ${result[0][1]}, yardstick ${out.max} at ${out.x}`;
+      }
+    }
+    if (!Number.isFinite(sink)) console.log("(non-finite sink)");
+    // Pass 0 warms up (and checks).
+    if (p > 0) {
+      cpus.push((1000 * (cpuMs() - cpu)) / list.length);
+      walls.push((1000 * (performance.now() - start)) / list.length);
+    }
+  });
+  return { cpu: median(cpus), wall: median(walls), agree, worst, firstBad };
+}
+
+function perRow(functions: Record<string, Fn>): void {
+  const maxMoment = functions.MAXMOMENT;
+  const passes = Array.from({ length: PASSES + 1 }, (_, p) => rows(1000 + p, ROWS));
+  const out = { max: 0, x: 0 };
+  const answer = [
+    [0, 0],
+    [0, 0],
+  ];
+  const yardstick: RowCall = (row) => {
+    yardstickMaxMoment(row.beam, out);
+    answer[0][0] = out.max;
+    answer[0][1] = out.x;
+    return answer;
+  };
+  // The yardstick's loop is repeated so that its timed window is not a single scheduler slice.
+  const yardPasses = passes.map((list) => Array.from({ length: YARD_REPEATS }, () => list).flat());
+  const yard = timeRows(yardPasses, yardstick, false);
+  const text = timeRows(passes, (row) => maxMoment([[row.spansText]], [[row.loadsText]], null, null, null) as number[][], true);
+  const ranges = timeRows(passes.map((list) => list.map((row) => row)), (row) => maxMoment(row.spansRange, row.loadsRange, null, null, null) as number[][], true);
+  console.log(`per row (CPU time, medians of ${PASSES} passes of ${ROWS} distinct 3-span members; wall time in brackets):`);
+  console.log(`  yardstick ${yard.cpu.toFixed(3)} us (${yard.wall.toFixed(3)})`);
+  for (const [label, t] of [["SPAN.MAXMOMENT, text cells", text], ["SPAN.MAXMOMENT, ranges", ranges]] as const) {
+    const ratio = t.cpu / yard.cpu;
+    console.log(`  ${label}: ${t.cpu.toFixed(2)} us (${t.wall.toFixed(2)}); ratio ${ratio.toFixed(1)} (target: at most 3 times the yardstick) ${ratio <= 3 ? "OK" : "OVER TARGET"}`);
+    console.log(`    agreement: ${t.agree} of ${ROWS} rows equal the yardstick to ${AGREEMENT} (largest moment difference ${t.worst.toExponential(1)} of scale)${t.firstBad ? `; first disagreement: ${t.firstBad}` : ""}`);
+  }
+}
+
+/**
+ * The growth member as ranges: a column of spans and a load table. (As text cells it would not
+ * fit: a cell holds at most 32,767 characters, Microsoft support "Excel specifications and
+ * limits", support.microsoft.com/office/c13798fc-f1d5-4e73-998d-c02268bc65ae.)
+ */
+function growthMember(spans: number): { spans: number[][]; points: (string | number)[][] } {
+  const lengths: number[][] = [];
+  const points: (string | number)[][] = [];
+  let x = 0;
+  for (let i = 0; i < spans; i++) {
+    const l = 4 + (i % 3);
+    lengths.push([l]);
+    if (i % 2 === 0) points.push(["point", 10, x + l / 2, "", "", ""]);
+    x += l;
+  }
+  return { spans: lengths, points };
+}
+
+async function growth(functions: Record<string, Fn>): Promise<void> {
+  const maxMoment = functions.MAXMOMENT;
+  let gcMs = 0;
+  let counting = false;
+  const observer = new PerformanceObserver((list) => {
+    if (counting) for (const entry of list.getEntries()) gcMs += entry.duration;
+  });
+  observer.observe({ entryTypes: ["gc"] });
+  const tick = () => new Promise((resolve) => setTimeout(resolve, 50));
+  const timeOf = async (spans: number, calls: number): Promise<{ ms: number; wall: number; gc: number }> => {
+    const m = growthMember(spans);
+    let magnitude = 1;
+    const call = () => maxMoment(m.spans, [["udl", (magnitude += 0.001), "", "", "", ""], ...m.points], null, null, null) as number[][];
+    // Warm-up: the same number of spans solved as in the timed calls of the 10,000-span case.
+    for (let i = 0; i < Math.max(2, 20000 / spans); i++) call();
+    await tick();
+    gcMs = 0;
+    counting = true;
+    const cpu = cpuMs();
+    const start = performance.now();
+    for (let i = 0; i < calls; i++) {
+      const result = call();
+      if (typeof result[0][0] !== "number") throw new Error(`growth member of ${spans} spans: ${JSON.stringify(result)}`);
+    }
+    const wall = (performance.now() - start) / calls;
+    const ms = (cpuMs() - cpu) / calls;
+    await tick();
+    counting = false;
+    return { ms, wall, gc: gcMs / calls };
+  };
+  const small = await timeOf(1000, 40);
+  const large = await timeOf(10000, 6);
+  observer.disconnect();
+  const ratio = large.ms / small.ms;
+  // gc entries are pause times (wall clock): their share is taken of the wall time.
+  const share = (t: { wall: number; gc: number }) => `gc ${((100 * t.gc) / t.wall).toFixed(0)}% of wall`;
+  console.log(`growth: 1,000 spans ${small.ms.toFixed(1)} ms CPU (${small.wall.toFixed(1)} wall, ${share(small)}), 10,000 spans ${large.ms.toFixed(1)} ms CPU (${large.wall.toFixed(1)} wall, ${share(large)})`);
+  console.log(`  ratio ${ratio.toFixed(1)} (target: at most 12) ${ratio <= 12 ? "OK" : "OVER TARGET"}`);
+}
+
+/** Rows for other scripts (the profile run, rowProfile.ts). */
+export { rows, growthMember, growth, loadBundle };
+
+function scheduleRows(): void {
+  const list = rows(9000, 1000);
+  solvedMembers.clear();
+  for (const row of list) {
+    const loads = row.loadsText
+      .split("; ")
+      .map((load) => `${load} ${load.startsWith("udl") ? "D" : "L"}`)
+      .join("; ");
+    sheetMaxMoment([[row.spansText]], [[loads]], null, null, "1.2D+1.6L");
+    sheetReactions([[row.spansText]], [[loads]], null, null, "1.2D+1.6L");
+    sheetValuesAt("deflection", [[row.spansText]], [[loads]], [[1]], null, [[2e4]], "D+L");
+    sheetValuesAt("shear", [[row.spansText]], [[loads]], [[1]], null, null, "1.2D+1.6L");
+  }
+  const { misses, recentHits, cachedHits } = solvedMembers.counts;
+  const perMember = misses / (2 * list.length);
+  console.log(`schedule rows: ${list.length} rows of MAXMOMENT, REACTIONS, SHEAR (one combination) and DEFLECTION (another): ${misses} solves (${(misses / list.length).toFixed(2)} a row, ${perMember.toFixed(2)} per member; ${recentHits} recent hits, ${cachedHits} cache hits)`);
+  console.log(`  target: one solve per member per row ${perMember <= 1 ? "OK" : "OVER TARGET"}`);
+  solvedMembers.clear();
+}
+
+export async function run(): Promise<void> {
+  const functions = loadBundle();
+  console.log(`node ${process.version}, ${os.cpus().length} cpus, load average ${os.loadavg().map((v) => v.toFixed(1)).join(" ")}`);
+  perRow(functions);
+  await growth(functions);
+  scheduleRows();
+  console.log(`load average after: ${os.loadavg().map((v) => v.toFixed(1)).join(" ")}`);
+}
