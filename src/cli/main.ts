@@ -13,6 +13,9 @@ export const USAGE = `usage:
       workbook (default <book>.calculated.xlsx); --csv prints a sheet's values as CSV.
   spanwise demo [--out <file.xlsx>] [--force]
       writes the demo workbook (default ${DEMO_WORKBOOK}).
+  spanwise verify [--out <verification.pdf|.html>] [--paper A4|letter] [--force]
+      runs the handbook cases the test suite runs and writes the verification document
+      (default verification.pdf); exits 1 when any case fails.
   spanwise start [--port <n>]
       builds and serves the add-in and the workbench over HTTPS on localhost.
 `;
@@ -31,6 +34,12 @@ export async function main(argv: readonly string[], io: Io = defaultIo): Promise
       case "demo": {
         const args = parseArgs(rest, ["out"], ["force"]);
         return await writeDemoWorkbook(optionText(args, "out") ?? DEMO_WORKBOOK, args.options.has("force"), io);
+      }
+      case "verify": {
+        const args = parseArgs(rest, ["out", "paper"], ["force"]);
+        if (args.positional.length) throw new UsageError("verify takes no workbook: spanwise verify [--out verification.pdf]");
+        const { verify } = await import("./verify");
+        return await verify({ out: optionText(args, "out"), paper: optionText(args, "paper"), force: args.options.has("force") }, io);
       }
       case "start": {
         const args = parseArgs(rest, ["port"], []);
