@@ -16,6 +16,8 @@ export const USAGE = `usage:
   spanwise verify [--out <verification.pdf|.html>] [--paper A4|letter] [--force]
       runs the handbook cases the test suite runs and writes the verification document
       (default verification.pdf); exits 1 when any case fails.
+  spanwise report <book.xlsx> (--cell <Sheet!A5> | --range <Sheet!A5:A20>) [--out <file.pdf|.html>] [--paper A4|letter] [--force]
+      writes the member calculation report of a SPAN cell (one per SPAN cell of a range).
   spanwise start [--port <n>]
       builds and serves the add-in and the workbench over HTTPS on localhost.
 `;
@@ -40,6 +42,12 @@ export async function main(argv: readonly string[], io: Io = defaultIo): Promise
         if (args.positional.length) throw new UsageError("verify takes no workbook: spanwise verify [--out verification.pdf]");
         const { verify } = await import("./verify");
         return await verify({ out: optionText(args, "out"), paper: optionText(args, "paper"), force: args.options.has("force") }, io);
+      }
+      case "report": {
+        const args = parseArgs(rest, ["out", "paper", "cell", "range"], ["force"]);
+        if (args.positional.length !== 1) throw new UsageError("report takes one workbook: spanwise report <book.xlsx> --cell Sheet!A5");
+        const { report } = await import("./report");
+        return await report({ input: args.positional[0], cell: optionText(args, "cell"), range: optionText(args, "range"), out: optionText(args, "out"), paper: optionText(args, "paper"), force: args.options.has("force") }, io);
       }
       case "start": {
         const args = parseArgs(rest, ["port"], []);
