@@ -145,3 +145,32 @@ describe("spanwise report --range and refusals", () => {
     expect(await main(["report", book, "--cell", "A10", "--out", path.join(dir, "x.pdf")], sink().io)).toBe(2);
   });
 });
+
+describe("spanwise report on the demo workbook", () => {
+  it("reports the Member sheet's beam with the factored reactions the workbook's own SPAN.REACTIONS computes", async () => {
+    const demo = path.join(dir, "demo.xlsx");
+    expect(await main(["demo", "--out", demo], sink().io)).toBe(0);
+    const out = path.join(dir, "demo.pdf");
+    const s = sink();
+    expect(await main(["report", demo, "--cell", "Member!A17", "--out", out], s.io)).toBe(0);
+    const lines = pdfTextLines(fs.readFileSync(out));
+    expect(lines.join("\n")).toContain("Member calculation: Member!A17");
+    expect(lines.join("\n")).toContain(CAUTION);
+    // The workbook's REACTIONS spill (x, vertical, moment per support), computed by the engine.
+    const { readBook } = await import("../../src/cli/xlsxBook");
+    const { SpanWorkbook } = await import("../../src/engine");
+    const book = new SpanWorkbook((await readBook(demo)).sheets);
+    try {
+      const sheet = book.sheetId("Member");
+      const forces = [16, 17, 18].map((row) => book.getValue(sheet, row, 1));
+      expect(forces.every((f) => typeof f === "number" && f > 0)).toBe(true);
+      forces.forEach((f, i) => {
+        const row = lines.indexOf(`${i + 1} (pin)`);
+        expect(row).toBeGreaterThanOrEqual(0);
+        expect(lines.slice(row, row + 6)).toContain(short(f as number));
+      });
+    } finally {
+      book.destroy();
+    }
+  });
+});
