@@ -51,7 +51,7 @@ function supportShapes(s: Support, x: number, y: number): Shape[] {
 }
 
 function loadShapes(l: Load, X: (x: number) => number, beamY: number, level: number): Shape[] {
-  const top = beamY - 16 - level * 14;
+  const top = beamY - 16 - level * 18;
   const label = `${l.loadCase ? l.loadCase + ": " : ""}`;
   if (l.kind === "point") {
     const x = X(l.xStart);
@@ -63,8 +63,19 @@ function loadShapes(l: Load, X: (x: number) => number, beamY: number, level: num
   }
   if (l.kind === "moment") {
     const x = X(l.xStart);
+    // An arc over the beam with the arrowhead at the end the couple turns towards
+    // (clockwise positive: head on the right, pointing down).
+    const r = 9;
+    const arc: [number, number][] = [];
+    for (let k = 0; k <= 12; k++) {
+      const t = Math.PI * (1.1 - (1.2 * k) / 12);
+      arc.push([x + r * Math.cos(t), beamY - 4 - r * Math.sin(t)]);
+    }
+    const [hx, hy] = l.magnitude >= 0 ? arc[arc.length - 1] : arc[0];
+    const side = l.magnitude >= 0 ? 1 : -1;
     return [
-      { kind: "circle", x, y: beamY, r: 6 },
+      { kind: "polyline", points: arc, width: 0.9 },
+      { kind: "polyline", points: [[hx - 3.5 * side, hy - 2], [hx, hy + 1], [hx + 1.5 * side, hy - 4]], width: 0.9 },
       { kind: "text", x: x + 7, y: top, text: `${label}C=${short(l.magnitude, 4)}`, size: 6.5 },
     ];
   }
@@ -85,7 +96,7 @@ export function memberSketch(member: Member, lengthUnit: string): { height: numb
   const L = xs[xs.length - 1];
   const X = xScale(L);
   const levels = Math.min(member.loads.length, 12);
-  const beamY = 24 + levels * 14;
+  const beamY = 24 + levels * 18;
   const shapes: Shape[] = [{ kind: "line", x1: X(0), y1: beamY, x2: X(L), y2: beamY, width: 2 }];
   member.loads.slice(0, 12).forEach((l, i) => shapes.push(...loadShapes(l, X, beamY, i)));
   member.supports.forEach((s, i) => shapes.push(...supportShapes(s, X(xs[i]), beamY)));
