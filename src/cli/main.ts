@@ -33,7 +33,18 @@ export const START_USAGE = `usage:
       stops that server and removes the add-in's sideload registration.
 `;
 
-export const USAGE = CALC_USAGE + DEMO_USAGE.replace("usage:\n", "") + START_USAGE.replace("usage:\n", "");
+export const VERIFY_USAGE = `usage:
+  spanwise verify [--out <verification.pdf|.html>] [--paper A4|letter] [--force]
+      runs the handbook cases the test suite runs and writes the verification document
+      (default verification.pdf); exits 1 when any case fails.
+`;
+
+export const REPORT_USAGE = `usage:
+  spanwise report <book.xlsx> (--cell <Sheet!A5> | --range <Sheet!A5:A20>) [--out <file.pdf|.html>] [--paper A4|letter] [--force]
+      writes the member calculation report of a SPAN cell (one per SPAN cell of a range).
+`;
+
+export const USAGE = [CALC_USAGE, DEMO_USAGE, VERIFY_USAGE, REPORT_USAGE, START_USAGE].map((u, i) => (i === 0 ? u : u.replace("usage:\n", ""))).join("");
 
 const defaultIo: Io = { stdout: process.stdout, stderr: process.stderr };
 
@@ -64,6 +75,20 @@ export async function main(argv: readonly string[], io: Io = defaultIo): Promise
         const args = parseArgs(rest, ["out"], ["force"], DEMO_USAGE);
         if (args.positional.length > 0) throw new UsageError(`demo takes no workbook (${args.positional[0]}): use --out`, 2, DEMO_USAGE);
         return await writeDemoWorkbook(optionText(args, "out") ?? DEMO_WORKBOOK, args.options.has("force"), io);
+      }
+      case "verify": {
+        if (wantsHelp(rest)) return help(io, VERIFY_USAGE);
+        const args = parseArgs(rest, ["out", "paper"], ["force"], VERIFY_USAGE);
+        if (args.positional.length) throw new UsageError("verify takes no workbook: spanwise verify [--out verification.pdf]", 2, VERIFY_USAGE);
+        const { verify } = await import("./verify");
+        return await verify({ out: optionText(args, "out"), paper: optionText(args, "paper"), force: args.options.has("force") }, io);
+      }
+      case "report": {
+        if (wantsHelp(rest)) return help(io, REPORT_USAGE);
+        const args = parseArgs(rest, ["out", "paper", "cell", "range"], ["force"], REPORT_USAGE);
+        if (args.positional.length !== 1) throw new UsageError("report takes one workbook: spanwise report <book.xlsx> --cell Sheet!A5", 2, REPORT_USAGE);
+        const { report } = await import("./report");
+        return await report({ input: args.positional[0], cell: optionText(args, "cell"), range: optionText(args, "range"), out: optionText(args, "out"), paper: optionText(args, "paper"), force: args.options.has("force") }, io);
       }
       case "start": {
         if (wantsHelp(rest)) return help(io, START_USAGE);

@@ -1,15 +1,13 @@
 /**
  * Handbook cases: each member is solved and compared with closed-form values at the handbook
- * tolerance (relative 1e-9). The source of every formula is named in the case (see handbook/).
+ * tolerance (relative 1e-9). The source of every formula is named in the case (src/verify/cases/,
+ * the same list `spanwise verify` runs).
  */
 import { solve } from "../../src/core";
-import { mismatches } from "./kit/compare";
-import { cantileverCases } from "./handbook/cantilever";
-import type { HandbookCase } from "./handbook/case";
-import { indeterminateCases } from "./handbook/indeterminate";
-import { simpleCases } from "./handbook/simple";
+import { handbookCases } from "../../src/verify/cases";
+import { mismatches } from "../../src/verify/compare";
 
-const cases: HandbookCase[] = [...simpleCases, ...cantileverCases, ...indeterminateCases];
+const cases = [...handbookCases];
 
 describe("handbook cases", () => {
   it("has at least 15 distinct cases, each with a source", () => {

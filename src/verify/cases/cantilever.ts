@@ -1,5 +1,5 @@
 /** Cantilevers and overhangs. Numbers are invented; formulas as cited beside each case. */
-import { beam, couple, linear, point, udl } from "../kit/members";
+import { beam, couple, linear, point, udl } from "../members";
 import { SCM, type HandbookCase } from "./case";
 
 const sqrt = Math.sqrt;

@@ -1,5 +1,5 @@
 /** Simple spans: pin at both ends. Numbers are invented; formulas as cited beside each case. */
-import { beam, couple, linear, point, udl } from "../kit/members";
+import { beam, couple, linear, point, udl } from "../members";
 import { ROARK, SCM, type HandbookCase } from "./case";
 
 const sqrt = Math.sqrt;

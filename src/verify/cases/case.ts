@@ -1,5 +1,5 @@
-import type { Member } from "../../../src/core";
-import type { Check } from "../kit/compare";
+import type { Member } from "../../core";
+import type { Check } from "../compare";
 
 /** One handbook case: the member, where the expected values come from, and the checks. */
 export interface HandbookCase {

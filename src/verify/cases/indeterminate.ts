@@ -1,5 +1,5 @@
 /** Propped cantilevers, fixed-fixed spans, continuous members and hinged (Gerber) members. */
-import { beam, point, udl } from "../kit/members";
+import { beam, point, udl } from "../members";
 import { COEFFICIENTS, SCM, type HandbookCase } from "./case";
 
 const sqrt = Math.sqrt;

@@ -1,0 +1,12 @@
+/**
+ * The handbook cases, one list with two uses: tests/core/handbook.test.ts runs them in the test
+ * suite, `spanwise verify` runs the same list and writes the verification document.
+ */
+import { cantileverCases } from "./cantilever";
+import type { HandbookCase } from "./case";
+import { indeterminateCases } from "./indeterminate";
+import { simpleCases } from "./simple";
+
+export type { HandbookCase } from "./case";
+
+export const handbookCases: readonly HandbookCase[] = [...simpleCases, ...cantileverCases, ...indeterminateCases];
