@@ -10,7 +10,7 @@
  */
 import * as fs from "fs";
 import * as path from "path";
-import { normalizeFormula } from "../engine";
+import { SpanWorkbook, normalizeFormula } from "../engine";
 import { parseBlock, blockText } from "../pane/addresses";
 import { qualify, splitAddress } from "../pane/host";
 import { cellKindOf, findMember, solveMember } from "../pane/memberFromSheet";
@@ -25,7 +25,7 @@ import { BookHost } from "./bookHost";
 import { buildInfo } from "./buildInfo";
 import { UsageError, type Io } from "./io";
 import { formatOf, paperOf, writeOutput } from "./verify";
-import { evaluateBook, readBook } from "./xlsxBook";
+import { readBook } from "./xlsxBook";
 
 /** Cells of a --range looked at, at most, and reports written, at most. */
 export const MAX_RANGE_CELLS = 2000;
@@ -72,7 +72,9 @@ export async function report(options: ReportOptions, io: Io): Promise<number> {
   } catch (error) {
     throw new UsageError(`cannot read ${options.input}: ${error instanceof Error ? error.message : String(error)}`, 1);
   }
-  const book = evaluateBook(loaded);
+  // The engine over the cells as saved (not evaluateBook, which replaces a plain formula whose
+  // result spills): the report reads each SPAN cell's own formula and arguments.
+  const book = new SpanWorkbook(loaded.inputs, { names: loaded.names });
   try {
     const host = new BookHost(book);
     let sheet: string;
