@@ -188,7 +188,7 @@ export function diagram(spans: any[][], loads: any[][], points?: any, supports?:
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
  * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
  * @param [quantity] shear, moment (default) or deflection.
- * @param [pattern] Pattern live load: blank or none (loads as given), standard (the classical span arrangements), or full (every subset of spans, none included, exact by superposition), optionally followed by the live case label (default L), e.g. "full L". At most 12 spans when patterned.
+ * @param [pattern] Pattern live load: blank or none (loads as given), standard (classical span arrangements) or full (every subset of spans, none included, exact by superposition), then the live case label (default L), e.g. "full L". At most 12 spans.
  * @param [psi0] EN 1990 combination factor psi0 for the accompanying variable cases: one number, or pairs such as "Q 0.7, S 0.5".
  * @returns One row per x: x, largest value, governing combination, smallest value, governing combination.
  */

@@ -15,6 +15,7 @@ export { diagram } from "./diagram";
 export { parseCombination, applyCombination, formatCombination, checkCombinations, isStandardCaseLabel, STANDARD_CASE_LABELS, MAX_TERMS } from "./combination";
 export type { Combination, CombinationTerm, CombinationUse, LabelledLoad } from "./combination";
 export * as tolerance from "./tolerance";
+export { maxOf, minOf } from "./tolerance";
 export { parseUnit, parseUnitOf, convert, derivedUnit, dimensionName, sameDimension, DIMENSIONS, UNIT_NAMES, FOOT, INCH, POUND_FORCE, KIP } from "./units";
 export type { Unit, Dimension, DimensionName } from "./units";
 export { expandCombinationSet, COMBINATION_SETS, STRENGTH_TEMPLATES, ALLOWABLE_TEMPLATES } from "./combinationSets";

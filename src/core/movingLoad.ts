@@ -140,6 +140,16 @@ export function movingLoad(member: Member, train: Train, effect: MovingEffect): 
         offer(evaluatePolynomial(cubic, 1), hi, direction, at);
         for (const u of rootsBetween(derivative(cubic), -1, 1)) offer(evaluatePolynomial(cubic, u), mid + half * u, direction, at, 0);
       }
+      // At a member end the value at the end (just right of 0, just left of the length) with an
+      // axle exactly there is none of the limits from inside (the load is beyond the section on
+      // the side not measured), so those placements are solved exactly.
+      if (effect.kind !== "absolute-moment" && (Math.abs(at) <= tol || Math.abs(at - length) <= tol)) {
+        const end = Math.abs(at) <= tol ? 0 : length;
+        for (const o of train.offsets) {
+          const leadX = end - sign * o;
+          offer(measure(solveAt(leadX, direction), effect), leadX, direction, at);
+        }
+      }
       continue;
     }
     // Every segment between events is fitted from five solves inside it; its ends are the

@@ -12,6 +12,7 @@
  * the largest shear stress V Q/(I t) (at the neutral axis for every shape here except a tee
  * whose neutral axis lies in its flange).
  */
+import { maxOf } from "./tolerance";
 import { invalid } from "./errors";
 
 export type SectionShape =
@@ -294,7 +295,7 @@ function propertiesOf(s: SectionShape): SectionProperties {
 export function sectionProperties(s: SectionShape): SectionProperties {
   validateSection(s);
   const dimensions = Object.entries(s).filter(([key]) => key !== "shape") as [string, number][];
-  const largest = Math.max(...dimensions.map(([, v]) => v));
+  const largest = maxOf(dimensions.map(([, v]) => v));
   const exponent = Math.round(Math.log2(largest));
   if (exponent === 0) return propertiesOf(s);
   const unit = (power: number): number => Math.pow(2, exponent * power);

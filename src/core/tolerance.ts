@@ -33,3 +33,17 @@ export function relDiff(a: number, b: number, scale = 0): number {
 export function cleanZero(value: number, scale: number, tol = ROUNDING_NOISE): number {
   return Math.abs(value) <= tol * scale ? 0 : value;
 }
+
+/** Largest of a list (or `start` when the list is empty), without spreading it into Math.max (bounded stack). */
+export function maxOf(values: readonly number[], start = -Infinity): number {
+  let m = start;
+  for (const v of values) if (v > m) m = v;
+  return m;
+}
+
+/** Smallest of a list (or `start` when the list is empty), without spreading it into Math.min. */
+export function minOf(values: readonly number[], start = Infinity): number {
+  let m = start;
+  for (const v of values) if (v < m) m = v;
+  return m;
+}

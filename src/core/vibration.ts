@@ -8,6 +8,7 @@
  * are not modelled. Units: consistent (EI in force x length^2, mass in force x time^2 /
  * length^2 per length, so sqrt(EI / (m L^4)) is in 1/time); circular frequencies out.
  */
+import { maxOf, minOf } from "./tolerance";
 import { clampedCount, elementMatrix, krylov } from "./dynamicStiffness";
 import { invalid, unavailable } from "./errors";
 import type { Load, Member } from "./model";
@@ -20,10 +21,11 @@ export const MAX_MODES = 50;
 
 /**
  * Most elements x modes one call may take (elements: the spans cut at every mass boundary):
- * each mode costs about fifty factorisations of the whole member (2,000 spans and 50 modes, or
- * 10,000 and 10, took under 3 s in tests/bench/vibration.bench.ts on a heavily loaded machine).
+ * each mode costs about fifty factorisations of the whole member. At 100,000 (2,000 spans and
+ * 50 modes) a call took 2.3-2.7 s on a heavily loaded machine (tests/bench/vibration.bench.ts),
+ * so the limit is a tenth of that, to keep a call near the 200 ms the limits section promises.
  */
-export const MAX_VIBRATION_WORK = 100_000;
+export const MAX_VIBRATION_WORK = 10_000;
 
 /** Bisection stops when the bracket is this fraction of the frequency (well inside 1e-12). */
 export const FREQUENCY_TOLERANCE = 2e-14;
@@ -181,7 +183,7 @@ function buildMesh(model: VibrationModel): Mesh {
     }
     const dofs: Element["dofs"] = [wDof[e], rightDof[e], wDof[e + 1], leftDof[e + 1]];
     const used = dofs.filter((d) => d >= 0);
-    if (used.length > 0) bandwidth = Math.max(bandwidth, Math.max(...used) - Math.min(...used));
+    if (used.length > 0) bandwidth = Math.max(bandwidth, maxOf(used) - minOf(used));
     elements.push({ x0: nodes[e], length: nodes[e + 1] - nodes[e], ei: stiffness.length === 1 ? stiffness[0] : stiffness[span], mass: Math.max(mass, 0), dofs });
   }
   const pointMasses: Mesh["pointMasses"] = [];
@@ -424,7 +426,7 @@ function refined(mesh: Mesh, omega: number): Mesh {
   let bandwidth = 0;
   for (const e of elements) {
     const used = e.dofs.filter((d) => d >= 0);
-    if (used.length > 0) bandwidth = Math.max(bandwidth, Math.max(...used) - Math.min(...used));
+    if (used.length > 0) bandwidth = Math.max(bandwidth, maxOf(used) - minOf(used));
   }
   return {
     elements,

@@ -3,6 +3,7 @@
  * the member (supports, hinges, springs, loads, span lengths) and the shear, moment and
  * deflection diagrams on one shared x axis, each peak marked and labelled with its value and x.
  */
+import { maxOf, minOf } from "../core";
 import type { DiagramRow, Load, Member, Support } from "../core";
 import { short } from "./describe";
 import type { Shape } from "./document";
@@ -128,8 +129,8 @@ export function diagramPanels(rows: DiagramRow[], panels: Panel[], nodeX: number
   panels.forEach((p, k) => {
     const top = k * (PANEL_H + GAP) + 14;
     const finite = p.values.filter(Number.isFinite);
-    const max = Math.max(0, ...finite);
-    const min = Math.min(0, ...finite);
+    const max = maxOf(finite, 0);
+    const min = minOf(finite, 0);
     const span = max - min || 1;
     const inner = PANEL_H - 30;
     const Y = (v: number) => top + 15 + (p.downward ? ((v - min) / span) * inner : ((max - v) / span) * inner);

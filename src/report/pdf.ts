@@ -5,6 +5,7 @@
  * "page i of n" on every page. Characters the standard fonts cannot encode (WinAnsi) are
  * replaced by a readable ASCII form, never dropped silently.
  */
+import { maxOf } from "../core";
 import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from "pdf-lib";
 import { PAPER, type Block, type PaperSize, type PrintDocument, type Shape, type Tone } from "./document";
 
@@ -143,7 +144,7 @@ function table(l: Layout, b: Extract<Block, { kind: "table" }>): void {
   const lefts = widths.map((_, i) => MARGIN.left + widths.slice(0, i).reduce((s, v) => s + v, 0));
   const drawRow = (cells: string[], font: PDFFont, color: ReturnType<typeof rgb>, shade: boolean): void => {
     const wrapped = cells.map((c, i) => l.wrap(c, font, size, widths[i] - 2 * pad));
-    const h = Math.max(...wrapped.map((w) => w.length)) * lineH + 2 * pad;
+    const h = maxOf(wrapped.map((w) => w.length)) * lineH + 2 * pad;
     if (l.ensure(h) && !shade) drawRow(b.columns, l.fonts.bold, BLACK, true);
     const top = l.y;
     if (shade) l.page.drawRectangle({ x: MARGIN.left, y: l.height - top - h, width: l.contentWidth, height: h, color: rgb(0.92, 0.92, 0.92) });

@@ -8,7 +8,7 @@ import { guarded } from "./hostError";
 import { readComboText, readMember, type MemberArgs } from "./member";
 import { singleCell } from "./ranges";
 import { finite, orBlank } from "./shape";
-import { memberInSI, readMemberUnits } from "./units";
+import { memberInOwnUnits, readMemberUnits } from "./units";
 import { outputScale, solvedMember } from "./worksheet";
 
 function argsOf(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units: unknown): MemberArgs {
@@ -72,7 +72,7 @@ export function sheetCaseReactions(
     const given = readMemberUnits(args.units);
     const scale = outputScale(given);
     const member = readMember({ ...args, combo: null });
-    const { reactions } = caseReactions(given === null ? member : memberInSI(member, given));
+    const { reactions } = caseReactions(given === null ? member : memberInOwnUnits(member, given));
     const withCombo = readComboText(args.combo) !== "";
     const combined = withCombo ? solvedMember(args, given).reactions : null;
     const unit = kind === "force" ? scale.force : scale.moment;

@@ -49,9 +49,11 @@ function checkCombinationCells(combos: unknown): void {
   checkCount(count, LIMITS.combinations, "combinations", "combinations (named sets expanded)");
 }
 
-/** The load rows, for the combination and case-label rule. */
+/** The load rows, for the combination and case-label rule (their distinct labels counted first). */
 function caseLabels(loads: unknown): LoadRow[] {
-  return readLoads(loads);
+  const rows = readLoads(loads);
+  checkCount(new Set(rows.map((row) => row.loadCase)).size, LIMITS.cases, "loads", "case labels in one study");
+  return rows;
 }
 
 /** Reads the pattern argument: blank or "none", "standard" or "full", optionally followed by the live case label. */

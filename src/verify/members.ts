@@ -4,6 +4,7 @@
  * keyword form whose supports default to a pin at every node. Load rows are numbered 1, 2, ...
  * in the order the loads are given, unless set.
  */
+import { minOf } from "../core";
 import type { Load, Member, Support } from "../core";
 
 export type SupportWord = "pin" | "fixed" | "free" | "hinge" | number;
@@ -83,9 +84,9 @@ export function scalesOf(m: Member): Scales {
     else if (l.kind === "moment") force += Math.abs(l.magnitude) / L;
     else force += ((Math.abs(l.magnitude) + Math.abs(l.magnitudeEnd)) / 2) * (l.xEnd - l.xStart);
   }
-  const ei = m.stiffness ? Math.min(...m.stiffness) : 1;
+  const ei = m.stiffness ? minOf(m.stiffness) : 1;
   const springs = m.supports.flatMap((s) => (s.kind === "spring" ? [s.stiffness] : []));
-  const soft = springs.length ? force / Math.min(...springs) : 0;
+  const soft = springs.length ? force / minOf(springs) : 0;
   return { force, shear: force, moment: force * L, slope: (force * L * L) / ei + soft / L, deflection: (force * L ** 3) / ei + soft };
 }
 

@@ -303,7 +303,7 @@ export const SPECS: FunctionSpec[] = [
     name: "frequencies",
     cases: memberWith(
       (m) => fc.tuple(massArg, modesArg, fc.oneof({ weight: 3, arbitrary: fc.constant<unknown>(null) }, { weight: 1, arbitrary: fc.constant(m.loads) }), unitsArg, gArg),
-      (m, [mass, modes, loads, units, g]) => [m.spans.value, m.EI, mass, modes, m.supports.value, loads, m.combo, units, g],
+      (m, [mass, modes, loads, units, g]) => [m.spans.value, m.EI, mass, modes, m.supports.value, loads, loads === null ? null : m.combo, units, g],
       stiffMemberArgs,
     ),
     call: call(fx.frequencies),
@@ -313,7 +313,7 @@ export const SPECS: FunctionSpec[] = [
     name: "modeShape",
     cases: memberWith(
       (m) => fc.tuple(massArg, modesArg, fc.oneof({ weight: 2, arbitrary: positionsArg(m.plan, false) }, { weight: 1, arbitrary: positionsArg(m.plan) }), fc.oneof({ weight: 4, arbitrary: fc.constant<unknown>(null) }, { weight: 1, arbitrary: fc.constant(m.loads) }), fc.oneof({ weight: 3, arbitrary: fc.constant<unknown>(null) }, { weight: 1, arbitrary: unitsArg }), gArg),
-      (m, [mass, mode, x, loads, units, g]) => [m.spans.value, m.EI, mass, mode, x, m.supports.value, loads, m.combo, units, g],
+      (m, [mass, mode, x, loads, units, g]) => [m.spans.value, m.EI, mass, mode, x, m.supports.value, loads, loads === null ? null : m.combo, units, g],
       stiffMemberArgs,
     ),
     call: call(fx.modeShape),

@@ -4,6 +4,7 @@
  * peaks), an influence line, and a moving load's extremes with the train placed on the member.
  * SVG text. Pure.
  */
+import { maxOf, minOf } from "../../core";
 import type { Member } from "../../core";
 import type { EnvelopeCurve, MovingPlacement, PeakRow } from "../study";
 import { axisSvg } from "./diagramSvg";
@@ -100,8 +101,8 @@ export function drawEnvelope(input: EnvelopeInput): Figure {
   const panels: Figure["panels"] = [];
   input.curves.forEach((curve, i) => {
     const box = layout.panels[i];
-    const lo = Math.min(...curve.min);
-    const hi = Math.max(...curve.max);
+    const lo = minOf(curve.min);
+    const hi = maxOf(curve.max);
     const frame = frameFor(box, layout, lo, hi);
     panels.push({ quantity: box.quantity, frame });
     const { line, fill } = colours(box.quantity, c);
@@ -141,7 +142,7 @@ export function drawEnvelope(input: EnvelopeInput): Figure {
 }
 
 function lineSvg(box: PanelBox, layout: Layout, title: string, xs: number[], values: number[], c: Palette): { svg: string; frame: PanelFrame } {
-  const frame = frameFor(box, layout, Math.min(...values), Math.max(...values));
+  const frame = frameFor(box, layout, minOf(values), maxOf(values));
   const px = xs.map((x) => layout.x(x));
   const py = values.map((v) => frame.yPixel(v));
   const svg =
