@@ -286,7 +286,9 @@ function search(mesh: Mesh, count: number): number[] {
   const elements = mesh.elements.length;
   if (elements * count > MAX_VIBRATION_WORK) {
     throw invalid(
-      `modes: ${count} modes of a member of ${elements} elements (spans cut at mass boundaries) is more than one call takes (elements x modes at most ${MAX_VIBRATION_WORK}); ask for at most ${Math.max(1, Math.floor(MAX_VIBRATION_WORK / elements) - 1)} modes`,
+      `modes: ${count} modes of a member of ${elements} elements (spans cut at mass boundaries) is more than one call takes (elements x modes at most ${MAX_VIBRATION_WORK}); ${
+        elements > MAX_VIBRATION_WORK ? `no call takes more than ${MAX_VIBRATION_WORK} elements` : `ask for at most ${Math.floor(MAX_VIBRATION_WORK / elements)} modes`
+      }`,
     );
   }
   if (!mesh.elements.some((e) => e.mass > 0) && count > mesh.pointMasses.length) {
