@@ -16,7 +16,7 @@ export function toSavedForm(formula: string): string {
   return mapCode(formula, (code) =>
     code
       .replace(/\bSPAN\.([A-Za-z]+)\s*\(/g, (_whole, name: string) => `_xldudf_SPAN_${name.toUpperCase()}(`)
-      .replace(SPILL, "_xlfn.ANCHORARRAY($1)")
+      .replace(SPILL, "$1_xlfn.ANCHORARRAY($2)")
       .replace(new RegExp(String.raw`(?<![\w.])(${NEWER.join("|")})\s*\(`, "gi"), (_whole, name: string) => `_xlfn.${name.toUpperCase()}(`)
       .replace(new RegExp(String.raw`(?<![\w.])(${WORKSHEET_ONLY.join("|")})\s*\(`, "gi"), (_whole, name: string) => `_xlfn._xlws.${name.toUpperCase()}(`),
   );

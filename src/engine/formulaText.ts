@@ -51,7 +51,8 @@ export interface SpillReference {
   col: number;
 }
 
-export const SPILL = new RegExp(String.raw`(?<![\w$.!'])(${REFERENCE})#`, "g");
+/** `A1#`: group 1 is the character before the reference (no lookbehind: the pane runs where ES2018 may not), group 2 the reference. */
+export const SPILL = new RegExp(String.raw`(^|[^\w$.!'])(${REFERENCE})#`, "g");
 
 export function columnNumber(letters: string): number {
   let col = 0;
@@ -84,5 +85,5 @@ export function hasSpillReference(text: string): boolean {
  * example `A1:C4`, or `#REF!` where the cell does not spill).
  */
 export function expandSpillReferences(text: string, resolve: (reference: SpillReference, written: string) => string): string {
-  return mapCode(text, (code) => code.replace(SPILL, (_whole, reference: string) => resolve(parseReference(reference), reference)));
+  return mapCode(text, (code) => code.replace(SPILL, (_whole, before: string, reference: string) => before + resolve(parseReference(reference), reference)));
 }

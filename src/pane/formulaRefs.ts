@@ -41,7 +41,9 @@ const CELL = String.raw`\$?[A-Za-z]{1,3}\$?\d+`;
 const RANGE = new RegExp(String.raw`^(?:${SHEET})?(${CELL}(?::${CELL})?)(#?)$`);
 const NAME = new RegExp(String.raw`^(?:${SHEET})?([A-Za-z_\\][\w.]*)$`);
 const NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?%?$/;
-const CALL_START = /(?<![\w.])(?:_xll\.|_xldudf_)?SPAN[._]([A-Za-z]+)\s*\(/i;
+// No lookbehind (ES2018; older Safari webviews reject the whole script): the character before
+// the name is matched instead, so the name is group 1 and match[0] may start one early.
+const CALL_START = /(?:^|[^\w.])(?:_xll\.|_xldudf_)?SPAN[._]([A-Za-z]+)\s*\(/i;
 
 /** Index just past the string literal starting at `at` (a `"`). */
 function skipString(text: string, at: number): number {

@@ -79,12 +79,9 @@ describe("built bundles", () => {
     expect(parse(code, 2017).error).toBe("");
   });
 
-  // Known defect, reported to the pane's owner: two lookbehind assertions (ES2018) reach the pane,
-  // one as a literal (src/pane/formulaRefs.ts CALL_START) and one built with new RegExp
-  // (src/engine/formulaText.ts SPILL). A script with a lookbehind literal does not parse at
-  // all in Safari before 16.4 (lookbehind support from memory), so the pane would not load
-  // in older Mac hosts. test.failing turns red once they are gone: then make it a plain test.
-  test.failing("taskpane.js holds no regular expression above ECMAScript 2017 (lookbehind)", () => {
+  // A lookbehind literal (ES2018) makes the whole script fail to parse in Safari before 16.4
+  // (lookbehind support from memory), so the pane would not load in older Mac hosts.
+  test("taskpane.js holds no regular expression above ECMAScript 2017 (lookbehind)", () => {
     const code = fs.readFileSync(path.join(out, "taskpane.js"), "utf8");
     expect(parse(code, 2017).regexps).toEqual([]);
     expect(code).not.toMatch(/\(\?<[!=]/);

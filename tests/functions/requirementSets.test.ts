@@ -16,6 +16,7 @@
  *   excel/custom-functions-requirement-sets).
  * An API missing from the table fails the test until its set is added with its source.
  */
+import { BASELINE, OPTIONAL } from "../../src/pane/requirements";
 import * as fs from "fs";
 import * as path from "path";
 import * as vm from "vm";
@@ -120,6 +121,17 @@ describe("requirement sets", () => {
   test("manifest.xml declares a set covering each of them", () => {
     const manifest = fs.readFileSync(path.join(root, "manifest.xml"), "utf8");
     expect(uncovered(apisUsedBy(bundle), manifest)).toEqual([]);
+  });
+
+  test("manifest.xml declares the pane's baseline set, and none of its optional ones (those are checked at run time)", () => {
+    // The pane assumes BASELINE everywhere (src/pane/requirements.ts) and checks OPTIONAL sets
+    // with isSetSupported before use; declaring an optional set would keep the add-in from
+    // loading on hosts where only that feature is missing. Requirements element: "Specify Office
+    // applications and API requirements" (learn.microsoft.com/office/dev/add-ins/develop/specify-office-hosts-and-api-requirements).
+    const manifest = fs.readFileSync(path.join(root, "manifest.xml"), "utf8");
+    const declared = [...manifest.matchAll(/<Set Name="([^"]+)" MinVersion="([^"]+)"\/>/g)].map((m) => `${m[1]} ${m[2]}`);
+    expect(declared).toContain(`${BASELINE.name} ${BASELINE.version}`);
+    for (const feature of Object.values(OPTIONAL)) expect(declared).not.toContain(`${feature.name} ${feature.version}`);
   });
 
   test("control: the old manifest (CustomFunctionsRuntime 1.1) is refused, and an unknown API is named", () => {
