@@ -111,10 +111,17 @@ export function spanDeflections(solution: Solution, limits: number[]): SpanDefle
   }
   const tol = positionTolerance(solution.length);
   const out: SpanDeflection[] = [];
+  // Pieces run left to right, so each span's pieces are the next contiguous run (one pass over
+  // the pieces for the whole member, not one per span).
+  let next = 0;
   for (let i = 0; i < spanCount; i++) {
     const a = solution.nodeX[i];
     const b = solution.nodeX[i + 1];
-    const pieces = solution.pieces.filter((p) => p.x0 >= a - tol && p.x1 <= b + tol);
+    while (next < solution.pieces.length && solution.pieces[next].x0 < a - tol) next++;
+    let end = next;
+    while (end < solution.pieces.length && solution.pieces[end].x1 <= b + tol) end++;
+    const pieces = solution.pieces.slice(next, end);
+    next = end;
     const peak = largestMagnitude(extremes({ ...solution, pieces }, "deflection"));
     const length = b - a;
     const limit = limits.length === 1 ? limits[0] : limits[i];
