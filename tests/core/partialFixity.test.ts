@@ -4,8 +4,13 @@
  * the force method (below), the mechanism check, and the reactions' equilibrium.
  */
 import { checkStability, extremes, naturalFrequencies, solve, spanMasses, valueAt, type Member, type Support, type VibrationModel } from "../../src/core";
+import fc from "fast-check";
+import { HANDBOOK_TOLERANCE } from "../../src/core/tolerance";
+import { isClose } from "./kit/close";
 import { thrown } from "./kit/errors";
-import { beam, point, udl, couple } from "./kit/members";
+import { forceMethodSolve } from "./kit/forceMethod";
+import { beam, lengthOf, nodesOf, point, scalesOf, udl, couple } from "./kit/members";
+import { randomMember } from "./kit/random";
 
 const EI = 3.2e4;
 const L = 6.5;
@@ -169,5 +174,47 @@ describe("rotational spring: vibration", () => {
     expect(Math.abs(cantilever / (1.8751040687 ** 2 * unit) - 1)).toBeLessThan(1e-8);
     const [simple] = naturalFrequencies(model([{ kind: "pin", rotational: 1e-12 * (EI / L) }, { kind: "pin" }]), 1);
     expect(Math.abs(simple / (Math.PI ** 2 * unit) - 1)).toBeLessThan(1e-8);
+  });
+});
+
+describe("rotational springs on random members against the force method (kit/forceMethod.ts, rotational compatibility M = k·θ)", () => {
+  // Each seed's random member (kit/random.ts) gets a rotational spring of 0.05 to 50 x the EI/L
+  // of the span beside it at every other pin, free or spring node; adding a restraint keeps it stable.
+  const seeds = Array.from({ length: 40 }, (_, i) => 4242 + 104729 * i);
+  it.each(seeds)("seed %i", (seed) => {
+    const base = randomMember(seed);
+    const rng = fc.sample(fc.array(fc.double({ min: Math.log(0.05), max: Math.log(50), noNaN: true }), { minLength: 64, maxLength: 64 }), { seed, numRuns: 1 })[0];
+    const ei = (span: number): number => (base.stiffness === null ? 1 : base.stiffness.length === 1 ? base.stiffness[0] : base.stiffness[span]);
+    const supports = base.supports.map((s, n): Support => {
+      if ((s.kind !== "pin" && s.kind !== "free" && s.kind !== "spring") || (n + seed) % 2 === 1) return s;
+      const span = Math.min(n, base.spans.length - 1);
+      return { ...s, rotational: (Math.exp(rng[n % 64]) * ei(span)) / base.spans[span] };
+    });
+    const m: Member = { ...base, supports };
+    const sol = solve(m);
+    const ref = forceMethodSolve(m);
+    const s = scalesOf(m);
+    const off: string[] = [];
+    const check = (what: string, got: number, want: number, scale: number): void => {
+      if (!isClose(got, want, HANDBOOK_TOLERANCE, scale)) off.push(`${what}: got ${got}, want ${want}`);
+    };
+    sol.reactions.forEach((r, i) => {
+      check(`reaction force at node ${i}`, r.force, ref.reactions[i].force, s.force);
+      check(`reaction moment at node ${i}`, r.moment, ref.reactions[i].moment, s.moment);
+    });
+    const L = lengthOf(m);
+    const xs = [...new Set([...nodesOf(m), ...m.loads.flatMap((l) => [l.xStart, l.xEnd]), 0.137 * L, 0.618 * L, 0.9 * L])].sort((a, b) => a - b);
+    for (const x of xs) for (const q of QUANTITIES) check(`${q} at x = ${x}`, valueAt(sol, q, x), ref.at(q, x), s[q]);
+    expect({ supports: JSON.stringify(m.supports), off }).toEqual({ supports: JSON.stringify(m.supports), off: [] });
+  });
+
+  it("the seeds reach rotational springs with a pin, a vertical spring and alone", () => {
+    const kinds = new Set<string>();
+    for (const seed of seeds) {
+      randomMember(seed).supports.forEach((s, n) => {
+        if ((s.kind === "pin" || s.kind === "free" || s.kind === "spring") && (n + seed) % 2 === 0) kinds.add(s.kind);
+      });
+    }
+    expect([...kinds].sort()).toEqual(["free", "pin", "spring"]);
   });
 });
