@@ -37,7 +37,7 @@ import { sheetCaseReactions, sheetFrequencies, sheetModeShape, sheetSpanPeaks } 
  * @remarks Reactions at every node of a continuous beam: one row per node (span end) with x, the vertical reaction (up +) and the moment reaction (counter-clockwise +); unsupported nodes give 0, a spring gives its force. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
+ * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
@@ -55,7 +55,7 @@ export function reactions(spans: any[][], loads: any[][], supports?: any[][], EI
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
+ * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
@@ -73,7 +73,7 @@ export function shear(spans: any[][], loads: any[][], x: any[][], supports?: any
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
+ * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
@@ -91,7 +91,7 @@ export function moment(spans: any[][], loads: any[][], x: any[][], supports?: an
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
+ * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Required here.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
@@ -109,7 +109,7 @@ export function slope(spans: any[][], loads: any[][], x: any[][], supports?: any
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
+ * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Required here.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
@@ -126,7 +126,7 @@ export function deflection(spans: any[][], loads: any[][], x: any[][], supports?
  * @remarks Largest (sagging) and smallest (hogging) bending moment along the member and where they occur, found exactly from the moment curve: [[largest M, x], [smallest M, x]]. Sagging moment +. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
+ * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
@@ -143,7 +143,7 @@ export function maxMoment(spans: any[][], loads: any[][], supports?: any[][], EI
  * @remarks Extremes of each quantity: rows label, max, x at max, min, x at min for shear and moment, and for slope and deflection when EI is given. Found exactly from the curves, never by sampling. Signs: loads down +, couples clockwise +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
+ * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Adds the slope and deflection rows; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
@@ -161,7 +161,7 @@ export function extremes(spans: any[][], loads: any[][], supports?: any[][], EI?
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
  * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param [points] Number of evenly spaced stations including both ends: a whole number from 2 to 10001. Blank (or 0) = 101.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a number = vertical spring stiffness (force/length); a range or one text cell such as "fixed pin pin free". Blank = every node pin; a blank or 0 for one node is an error.
+ * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Fills the slope and deflection columns; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
@@ -185,7 +185,7 @@ export function diagram(spans: any[][], loads: any[][], points?: any, supports?:
  * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation; every load needs a case label. Forces down +, couples clockwise +.
  * @param x Positions from the member's left end: a cell, row, column or block; one result row per cell, in reading order (blank cells give blank rows).
  * @param combos Combinations: a cell or range of texts such as 1.2D+1.6L+0.5S, and/or set names ASCE7-2.3.1, ASCE7-2.4.1, EN1990-6.10 (each expanded). Labels match exactly; each typed combination must select a load.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, a spring stiffness, or with rot K a rotational spring (pin+rot 5000). Blank = every node pin.
  * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
  * @param [quantity] shear, moment (default) or deflection.
  * @param [pattern] Pattern live load: blank or none (loads as given), standard (classical span arrangements) or full (every subset of spans, none included, exact by superposition), then the live case label (default L), e.g. "full L". At most 12 spans.
@@ -204,7 +204,7 @@ export function envelope(spans: any[][], loads: any[][], x: any[][], combos: any
  * @param spans Span lengths left to right (any length unit): a row or column, or one text cell such as "6 8 6".
  * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation; every load needs a case label. Forces down +, couples clockwise +.
  * @param combos Combinations: a cell or range of texts such as 1.2D+1.6L+0.5S, and/or set names ASCE7-2.3.1, ASCE7-2.4.1, EN1990-6.10.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, a spring stiffness, or with rot K a rotational spring (pin+rot 5000). Blank = every node pin.
  * @param [EI] Flexural stiffness: one value or one per span. Adds the slope and deflection rows.
  * @param [pattern] Pattern live load: blank or none, standard (classical arrangements) or full (every subset of spans, none included, exact by superposition), optionally followed by the live case label (default L). At most 12 spans when patterned.
  * @param [psi0] EN 1990 combination factor psi0: one number, or pairs such as "Q 0.7, S 0.5".
@@ -222,7 +222,7 @@ export function peaks(spans: any[][], loads: any[][], combos: any[][], supports?
  * @param spans Span lengths left to right (any length unit): a row or column, or one text cell such as "10 10".
  * @param effect What is measured: "reaction 2" (vertical reaction at node 2, nodes numbered from 1 at the left end), "moment reaction 1", "shear at 4.5", "moment at 6" or "deflection at 3" (needs EI).
  * @param positions Unit-load positions from the left end: a cell, row, column or block; the result has the same shape.
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, a spring stiffness, or with rot K a rotational spring (pin+rot 5000). Blank = every node pin.
  * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
  * @returns The ordinate at each position, in the shape of positions.
  */
@@ -239,7 +239,7 @@ export function influence(spans: any[][], effect: any, positions: any[][], suppo
  * @param axles Axle loads, first axle first (force, down +): a row or column, or one text cell such as "35 145 145". At most 35 axles.
  * @param spacings Distances between consecutive axles (length): one fewer than the axles; blank for one axle.
  * @param effect What is measured: "absolute moment" (largest moment anywhere), "moment at 6", "shear at 4.5", "reaction 2", "moment reaction 1" or "deflection at 3" (needs EI).
- * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
+ * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, a spring stiffness, or with rot K a rotational spring (pin+rot 5000). Blank = every node pin.
  * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
  * @returns Rows max and min: label, value, x of the first axle, direction ("as given": the other axles follow at larger x; "reversed"), x where the effect is measured.
  */

@@ -5,6 +5,7 @@ export type { ErrorCode } from "./errors";
 export { validateMember, MAX_LOADS } from "./validate";
 export { nodePositions, memberLength, isOnMember, snapToNode, nodeIndexAt, checkedPosition, positionTolerance, shownLength } from "./positions";
 export { checkStability } from "./stability";
+export { rotationalSpring } from "./layout";
 export { assemble, toDense } from "./stiffness";
 export type { StiffnessSystem } from "./stiffness";
 export { solveBanded } from "./banded";

@@ -1,4 +1,4 @@
-import type { Member } from "./model";
+import type { Member, Support } from "./model";
 import { nodePositions } from "./positions";
 
 export { nodePositions };
@@ -45,6 +45,11 @@ export function buildLayout(member: Member): Layout {
 }
 
 /** The four DOF numbers of span e: [w left, rotation left, w right, rotation right]. */
+/** The rotational spring at a node (moment per radian), 0 when it has none. */
+export function rotationalSpring(support: Support): number {
+  return "rotational" in support && support.rotational !== undefined ? support.rotational : 0;
+}
+
 export function elementDofs(layout: Layout, e: number): [number, number, number, number] {
   return [layout.deflectionDof[e], layout.rotationRightDof[e], layout.deflectionDof[e + 1], layout.rotationLeftDof[e + 1]];
 }

@@ -9,13 +9,16 @@
  * - Reactions: vertical force up positive, moment counter-clockwise positive.
  */
 
-/** What restrains a node (a span end). */
+/**
+ * What restrains a node (a span end). `rotational` (pin, free, spring only) is a rotational
+ * spring at the node, moment per radian (partial fixity); absent or 0 = none.
+ */
 export type Support =
-  | { kind: "pin" }
+  | { kind: "pin"; rotational?: number }
   | { kind: "fixed" }
-  | { kind: "free" }
+  | { kind: "free"; rotational?: number }
   | { kind: "hinge" }
-  | { kind: "spring"; stiffness: number };
+  | { kind: "spring"; stiffness: number; rotational?: number };
 
 export type LoadKind = "point" | "moment" | "udl" | "linear";
 

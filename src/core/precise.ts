@@ -9,7 +9,7 @@
 import { add, dd, div, mul, mulNumber, neg, sqrt, sub, toNumber, twoProduct, type DD } from "./doubleDouble";
 import type { SpanLoad } from "./elementLoads";
 import { invalid } from "./errors";
-import { elementDofs, type Layout } from "./layout";
+import { elementDofs, rotationalSpring, type Layout } from "./layout";
 import type { Member } from "./model";
 
 /** Smallest pivot, relative to its diagonal entry, that double-double elimination still trusts. */
@@ -125,6 +125,11 @@ export function solvePrecise(member: Member, layout: Layout, spanLoads: SpanLoad
       const i = layout.deflectionDof[node];
       band[i * stride] = add(band[i * stride], dd(support.stiffness));
     }
+    const rotational = rotationalSpring(support);
+    if (rotational > 0) {
+      const i = layout.rotationRightDof[node];
+      band[i * stride] = add(band[i * stride], dd(rotational));
+    }
   });
   const x = eliminate(band, rhs, n, halfBandwidth, member);
   const displacements = Float64Array.from(x, toNumber);
@@ -186,6 +191,11 @@ export function worstStiffnessRatio(member: Member): string {
     offer(spanStiffness[i] / spanStiffness[i + 1], `span ${i + 1}'s EI/L^3 is ${g(spanStiffness[i] / spanStiffness[i + 1])} times span ${i + 2}'s`);
   }
   member.supports.forEach((support, node) => {
+    const rotational = rotationalSpring(support);
+    if (rotational > 0) {
+      const bending = Math.max(node > 0 ? spanStiffness[node - 1] * member.spans[node - 1] ** 2 : 0, node < member.spans.length ? spanStiffness[node] * member.spans[node] ** 2 : 0);
+      offer(rotational / bending, `the rotational spring at node ${node + 1} is ${g(rotational / bending)} times the EI/L of the span beside it`);
+    }
     if (support.kind !== "spring") return;
     const near = Math.max(node > 0 ? spanStiffness[node - 1] : 0, node < member.spans.length ? spanStiffness[node] : 0);
     offer(support.stiffness / near, `the spring at node ${node + 1} is ${g(support.stiffness / near)} times the EI/L^3 of the span beside it`);

@@ -1,5 +1,5 @@
 import { isCollapsedPivot, type PivotStats } from "./banded";
-import { elementDofs } from "./layout";
+import { elementDofs, rotationalSpring } from "./layout";
 import { solvePrecise, worstStiffnessRatio } from "./precise";
 import type { Member, Piece, Quantity, Reaction, Solution } from "./model";
 import { pieceValue } from "./polynomial";
@@ -205,13 +205,17 @@ export function solve(member: Member): Solution {
   const loadScale = loadScaleOf(member, layout.length);
   const raw: Reaction[] = member.supports.map((support, i) => {
     const x = layout.nodeX[i];
+    // A rotational spring resists the clockwise rotation θ with a counter-clockwise moment kθ.
+    const moment = rotationalSpring(support) * value(layout.rotationRightDof[i]);
     switch (support.kind) {
       case "pin":
-        return { x, force: -nodeForce[i], moment: 0 };
+        return { x, force: -nodeForce[i], moment };
       case "fixed":
         return { x, force: -nodeForce[i], moment: -nodeMoment[i] };
       case "spring":
-        return { x, force: support.stiffness * value(layout.deflectionDof[i]), moment: 0 };
+        return { x, force: support.stiffness * value(layout.deflectionDof[i]), moment };
+      case "free":
+        return { x, force: 0, moment };
       default:
         return { x, force: 0, moment: 0 };
     }

@@ -1,5 +1,6 @@
 import { invalid } from "./errors";
 import type { Member } from "./model";
+import { rotationalSpring } from "./layout";
 import { nodePositions } from "./positions";
 
 /**
@@ -51,7 +52,7 @@ function fail(from: number, to: number): never {
  * move as a mechanism. The member is a chain of rigid segments joined at hinges; a sweep from
  * the left keeps the motions not yet prevented, and a motion that no later restraint can
  * reach (one that leaves a hinge, or the member end, unmoved) is a mechanism.
- * Springs count as restraints. Throws a #VALUE! SpanError naming the part that can move.
+ * Springs count as restraints; a rotational spring restrains only the slope. Throws a #VALUE! SpanError naming the part that can move.
  */
 export function checkStability(member: Member): void {
   const { spans, supports } = member;
@@ -64,8 +65,10 @@ export function checkStability(member: Member): void {
     const support = supports[node];
     const u = x / length;
     if (free.a.length === 0) lastFixedX = x;
-    if (support.kind === "pin" || support.kind === "spring") {
-      constrain(free, displacementRow(free, u));
+    if (support.kind === "pin" || support.kind === "spring" || support.kind === "free") {
+      if (support.kind !== "free") constrain(free, displacementRow(free, u));
+      // A rotational spring restrains the slope of the segment, as a fixed end does, but no deflection.
+      if (rotationalSpring(support) > 0) constrain(free, free.b.slice());
     } else if (support.kind === "fixed") {
       constrain(free, displacementRow(free, u));
       constrain(free, free.b.slice());

@@ -1,5 +1,5 @@
 import { equivalentNodalLoads, loadsBySpan, type SpanLoad } from "./elementLoads";
-import { buildLayout, elementDofs, type Layout } from "./layout";
+import { buildLayout, elementDofs, rotationalSpring, type Layout } from "./layout";
 import type { Member } from "./model";
 
 /**
@@ -77,6 +77,8 @@ export function assembleMember(member: Member): Assembly {
       const i = layout.deflectionDof[node];
       band[i * stride] += support.stiffness;
     }
+    const rotational = rotationalSpring(support);
+    if (rotational > 0) band[layout.rotationRightDof[node] * stride] += rotational;
   });
   return { layout, system: { size: layout.size, halfBandwidth, band, rhs }, spanLoads, nodalLoads };
 }

@@ -51,6 +51,18 @@ function validateSupports(member: Member, length: number): void {
         throw invalid(`${where()}: a spring support needs EI, since the result depends on EI relative to the spring`);
       }
     }
+    const rotational: unknown = (support as { rotational?: unknown }).rotational;
+    if (rotational !== undefined) {
+      if (support.kind === "fixed" || support.kind === "hinge") {
+        throw invalid(`${where()}: a rotational spring belongs with pin, free or a vertical spring, not with ${support.kind}`);
+      }
+      if (!isFiniteNumber(rotational) || rotational < 0) {
+        throw invalid(`${where()}: rotational spring stiffness must be a positive number (moment per radian), got ${show(rotational)}`);
+      }
+      if (member.stiffness === null && rotational > 0) {
+        throw invalid(`${where()}: a rotational spring needs EI, since the result depends on EI relative to the spring`);
+      }
+    }
     if (support.kind === "hinge" && (i === 0 || i === spans.length)) {
       throw invalid(`${where()}: a hinge joins two spans, so it belongs at an interior node, not at a member end`);
     }

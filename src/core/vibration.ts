@@ -11,6 +11,7 @@
 import { maxOf, minOf } from "./tolerance";
 import { clampedCount, elementMatrix, krylov } from "./dynamicStiffness";
 import { invalid, unavailable } from "./errors";
+import { rotationalSpring } from "./layout";
 import type { Load, Member } from "./model";
 import { checkStability } from "./stability";
 import { POSITION_TOLERANCE } from "./tolerance";
@@ -157,6 +158,8 @@ function buildMesh(model: VibrationModel): Mesh {
       rightDof.push(dof);
     }
     if (support.kind === "spring") springs.push({ dof: wDof[wDof.length - 1], stiffness: support.stiffness });
+    const rotational = rotationalSpring(support);
+    if (rotational > 0) springs.push({ dof: rightDof[rightDof.length - 1], stiffness: rotational });
   });
   const perLength = new Float64Array(nodes.length - 1);
   const pointMass = new Float64Array(nodes.length);

@@ -10,7 +10,7 @@
  * default length), stress (results; default force/section^2), deflection (results; default length).
  * Without a units argument every value is taken in consistent units, as before.
  */
-import { derivedUnit, invalid, parseUnitOf, type DimensionName, type Member, type Unit } from "../core";
+import { derivedUnit, invalid, parseUnitOf, rotationalSpring, type DimensionName, type Member, type Support, type Unit } from "../core";
 import { errorCodeOf, isEmpty, show } from "./cells";
 import { rowsOf, singleCell } from "./ranges";
 
@@ -144,13 +144,22 @@ export function readMemberUnits(arg: unknown): MemberUnits | null {
   };
 }
 
+/** A support in newtons and metres: a vertical spring is force/length, a rotational spring force x length per radian. */
+function supportInSI(support: Support, F: number, L: number): Support {
+  const rotational = rotationalSpring(support);
+  const turned = rotational > 0 ? { rotational: rotational * F * L } : {};
+  if (support.kind === "spring") return { kind: "spring", stiffness: (support.stiffness * F) / L, ...turned };
+  if (support.kind === "pin" || support.kind === "free") return { kind: support.kind, ...turned };
+  return support;
+}
+
 /** The member in metres and newtons, from a member read in the given units. */
 export function memberInSI(member: Member, units: MemberUnits): Member {
   const L = units.length.factor;
   const F = units.force.factor;
   return {
     spans: member.spans.map((s) => s * L),
-    supports: member.supports.map((s) => (s.kind === "spring" ? { kind: "spring", stiffness: (s.stiffness * F) / L } : s)),
+    supports: member.supports.map((s) => supportInSI(s, F, L)),
     stiffness: member.stiffness === null ? null : member.stiffness.map((ei) => ei * units.EI.factor),
     loads: member.loads.map((load) => {
       const scale = load.kind === "point" ? F : load.kind === "moment" ? F * L : F / L;

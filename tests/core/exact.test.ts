@@ -10,7 +10,7 @@
  * be refused: double-double arithmetic answers where double precision cannot.
  */
 import fc from "fast-check";
-import { diagram, isSpanError, solve, valueAt, type Member, type Quantity, type Solution } from "../../src/core";
+import { diagram, isSpanError, solve, valueAt, type Member, type Quantity, type Solution, type Support } from "../../src/core";
 import { HANDBOOK_TOLERANCE } from "../../src/core/tolerance";
 import { AUDIT_SEED, auditMember, nodesOfSpans, typed } from "./kit/auditMembers";
 import { exactForceMethodSolve, type ExactSolution } from "./kit/exactForceMethod";
@@ -72,8 +72,25 @@ function mismatches(m: Member, list: Comparison[]): string[] {
     .map((c) => `${c.what}: got ${c.got}, exact ${c.want} (${(Math.abs(c.got - c.want) / scale[c.quantity]).toExponential(1)} of its scale)`);
 }
 
-function audit(kind: "decimal" | "ill", count: number, seed: number): { failures: string[]; refused: string[] } {
-  const members = fc.sample(auditMember(kind), { seed, numRuns: count });
+/**
+ * The same member with a rotational spring at every pin, free or spring node whose index
+ * has the member's parity: k from `low` to `high` times the EI/L of the span beside it (log-uniform
+ * by a fixed sequence, so the audit stays seeded). Adding a restraint keeps the member stable.
+ */
+function withRotationalSprings(m: Member, index: number, low: number, high: number): Member {
+  const ei = (span: number): number => (m.stiffness === null ? 1 : m.stiffness.length === 1 ? m.stiffness[0] : m.stiffness[span]);
+  const supports = m.supports.map((s, n): Support => {
+    if ((s.kind !== "pin" && s.kind !== "free" && s.kind !== "spring") || (n + index) % 2 === 1) return s;
+    const span = Math.min(n, m.spans.length - 1);
+    const t = ((n * 0.6180339887 + index * 0.4142135624) % 1 + 1) % 1;
+    return { ...s, rotational: (low * Math.pow(high / low, t) * ei(span)) / m.spans[span] };
+  });
+  return { ...m, supports };
+}
+
+function audit(kind: "decimal" | "ill", count: number, seed: number, rotational: [number, number] | null = null): { failures: string[]; refused: string[] } {
+  const sampled = fc.sample(auditMember(kind), { seed, numRuns: count });
+  const members = rotational === null ? sampled : sampled.map((m, i) => withRotationalSprings(m, i, rotational[0], rotational[1]));
   const failures: string[] = [];
   const refused: string[] = [];
   members.forEach((m, index) => {
@@ -98,6 +115,16 @@ describe("exact audit against the force method in BigInt fixed point", () => {
     ["spans over five decades, EI ratios to 1e6, springs 1e-9 to 1e12 of EI/L^3", 1000, "ill", AUDIT_SEED + 1],
   ] as const)("%s: %i members agree to 1e-9 of each quantity's own scale, none refused", (_, count, kind, seed) => {
     const { failures, refused } = audit(kind, count, seed);
+    expect({ refused: refused.slice(0, 3), failures: failures.slice(0, 3), counts: [refused.length, failures.length] }).toEqual({ refused: [], failures: [], counts: [0, 0] });
+  });
+});
+
+describe("exact audit with rotational springs (partial fixity) against the BigInt force method", () => {
+  test.each([
+    ["decimal members, rotational springs 0.01 to 100 of EI/L", 300, "decimal", AUDIT_SEED + 2, [0.01, 100]],
+    ["ill-conditioned members, rotational springs 1e-9 to 1e12 of EI/L", 300, "ill", AUDIT_SEED + 3, [1e-9, 1e12]],
+  ] as const)("%s: %i members agree to 1e-9 of each quantity's own scale, none refused", (_, count, kind, seed, range) => {
+    const { failures, refused } = audit(kind, count, seed, [range[0], range[1]]);
     expect({ refused: refused.slice(0, 3), failures: failures.slice(0, 3), counts: [refused.length, failures.length] }).toEqual({ refused: [], failures: [], counts: [0, 0] });
   });
 });

@@ -79,6 +79,21 @@ describe("readMemberUnits", () => {
 });
 
 describe("memberInSI", () => {
+  test("a rotational spring scales as force x length per radian, a vertical one as force per length", () => {
+    const m: Member = {
+      spans: [20],
+      supports: [{ kind: "pin", rotational: 7 }, { kind: "spring", stiffness: 50, rotational: 9 }],
+      stiffness: [1e6],
+      loads: [],
+    };
+    const si = memberInSI(m, readMemberUnits("length=ft, force=kip")!);
+    expect(si.supports[0]).toEqual({ kind: "pin", rotational: expect.any(Number) });
+    near((si.supports[0] as { rotational: number }).rotational, 7 * KIP * FT);
+    near((si.supports[1] as { stiffness: number }).stiffness, (50 * KIP) / FT);
+    near((si.supports[1] as { rotational: number }).rotational, 9 * KIP * FT);
+    expect(memberInSI({ ...m, supports: [{ kind: "free" }, { kind: "fixed" }] }, readMemberUnits("length=ft, force=kip")!).supports).toEqual([{ kind: "free" }, { kind: "fixed" }]);
+  });
+
   test("every load kind, springs and EI scale by their own dimension", () => {
     const m: Member = {
       spans: [20, 10],

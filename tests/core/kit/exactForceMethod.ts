@@ -2,7 +2,7 @@
  * The force method of forceMethod.ts carried out in BigInt fixed point (fixed.ts): unknowns
  * are the support reactions, the slope jumps at hinges and the slope and deflection at the
  * left end; equations are equilibrium past the right end, zero deflection (and slope) at
- * supports, spring compatibility and zero moment at hinges; every quantity is a sum of
+ * supports, spring compatibility (vertical, and rotational: moment = k x rotation) and zero moment at hinges; every quantity is a sum of
  * singularity functions (Macaulay brackets) integrated exactly span by span. With about 190
  * decimal places of resolution it is exact for the suite's purposes however ill-conditioned
  * the member (a short link beside a hinge, springs 1e-9 or 1e12 of the spans' stiffness, EI
@@ -92,6 +92,12 @@ function solveLinear(a: Fixed[][], b: Fixed[]): Fixed[] | null {
   return x;
 }
 
+/** A node's rotational spring (moment per radian), read here independently of src/core. */
+function rotationalOf(support: Member["supports"][number]): number {
+  const k = (support as { rotational?: number }).rotational;
+  return k === undefined ? 0 : k;
+}
+
 export function exactForceMethodSolve(member: Member): ExactSolution {
   const spanCount = member.spans.length;
   const nodes: Fixed[] = [0n];
@@ -113,7 +119,7 @@ export function exactForceMethodSolve(member: Member): ExactSolution {
   member.supports.forEach((support) => {
     const vertical = support.kind === "pin" || support.kind === "fixed" || support.kind === "spring";
     forceIndex.push(vertical ? count++ : null);
-    momentIndex.push(support.kind === "fixed" ? count++ : null);
+    momentIndex.push(support.kind === "fixed" || rotationalOf(support) > 0 ? count++ : null);
   });
   member.supports.forEach((support, i) => {
     hingeIndex.push(support.kind === "hinge" && i > 0 && i < spanCount ? count++ : null);
@@ -226,6 +232,14 @@ export function exactForceMethodSolve(member: Member): ExactSolution {
     if (support.kind === "spring") {
       const row = w.slice();
       addScaled(row, unit(forceIndex[i] as number), -F.div(F.ONE, F.fromNumber(support.stiffness)));
+      equations.push(row);
+    }
+    const k = rotationalOf(support);
+    if (k > 0) {
+      // A rotational spring's reaction moment (counter-clockwise +) is k times the node's rotation.
+      const s = spanOf(x, i === 0 ? "right" : "left");
+      const row = slopeIn(s, spanStartSlope[s], x).slice();
+      addScaled(row, unit(momentIndex[i] as number), -F.div(F.ONE, F.fromNumber(k)));
       equations.push(row);
     }
     if (hingeIndex[i] !== null) equations.push(momentAt(x, false));

@@ -5,7 +5,7 @@
  * It shares nothing with src/core but the model types: unknowns are the support reactions,
  * the slope jumps at hinges and the slope and deflection at the left end; equations are the
  * two equilibrium conditions past the right end, zero deflection (and slope) at supports,
- * spring compatibility and zero moment at hinges. Every quantity is an affine function of the
+ * spring compatibility (vertical, and rotational: moment = k x rotation) and zero moment at hinges. Every quantity is an affine function of the
  * unknowns, integrated exactly span by span (EI is constant within a span).
  */
 import { Matrix, SingularValueDecomposition } from "ml-matrix";
@@ -57,6 +57,12 @@ function integral2(s: number, x: number, at: number, power: number): number {
   return f(u1) - f(u0);
 }
 
+/** A node's rotational spring, read here independently of src/core. */
+function rotationalOf(support: Support): number {
+  const k = (support as { rotational?: number }).rotational;
+  return k === undefined ? 0 : k;
+}
+
 export function forceMethodSolve(member: Member): ForceMethodSolution {
   const nodeX = [0];
   for (const span of member.spans) nodeX.push(nodeX[nodeX.length - 1] + span);
@@ -70,7 +76,7 @@ export function forceMethodSolve(member: Member): ForceMethodSolution {
   member.supports.forEach((support: Support) => {
     const vertical = support.kind === "pin" || support.kind === "fixed" || support.kind === "spring";
     forceIndex.push(vertical ? count++ : null);
-    momentIndex.push(support.kind === "fixed" ? count++ : null);
+    momentIndex.push(support.kind === "fixed" || rotationalOf(support) > 0 ? count++ : null);
   });
   member.supports.forEach((support, i) => {
     const interior = i > 0 && i < member.supports.length - 1;
@@ -176,6 +182,9 @@ export function forceMethodSolve(member: Member): ForceMethodSolution {
     if (support.kind === "spring") {
       equations.push(add(deflectionAt(x, "left"), unit(forceIndex[i] as number), -1 / support.stiffness));
     }
+    const k = rotationalOf(support);
+    // A rotational spring's reaction moment (counter-clockwise +) is k times the node's rotation.
+    if (k > 0) equations.push(add(slopeAt(x, i === 0 ? "right" : "left"), unit(momentIndex[i] as number), -1 / k));
     if (hingeIndex[i] !== null) equations.push(momentAt(x, false));
   });
   if (equations.length !== size) throw new Error(`force method: ${equations.length} equations for ${size} unknowns`);
