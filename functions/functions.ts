@@ -188,12 +188,13 @@ export function diagram(spans: any[][], loads: any[][], points?: any, supports?:
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
  * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
  * @param [quantity] shear, moment (default) or deflection.
- * @param [pattern] Pattern live load: blank or none (loads as given), standard (the classical span arrangements), or full (every subset of spans, none included, exact by superposition), optionally followed by the live case label (default L), e.g. "full L". At most 12 spans when patterned.
+ * @param [pattern] Pattern live load: blank or none (loads as given), standard (classical span arrangements) or full (every subset of spans, exact by superposition), then optionally the live case label (default L), e.g. "full L". At most 12 spans when patterned.
  * @param [psi0] EN 1990 combination factor psi0 for the accompanying variable cases: one number, or pairs such as "Q 0.7, S 0.5".
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs read and results given in those units (moments in force x length, deflection in the deflection unit). Blank = consistent units.
  * @returns One row per x: x, largest value, governing combination, smallest value, governing combination.
  */
-export function envelope(spans: any[][], loads: any[][], x: any[][], combos: any[][], supports?: any[][], EI?: any[][], quantity?: any, pattern?: any, psi0?: any): any[][] {
-  return sheetEnvelope(spans, loads, x, combos, supports, EI, quantity, pattern, psi0);
+export function envelope(spans: any[][], loads: any[][], x: any[][], combos: any[][], supports?: any[][], EI?: any[][], quantity?: any, pattern?: any, psi0?: any, units?: any[][]): any[][] {
+  return sheetEnvelope(spans, loads, x, combos, supports, EI, quantity, pattern, psi0, units);
 }
 
 /**
@@ -208,10 +209,11 @@ export function envelope(spans: any[][], loads: any[][], x: any[][], combos: any
  * @param [EI] Flexural stiffness: one value or one per span. Adds the slope and deflection rows.
  * @param [pattern] Pattern live load: blank or none, standard (classical arrangements) or full (every subset of spans, none included, exact by superposition), optionally followed by the live case label (default L). At most 12 spans when patterned.
  * @param [psi0] EN 1990 combination factor psi0: one number, or pairs such as "Q 0.7, S 0.5".
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs read and results given in those units (moments in force x length, deflection in the deflection unit). Blank = consistent units.
  * @returns Rows shear, moment (slope, deflection with EI): label, max, x at max, governing combination, min, x at min, governing combination.
  */
-export function peaks(spans: any[][], loads: any[][], combos: any[][], supports?: any[][], EI?: any[][], pattern?: any, psi0?: any): any[][] {
-  return sheetPeaks(spans, loads, combos, supports, EI, pattern, psi0);
+export function peaks(spans: any[][], loads: any[][], combos: any[][], supports?: any[][], EI?: any[][], pattern?: any, psi0?: any, units?: any[][]): any[][] {
+  return sheetPeaks(spans, loads, combos, supports, EI, pattern, psi0, units);
 }
 
 /**
@@ -224,10 +226,11 @@ export function peaks(spans: any[][], loads: any[][], combos: any[][], supports?
  * @param positions Unit-load positions from the left end: a cell, row, column or block; the result has the same shape.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
  * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in". The unit load is one force unit: reaction and shear ordinates have no unit, moment ordinates are lengths, deflection is per force unit.
  * @returns The ordinate at each position, in the shape of positions.
  */
-export function influence(spans: any[][], effect: any, positions: any[][], supports?: any[][], EI?: any[][]): any[][] {
-  return sheetInfluence(spans, effect, positions, supports, EI);
+export function influence(spans: any[][], effect: any, positions: any[][], supports?: any[][], EI?: any[][], units?: any[][]): any[][] {
+  return sheetInfluence(spans, effect, positions, supports, EI, units);
 }
 
 /**
@@ -241,10 +244,11 @@ export function influence(spans: any[][], effect: any, positions: any[][], suppo
  * @param effect What is measured: "absolute moment" (largest moment anywhere), "moment at 6", "shear at 4.5", "reaction 2", "moment reaction 1" or "deflection at 3" (needs EI).
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
  * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs read and results given in those units (moments in force x length, deflection in the deflection unit). Blank = consistent units.
  * @returns Rows max and min: label, value, x of the first axle, direction ("as given": the other axles follow at larger x; "reversed"), x where the effect is measured.
  */
-export function moving(spans: any[][], axles: any[][], spacings: any[][], effect: any, supports?: any[][], EI?: any[][]): any[][] {
-  return sheetMoving(spans, axles, spacings, effect, supports, EI);
+export function moving(spans: any[][], axles: any[][], spacings: any[][], effect: any, supports?: any[][], EI?: any[][], units?: any[][]): any[][] {
+  return sheetMoving(spans, axles, spacings, effect, supports, EI, units);
 }
 
 /**

@@ -36,18 +36,18 @@ export const CATALOGUE: CatalogueEntry[] = [
   {
     id: "ENVELOPE",
     exportName: "envelope",
-    parameters: [...member, ["x", "matrix", false], ["combos", "matrix", false], ["supports", "matrix", true], ["EI", "matrix", true], ["quantity", "scalar", true], ["pattern", "scalar", true], ["psi0", "scalar", true]],
+    parameters: [...member, ["x", "matrix", false], ["combos", "matrix", false], ["supports", "matrix", true], ["EI", "matrix", true], ["quantity", "scalar", true], ["pattern", "scalar", true], ["psi0", "scalar", true], ["units", "matrix", true]],
   },
   {
     id: "PEAKS",
     exportName: "peaks",
-    parameters: [...member, ["combos", "matrix", false], ["supports", "matrix", true], ["EI", "matrix", true], ["pattern", "scalar", true], ["psi0", "scalar", true]],
+    parameters: [...member, ["combos", "matrix", false], ["supports", "matrix", true], ["EI", "matrix", true], ["pattern", "scalar", true], ["psi0", "scalar", true], ["units", "matrix", true]],
   },
-  { id: "INFLUENCE", exportName: "influence", parameters: [["spans", "matrix", false], ["effect", "scalar", false], ["positions", "matrix", false], ["supports", "matrix", true], ["EI", "matrix", true]] },
+  { id: "INFLUENCE", exportName: "influence", parameters: [["spans", "matrix", false], ["effect", "scalar", false], ["positions", "matrix", false], ["supports", "matrix", true], ["EI", "matrix", true], ["units", "matrix", true]] },
   {
     id: "MOVING",
     exportName: "moving",
-    parameters: [["spans", "matrix", false], ["axles", "matrix", false], ["spacings", "matrix", false], ["effect", "scalar", false], ["supports", "matrix", true], ["EI", "matrix", true]],
+    parameters: [["spans", "matrix", false], ["axles", "matrix", false], ["spacings", "matrix", false], ["effect", "scalar", false], ["supports", "matrix", true], ["EI", "matrix", true], ["units", "matrix", true]],
   },
   { id: "COMBOS", exportName: "combos", parameters: [["set", "scalar", false], ["psi0", "scalar", true], ["cases", "matrix", true]] },
   // sections, stresses, serviceability checks and units
