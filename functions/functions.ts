@@ -41,10 +41,11 @@ import { sheetCaseReactions, sheetFrequencies, sheetModeShape, sheetSpanPeaks } 
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns One row per node: x, vertical reaction, moment reaction.
  */
-export function reactions(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetReactions(spans, loads, supports, EI, combo, units);
+export function reactions(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetReactions(spans, loads, supports, EI, combo, units, headers);
 }
 
 /**
@@ -130,10 +131,11 @@ export function deflection(spans: any[][], loads: any[][], x: any[][], supports?
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns Two rows: largest moment and its x; smallest moment and its x.
  */
-export function maxMoment(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetMaxMoment(spans, loads, supports, EI, combo, units);
+export function maxMoment(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetMaxMoment(spans, loads, supports, EI, combo, units, headers);
 }
 
 /**
@@ -147,10 +149,11 @@ export function maxMoment(spans: any[][], loads: any[][], supports?: any[][], EI
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Adds the slope and deflection rows; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns Rows shear, moment (then slope, deflection with EI): label, max, x at max, min, x at min.
  */
-export function extremes(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetExtremes(spans, loads, supports, EI, combo, units);
+export function extremes(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetExtremes(spans, loads, supports, EI, combo, units, headers);
 }
 
 /**
@@ -165,10 +168,11 @@ export function extremes(spans: any[][], loads: any[][], supports?: any[][], EI?
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Fills the slope and deflection columns; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns Rows x, shear, moment, slope, deflection.
  */
-export function diagram(spans: any[][], loads: any[][], points?: any, supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetDiagram(spans, loads, points, supports, EI, combo, units);
+export function diagram(spans: any[][], loads: any[][], points?: any, supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetDiagram(spans, loads, points, supports, EI, combo, units, headers);
 }
 
 // ---------------------------------------------------------------------------------------
@@ -191,10 +195,11 @@ export function diagram(spans: any[][], loads: any[][], points?: any, supports?:
  * @param [pattern] Pattern live load: blank or none (loads as given), standard (classical span arrangements) or full (every subset of spans, exact by superposition), then optionally the live case label (default L), e.g. "full L". At most 12 spans when patterned.
  * @param [psi0] EN 1990 combination factor psi0 for the accompanying variable cases: one number, or pairs such as "Q 0.7, S 0.5".
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs read and results given in those units (moments in force x length, deflection in the deflection unit). Blank = consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns One row per x: x, largest value, governing combination, smallest value, governing combination.
  */
-export function envelope(spans: any[][], loads: any[][], x: any[][], combos: any[][], supports?: any[][], EI?: any[][], quantity?: any, pattern?: any, psi0?: any, units?: any[][]): any[][] {
-  return sheetEnvelope(spans, loads, x, combos, supports, EI, quantity, pattern, psi0, units);
+export function envelope(spans: any[][], loads: any[][], x: any[][], combos: any[][], supports?: any[][], EI?: any[][], quantity?: any, pattern?: any, psi0?: any, units?: any[][], headers?: any): any[][] {
+  return sheetEnvelope(spans, loads, x, combos, supports, EI, quantity, pattern, psi0, units, headers);
 }
 
 /**
@@ -210,10 +215,11 @@ export function envelope(spans: any[][], loads: any[][], x: any[][], combos: any
  * @param [pattern] Pattern live load: blank or none, standard (classical arrangements) or full (every subset of spans, none included, exact by superposition), optionally followed by the live case label (default L). At most 12 spans when patterned.
  * @param [psi0] EN 1990 combination factor psi0: one number, or pairs such as "Q 0.7, S 0.5".
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs read and results given in those units (moments in force x length, deflection in the deflection unit). Blank = consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns Rows shear, moment (slope, deflection with EI): label, max, x at max, governing combination, min, x at min, governing combination.
  */
-export function peaks(spans: any[][], loads: any[][], combos: any[][], supports?: any[][], EI?: any[][], pattern?: any, psi0?: any, units?: any[][]): any[][] {
-  return sheetPeaks(spans, loads, combos, supports, EI, pattern, psi0, units);
+export function peaks(spans: any[][], loads: any[][], combos: any[][], supports?: any[][], EI?: any[][], pattern?: any, psi0?: any, units?: any[][], headers?: any): any[][] {
+  return sheetPeaks(spans, loads, combos, supports, EI, pattern, psi0, units, headers);
 }
 
 /**
@@ -245,10 +251,11 @@ export function influence(spans: any[][], effect: any, positions: any[][], suppo
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness. Blank = every node pin.
  * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs read and results given in those units (moments in force x length, deflection in the deflection unit). Blank = consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns Rows max and min: label, value, x of the first axle, direction ("as given": the other axles follow at larger x; "reversed"), x where the effect is measured.
  */
-export function moving(spans: any[][], axles: any[][], spacings: any[][], effect: any, supports?: any[][], EI?: any[][], units?: any[][]): any[][] {
-  return sheetMoving(spans, axles, spacings, effect, supports, EI, units);
+export function moving(spans: any[][], axles: any[][], spacings: any[][], effect: any, supports?: any[][], EI?: any[][], units?: any[][], headers?: any): any[][] {
+  return sheetMoving(spans, axles, spacings, effect, supports, EI, units, headers);
 }
 
 /**
@@ -400,10 +407,11 @@ export function stiffness(E: any[][], I: any[][], EUnit?: any, IUnit?: any, resu
  * @param [EI] Flexural stiffness, one value or one per span. Adds the deflection columns; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in", as for SPAN.REACTIONS. Blank = consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns One row per span: span, length, largest M, x, smallest M, x, largest |V|, x, largest |deflection|, x.
  */
-export function spanPeaks(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetSpanPeaks(spans, loads, supports, EI, combo, units);
+export function spanPeaks(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetSpanPeaks(spans, loads, supports, EI, combo, units, headers);
 }
 
 /**
@@ -418,10 +426,11 @@ export function spanPeaks(spans: any[][], loads: any[][], supports?: any[][], EI
  * @param [combo] Load combination such as 1.2D+1.6L: adds a last column with the factored reactions. Blank = no combination column.
  * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2", as for SPAN.REACTIONS. Blank = consistent units.
  * @param [reaction] vertical (blank: vertical force, up +) or moment (moment reactions, counter-clockwise +; 0 where a node is not fixed).
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns One row per node: x, one reaction per case, and the combination's.
  */
-export function caseReactions(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], reaction?: any): any[][] {
-  return sheetCaseReactions(spans, loads, supports, EI, combo, units, reaction);
+export function caseReactions(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], reaction?: any, headers?: any): any[][] {
+  return sheetCaseReactions(spans, loads, supports, EI, combo, units, reaction, headers);
 }
 
 /**

@@ -60,6 +60,8 @@ const tail = [
   { name: "combo", kind: "value", optional: true },
 ] as const;
 const withUnits = [...tail, { name: "units", kind: "block", optional: true }] as const;
+/** The optional last argument of the tabular functions that adds a header row (src/sheet/headers.ts). */
+const headers = { name: "headers", kind: "value", optional: true } as const;
 const atX = [...member, { name: "x", kind: "block", optional: false }, ...withUnits] as const;
 
 const block = (name: string, optional = false) => ({ name, kind: "block" as const, optional });
@@ -70,13 +72,13 @@ const STUDIES: SpanFunctionEntry[] = [
   {
     sheetName: "SPAN.ENVELOPE",
     exportName: "envelope",
-    arguments: [...member, block("x"), block("combos"), block("supports", true), block("EI", true), value("quantity", true), value("pattern", true), value("psi0", true), block("units", true)],
+    arguments: [...member, block("x"), block("combos"), block("supports", true), block("EI", true), value("quantity", true), value("pattern", true), value("psi0", true), block("units", true), value("headers", true)],
     sizeRule: "rowPerX",
   },
   {
     sheetName: "SPAN.PEAKS",
     exportName: "peaks",
-    arguments: [...member, block("combos"), block("supports", true), block("EI", true), value("pattern", true), value("psi0", true), block("units", true)],
+    arguments: [...member, block("combos"), block("supports", true), block("EI", true), value("pattern", true), value("psi0", true), block("units", true), value("headers", true)],
     sizeRule: "peaks",
   },
   {
@@ -88,7 +90,7 @@ const STUDIES: SpanFunctionEntry[] = [
   {
     sheetName: "SPAN.MOVING",
     exportName: "moving",
-    arguments: [block("spans"), block("axles"), block("spacings"), value("effect"), block("supports", true), block("EI", true), block("units", true)],
+    arguments: [block("spans"), block("axles"), block("spacings"), value("effect"), block("supports", true), block("EI", true), block("units", true), value("headers", true)],
     sizeRule: "twoByFive",
   },
   { sheetName: "SPAN.COMBOS", exportName: "combos", arguments: [value("set"), value("psi0", true), block("cases", true)], sizeRule: "learned" },
@@ -112,8 +114,8 @@ const CHECKS: SpanFunctionEntry[] = [
 
 /** Results per span and per load case, natural frequencies and mode shapes. */
 const RESULTS: SpanFunctionEntry[] = [
-  { sheetName: "SPAN.SPANPEAKS", exportName: "spanPeaks", arguments: [...member, ...withUnits], sizeRule: "learned" },
-  { sheetName: "SPAN.CASEREACTIONS", exportName: "caseReactions", arguments: [...member, ...withUnits, value("reaction", true)], sizeRule: "learned" },
+  { sheetName: "SPAN.SPANPEAKS", exportName: "spanPeaks", arguments: [...member, ...withUnits, headers], sizeRule: "learned" },
+  { sheetName: "SPAN.CASEREACTIONS", exportName: "caseReactions", arguments: [...member, ...withUnits, value("reaction", true), headers], sizeRule: "learned" },
   {
     sheetName: "SPAN.FREQUENCIES",
     exportName: "frequencies",
@@ -129,17 +131,17 @@ const RESULTS: SpanFunctionEntry[] = [
 ];
 
 export const SPAN_FUNCTIONS: readonly SpanFunctionEntry[] = [
-  { sheetName: "SPAN.REACTIONS", exportName: "reactions", arguments: [...member, ...withUnits], sizeRule: "perNode" },
+  { sheetName: "SPAN.REACTIONS", exportName: "reactions", arguments: [...member, ...withUnits, headers], sizeRule: "perNode" },
   { sheetName: "SPAN.SHEAR", exportName: "shear", arguments: atX, sizeRule: "shapeOfX" },
   { sheetName: "SPAN.MOMENT", exportName: "moment", arguments: atX, sizeRule: "shapeOfX" },
   { sheetName: "SPAN.SLOPE", exportName: "slope", arguments: atX, sizeRule: "shapeOfX" },
   { sheetName: "SPAN.DEFLECTION", exportName: "deflection", arguments: atX, sizeRule: "shapeOfX" },
-  { sheetName: "SPAN.MAXMOMENT", exportName: "maxMoment", arguments: [...member, ...withUnits], sizeRule: "twoByTwo" },
-  { sheetName: "SPAN.EXTREMES", exportName: "extremes", arguments: [...member, ...withUnits], sizeRule: "extremes" },
+  { sheetName: "SPAN.MAXMOMENT", exportName: "maxMoment", arguments: [...member, ...withUnits, headers], sizeRule: "twoByTwo" },
+  { sheetName: "SPAN.EXTREMES", exportName: "extremes", arguments: [...member, ...withUnits, headers], sizeRule: "extremes" },
   {
     sheetName: "SPAN.DIAGRAM",
     exportName: "diagram",
-    arguments: [...member, { name: "points", kind: "value", optional: true }, ...withUnits],
+    arguments: [...member, { name: "points", kind: "value", optional: true }, ...withUnits, headers],
     sizeRule: "diagram",
   },
   ...STUDIES,

@@ -29,7 +29,8 @@ import type { LoadRow } from "./loadRow";
 import { readLoads, readMember } from "./member";
 import { isAllBlank, listEntries, rowsOf, singleCell } from "./ranges";
 import { finite, mapPositions } from "./shape";
-import { memberInOwnUnits, readMemberUnits } from "./units";
+import { COLUMNS, readHeaders, withHeaders } from "./headers";
+import { memberInOwnUnits, readMemberUnits, type MemberUnits } from "./units";
 import { outputScale } from "./worksheet";
 
 /**
@@ -38,10 +39,10 @@ import { outputScale } from "./worksheet";
  * (only EI converted), so spans, x, positions and effects are never converted; deflection
  * alone is shown in the deflection unit of the units argument.
  */
-function memberOf(spans: unknown, loads: unknown, supports: unknown, EI: unknown, units: unknown): { member: Member; deflection: number } {
+function memberOf(spans: unknown, loads: unknown, supports: unknown, EI: unknown, units: unknown): { member: Member; deflection: number; given: MemberUnits | null } {
   const given = readMemberUnits(units ?? null);
   const member = readMember({ spans, loads, supports: supports ?? null, EI: EI ?? null, combo: null });
-  return { member: given === null ? member : memberInOwnUnits(member, given), deflection: outputScale(given).deflection };
+  return { member: given === null ? member : memberInOwnUnits(member, given), deflection: outputScale(given).deflection, given };
 }
 
 /** A study value in the sheet's units: only a deflection (or deflection per unit force) is scaled. */
@@ -122,9 +123,11 @@ export function sheetEnvelope(
   pattern: unknown,
   psi0: unknown,
   units?: unknown,
+  headers?: unknown,
 ): (number | string)[][] {
   return guarded(() => {
-    const { member, deflection } = memberOf(spans, loads, supports, EI, units);
+    const { member, deflection, given: unitsGiven } = memberOf(spans, loads, supports, EI, units);
+    const header = readHeaders(headers);
     const q = readQuantity(quantity ?? null);
     if (q === "deflection" && member.stiffness === null) throw invalid("quantity deflection needs EI: give EI for the member or each span");
     checkCombinationCells(combos);
@@ -134,7 +137,7 @@ export function sheetEnvelope(
     const given = values.filter((v): v is number => v !== null);
     const stations = envelope(member, combinations, given, options);
     let next = 0;
-    return values.map((v) => {
+    const rows = values.map((v) => {
       if (v === null) return ["", "", "", "", ""];
       const s = stations[next++];
       const max = s.max[q]!;
@@ -147,6 +150,7 @@ export function sheetEnvelope(
         governedBy(min),
       ];
     });
+    return withHeaders(rows, header, COLUMNS.envelope(q), unitsGiven);
   });
 }
 
@@ -160,13 +164,15 @@ export function sheetPeaks(
   pattern: unknown,
   psi0: unknown,
   units?: unknown,
+  headers?: unknown,
 ): (number | string)[][] {
   return guarded(() => {
-    const { member, deflection } = memberOf(spans, loads, supports, EI, units);
+    const { member, deflection, given } = memberOf(spans, loads, supports, EI, units);
+    const header = readHeaders(headers);
     checkCombinationCells(combos);
     const combinations = readCombinations(combos, psi0 ?? null, caseLabels(loads));
     const peaks = governingPeaks(member, combinations, readPattern(pattern ?? null));
-    return peaks.map((p) => [
+    const rows = peaks.map((p) => [
       p.quantity,
       finite(shownAs(p.quantity, p.max.value, deflection), `the largest ${p.quantity}`),
       p.max.x,
@@ -175,6 +181,7 @@ export function sheetPeaks(
       p.min.x,
       governedBy(p.min),
     ]);
+    return withHeaders(rows, header, COLUMNS.peaks, given);
   });
 }
 
@@ -218,16 +225,19 @@ export function sheetMoving(
   supports: unknown,
   EI: unknown,
   units?: unknown,
+  headers?: unknown,
 ): (number | string)[][] {
   return guarded(() => {
-    const { member, deflection } = memberOf(spans, null, supports, EI, units);
+    const { member, deflection, given } = memberOf(spans, null, supports, EI, units);
+    const header = readHeaders(headers);
     const train = readTrain(axles, spacings);
     const e = readEffect(effect, true);
     const result = movingLoad(member, train, e);
-    return (["max", "min"] as const).map((label) => {
+    const rows = (["max", "min"] as const).map((label) => {
       const p = result[label];
       return [label, finite(shownAs(e.kind, p.value, deflection), `the ${label} value`), p.leadX, p.direction, p.x];
     });
+    return withHeaders(rows, header, COLUMNS.moving(e.kind), given);
   });
 }
 
