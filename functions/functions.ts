@@ -305,10 +305,11 @@ export function section(shape: any, dimensions: any[][], unit?: any, resultUnit?
  * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Needed for springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs: length=ft, force=kip (both needed when any is given), EI=kip*in^2, section=in (default length), stress=ksi (default force/section^2). Blank = consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns Rows top and bottom: fibre, largest stress, x, smallest stress, x.
  */
-export function stress(spans: any[][], loads: any[][], section: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetStress(spans, loads, section, supports, EI, combo, units);
+export function stress(spans: any[][], loads: any[][], section: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetStress(spans, loads, section, supports, EI, combo, units, headers);
 }
 
 /**
@@ -323,10 +324,11 @@ export function stress(spans: any[][], loads: any[][], section: any[][], support
  * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Needed for springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs: length=m, force=kN (both needed when any is given), EI=kN*m^2, section=mm (default length), stress=MPa (default force/section^2). Blank = consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns Rows average and peak: label, stress, x of the largest |V|.
  */
-export function shearStress(spans: any[][], loads: any[][], section: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetShearStress(spans, loads, section, supports, EI, combo, units);
+export function shearStress(spans: any[][], loads: any[][], section: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetShearStress(spans, loads, section, supports, EI, combo, units, headers);
 }
 
 /**
@@ -341,10 +343,11 @@ export function shearStress(spans: any[][], loads: any[][], section: any[][], su
  * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Required here; SPAN.STIFFNESS builds it from E and I.
  * @param [combo] Load combination such as D+L or L alone: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs: length=ft, force=kip (both needed when any is given), EI=kip*in^2, deflection=in (default length). Blank = consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns One row per span: span number, span length, deflection, x, span/deflection ("" when 0), limit divisor, pass or fail.
  */
-export function deflectionCheck(spans: any[][], loads: any[][], limit: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetDeflectionCheck(spans, loads, limit, supports, EI, combo, units);
+export function deflectionCheck(spans: any[][], loads: any[][], limit: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetDeflectionCheck(spans, loads, limit, supports, EI, combo, units, headers);
 }
 
 /**
@@ -447,10 +450,11 @@ export function caseReactions(spans: any[][], loads: any[][], supports?: any[][]
  * @param [combo] Combination that gives the mass loads, such as D+0.1L. Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=m, force=kN, EI=kN*m^2": lengths, loads and EI in these units; mass in force x s^2 / length^2 of them. Blank = consistent units.
  * @param [g] Acceleration of gravity for loads/g, in the length unit per s^2 (9.80665 for m, 32.174 for ft). Blank = standard gravity in the units' length unit; needed with loads and no units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns One row per mode: mode, frequency (Hz), circular frequency (rad/s). Floor vibration acceptance is the governing guide's and the engineer's call.
  */
-export function frequencies(spans: any[][], EI: any[][], mass: any[][], modes?: any, supports?: any[][], loads?: any[][], combo?: any, units?: any[][], g?: any): any[][] {
-  return sheetFrequencies(spans, EI, mass, modes, supports, loads, combo, units, g);
+export function frequencies(spans: any[][], EI: any[][], mass: any[][], modes?: any, supports?: any[][], loads?: any[][], combo?: any, units?: any[][], g?: any, headers?: any): any[][] {
+  return sheetFrequencies(spans, EI, mass, modes, supports, loads, combo, units, g, headers);
 }
 
 /**

@@ -103,10 +103,10 @@ const CHECKS: SpanFunctionEntry[] = [
   ...(["stress", "shearStress"] as const).map((exportName) => ({
     sheetName: `SPAN.${exportName.toUpperCase()}`,
     exportName,
-    arguments: [...member, block("section"), ...tail, block("units", true)],
+    arguments: [...member, block("section"), ...tail, block("units", true), headers],
     sizeRule: "learned" as const,
   })),
-  { sheetName: "SPAN.DEFLECTIONCHECK", exportName: "deflectionCheck", arguments: [...member, block("limit"), ...tail, block("units", true)], sizeRule: "learned" },
+  { sheetName: "SPAN.DEFLECTIONCHECK", exportName: "deflectionCheck", arguments: [...member, block("limit"), ...tail, block("units", true), headers], sizeRule: "learned" },
   { sheetName: "SPAN.UTILISATION", exportName: "utilisation", arguments: [block("demand"), block("capacity"), value("demandUnit", true), value("capacityUnit", true)], sizeRule: "learned" },
   { sheetName: "SPAN.CONVERT", exportName: "convertUnits", arguments: [block("value"), value("from"), value("to")], sizeRule: "learned" },
   { sheetName: "SPAN.STIFFNESS", exportName: "stiffness", arguments: [block("E"), block("I"), value("EUnit", true), value("IUnit", true), value("resultUnit", true)], sizeRule: "learned" },
@@ -119,7 +119,7 @@ const RESULTS: SpanFunctionEntry[] = [
   {
     sheetName: "SPAN.FREQUENCIES",
     exportName: "frequencies",
-    arguments: [block("spans"), block("EI"), block("mass"), value("modes", true), block("supports", true), block("loads", true), value("combo", true), block("units", true), value("g", true)],
+    arguments: [block("spans"), block("EI"), block("mass"), value("modes", true), block("supports", true), block("loads", true), value("combo", true), block("units", true), value("g", true), headers],
     sizeRule: "learned",
   },
   {

@@ -10,7 +10,7 @@ import { singleCell } from "./ranges";
 import type { MemberUnits } from "./units";
 
 /** What a column is measured in: a unit of the units argument, or none (labels, counts, ratios). */
-export type ColumnUnit = "length" | "force" | "moment" | "slope" | "deflection" | "none";
+export type ColumnUnit = "length" | "force" | "moment" | "slope" | "deflection" | "stress" | "none";
 
 export interface Column {
   name: string;
@@ -79,6 +79,19 @@ export const COLUMNS = {
     ...cases.map((c) => col(c === "" ? "unlabelled" : c, kind)),
     ...(combo === null ? [] : [col(combo, kind)]),
   ],
+  stress: [col("fibre", "none"), col("max stress", "stress"), col("x at max", "length"), col("min stress", "stress"), col("x at min", "length")],
+  shearStress: [col("stress", "none"), col("value", "stress"), col("x", "length")],
+  deflectionCheck: [
+    col("span", "none"),
+    col("length", "length"),
+    col("deflection", "deflection"),
+    col("x", "length"),
+    col("span/deflection", "none"),
+    col("limit", "none"),
+    col("result", "none"),
+  ],
+  // frequencies are in Hz and rad/s whatever the units argument
+  frequencies: [col("mode", "none"), col("frequency (Hz)", "none"), col("circular frequency (rad/s)", "none")],
 } as const;
 
 /** The label of a unit kind in the given units (null: none). */
@@ -94,6 +107,8 @@ function unitText(unit: ColumnUnit, units: MemberUnits | null): string | null {
       return `${units.force.text}*${units.length.text}`;
     case "deflection":
       return units.deflection.text;
+    case "stress":
+      return units.stress.text;
   }
 }
 

@@ -75,7 +75,7 @@ describe("headersAsked and predictSize", () => {
   });
   it("adds exactly one row for every function that takes headers, and none for one that does not", () => {
     const sizeOf = () => ({ rows: 1, cols: 1 });
-    for (const name of ["SPAN.REACTIONS", "SPAN.EXTREMES", "SPAN.DIAGRAM", "SPAN.MAXMOMENT", "SPAN.PEAKS", "SPAN.MOVING", "SPAN.ENVELOPE", "SPAN.SPANPEAKS", "SPAN.CASEREACTIONS"]) {
+    for (const name of ["SPAN.REACTIONS", "SPAN.EXTREMES", "SPAN.DIAGRAM", "SPAN.MAXMOMENT", "SPAN.PEAKS", "SPAN.MOVING", "SPAN.ENVELOPE", "SPAN.SPANPEAKS", "SPAN.CASEREACTIONS", "SPAN.STRESS", "SPAN.SHEARSTRESS", "SPAN.DEFLECTIONCHECK", "SPAN.FREQUENCIES"]) {
       const entry = entryFor(name)!;
       const at = entry.arguments.findIndex((a) => a.name === "headers");
       expect(at).toBe(entry.arguments.length - 1);

@@ -54,9 +54,9 @@ export const CATALOGUE: CatalogueEntry[] = [
   { id: "COMBOS", exportName: "combos", parameters: [["set", "scalar", false], ["psi0", "scalar", true], ["cases", "matrix", true]] },
   // sections, stresses, serviceability checks and units
   { id: "SECTION", exportName: "section", parameters: [["shape", "scalar", false], ["dimensions", "matrix", false], ["unit", "scalar", true], ["resultUnit", "scalar", true]] },
-  { id: "STRESS", exportName: "stress", parameters: [...member, ["section", "matrix", false], ...trailing, ["units", "matrix", true]] },
-  { id: "SHEARSTRESS", exportName: "shearStress", parameters: [...member, ["section", "matrix", false], ...trailing, ["units", "matrix", true]] },
-  { id: "DEFLECTIONCHECK", exportName: "deflectionCheck", parameters: [...member, ["limit", "matrix", false], ...trailing, ["units", "matrix", true]] },
+  { id: "STRESS", exportName: "stress", parameters: [...member, ["section", "matrix", false], ...trailing, ["units", "matrix", true], headers] },
+  { id: "SHEARSTRESS", exportName: "shearStress", parameters: [...member, ["section", "matrix", false], ...trailing, ["units", "matrix", true], headers] },
+  { id: "DEFLECTIONCHECK", exportName: "deflectionCheck", parameters: [...member, ["limit", "matrix", false], ...trailing, ["units", "matrix", true], headers] },
   { id: "UTILISATION", exportName: "utilisation", parameters: [["demand", "matrix", false], ["capacity", "matrix", false], ["demandUnit", "scalar", true], ["capacityUnit", "scalar", true]] },
   { id: "CONVERT", exportName: "convertUnits", parameters: [["value", "matrix", false], ["from", "scalar", false], ["to", "scalar", false]] },
   { id: "STIFFNESS", exportName: "stiffness", parameters: [["E", "matrix", false], ["I", "matrix", false], ["EUnit", "scalar", true], ["IUnit", "scalar", true], ["resultUnit", "scalar", true]] },
@@ -66,7 +66,7 @@ export const CATALOGUE: CatalogueEntry[] = [
   {
     id: "FREQUENCIES",
     exportName: "frequencies",
-    parameters: [["spans", "matrix", false], ["EI", "matrix", false], ["mass", "matrix", false], ["modes", "scalar", true], ["supports", "matrix", true], ["loads", "matrix", true], ["combo", "scalar", true], ["units", "matrix", true], ["g", "scalar", true]],
+    parameters: [["spans", "matrix", false], ["EI", "matrix", false], ["mass", "matrix", false], ["modes", "scalar", true], ["supports", "matrix", true], ["loads", "matrix", true], ["combo", "scalar", true], ["units", "matrix", true], ["g", "scalar", true], headers],
   },
   {
     id: "MODESHAPE",

@@ -3,7 +3,22 @@
  * its unit (from the units argument; just the names without units), the rest of the result
  * unchanged; column names from the one table in src/sheet/headers.ts.
  */
-import { caseReactions, diagram, envelope, extremes, maxMoment, moving, peaks, reactions, spanPeaks } from "../../functions/functions";
+import {
+  caseReactions,
+  deflectionCheck,
+  diagram,
+  envelope,
+  extremes,
+  frequencies,
+  maxMoment,
+  moving,
+  peaks,
+  reactions,
+  section,
+  shearStress,
+  spanPeaks,
+  stress,
+} from "../../functions/functions";
 
 const none = null as any;
 const spans = [["6 8"]];
@@ -11,6 +26,10 @@ const loads = [["udl 2 D; udl 3 L; point 10 at 9 L"]];
 const EI = [[20000]];
 const US = [["length=ft, force=kip, EI=kip*in^2, deflection=in"]];
 const combos = [["1.2D+1.6L"], ["0.9D"]];
+// An I section in inches (invented dimensions: depth, width, flange, web) for the stress checks.
+const sectionIn = section("I", [["13.7 6.73 0.585 0.35"]], "in");
+const CHECK_US = [["length=ft, force=kip, EI=kip*in^2, section=in, stress=ksi, deflection=in"]];
+const usEI = [[29000 * 510]];
 
 /** Each tabular function, called with its trailing arguments up to units, then a headers value. */
 const calls: [string, (units: any, headers: any) => any[][]][] = [
@@ -23,6 +42,11 @@ const calls: [string, (units: any, headers: any) => any[][]][] = [
   ["MOVING", (u, h) => moving(spans, [[10, 20]], [[3]], "moment at 9", none, EI, u, h)],
   ["SPANPEAKS", (u, h) => spanPeaks(spans, loads, none, EI, none, u, h)],
   ["CASEREACTIONS", (u, h) => caseReactions(spans, loads, none, EI, "1.2D+1.6L", u, none, h)],
+  // a section table in inches needs the member's units: both passes use them
+  ["STRESS", (_u, h) => stress(spans, loads, sectionIn, none, usEI, none, CHECK_US, h)],
+  ["SHEARSTRESS", (_u, h) => shearStress(spans, loads, sectionIn, none, usEI, none, CHECK_US, h)],
+  ["DEFLECTIONCHECK", (u, h) => deflectionCheck(spans, loads, [["L/360"]], none, usEI, none, u === null ? none : CHECK_US, h)],
+  ["FREQUENCIES", (u, h) => frequencies(spans, EI, [[0.3]], 3, none, none, none, u === null ? none : [["length=m, force=kN, EI=kN*m^2"]], none, h)],
 ];
 
 function errorOf(call: () => unknown): { code: string; message: string } {
@@ -77,5 +101,11 @@ describe("header names and units", () => {
   it("CASEREACTIONS names each case column by its label and the combination's by its text, in the reaction's unit", () => {
     expect(caseReactions(spans, loads, none, EI, "1.2D+1.6L", US, none, true)[0]).toEqual(["x (ft)", "D (kip)", "L (kip)", "1.2D+1.6L (kip)"]);
     expect(caseReactions([["6"]], [["udl 2"]], [["fixed free"]], EI, none, US, "moment", "yes")[0]).toEqual(["x (ft)", "unlabelled (kip*ft)"]);
+  });
+  it("the checks name stress in the stress unit and deflection in the deflection unit; frequencies are in Hz and rad/s", () => {
+    expect(stress(spans, loads, sectionIn, none, usEI, none, CHECK_US, true)[0]).toEqual(["fibre", "max stress (ksi)", "x at max (ft)", "min stress (ksi)", "x at min (ft)"]);
+    expect(shearStress(spans, loads, sectionIn, none, usEI, none, CHECK_US, true)[0]).toEqual(["stress", "value (ksi)", "x (ft)"]);
+    expect(deflectionCheck(spans, loads, [["L/360"]], none, usEI, none, CHECK_US, true)[0]).toEqual(["span", "length (ft)", "deflection (in)", "x (ft)", "span/deflection", "limit", "result"]);
+    expect(frequencies(spans, EI, [[0.3]], 2, none, none, none, none, none, true)[0]).toEqual(["mode", "frequency (Hz)", "circular frequency (rad/s)"]);
   });
 });
