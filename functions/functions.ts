@@ -41,10 +41,11 @@ import { sheetCaseReactions, sheetFrequencies, sheetModeShape, sheetSpanPeaks } 
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns One row per node: x, vertical reaction, moment reaction.
  */
-export function reactions(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetReactions(spans, loads, supports, EI, combo, units);
+export function reactions(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetReactions(spans, loads, supports, EI, combo, units, headers);
 }
 
 /**
@@ -130,10 +131,11 @@ export function deflection(spans: any[][], loads: any[][], x: any[][], supports?
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns Two rows: largest moment and its x; smallest moment and its x.
  */
-export function maxMoment(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetMaxMoment(spans, loads, supports, EI, combo, units);
+export function maxMoment(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetMaxMoment(spans, loads, supports, EI, combo, units, headers);
 }
 
 /**
@@ -147,10 +149,11 @@ export function maxMoment(spans: any[][], loads: any[][], supports?: any[][], EI
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Adds the slope and deflection rows; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns Rows shear, moment (then slope, deflection with EI): label, max, x at max, min, x at min.
  */
-export function extremes(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetExtremes(spans, loads, supports, EI, combo, units);
+export function extremes(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetExtremes(spans, loads, supports, EI, combo, units, headers);
 }
 
 /**
@@ -165,10 +168,11 @@ export function extremes(spans: any[][], loads: any[][], supports?: any[][], EI?
  * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Fills the slope and deflection columns; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns Rows x, shear, moment, slope, deflection.
  */
-export function diagram(spans: any[][], loads: any[][], points?: any, supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetDiagram(spans, loads, points, supports, EI, combo, units);
+export function diagram(spans: any[][], loads: any[][], points?: any, supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetDiagram(spans, loads, points, supports, EI, combo, units, headers);
 }
 
 // ---------------------------------------------------------------------------------------
@@ -190,10 +194,12 @@ export function diagram(spans: any[][], loads: any[][], points?: any, supports?:
  * @param [quantity] shear, moment (default) or deflection.
  * @param [pattern] Pattern live load: blank or none (loads as given), standard (classical span arrangements) or full (every subset of spans, none included, exact by superposition), then the live case label (default L), e.g. "full L". At most 12 spans.
  * @param [psi0] EN 1990 combination factor psi0 for the accompanying variable cases: one number, or pairs such as "Q 0.7, S 0.5".
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs read and results given in those units (moments in force x length, deflection in the deflection unit). Blank = consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns One row per x: x, largest value, governing combination, smallest value, governing combination.
  */
-export function envelope(spans: any[][], loads: any[][], x: any[][], combos: any[][], supports?: any[][], EI?: any[][], quantity?: any, pattern?: any, psi0?: any): any[][] {
-  return sheetEnvelope(spans, loads, x, combos, supports, EI, quantity, pattern, psi0);
+export function envelope(spans: any[][], loads: any[][], x: any[][], combos: any[][], supports?: any[][], EI?: any[][], quantity?: any, pattern?: any, psi0?: any, units?: any[][], headers?: any): any[][] {
+  return sheetEnvelope(spans, loads, x, combos, supports, EI, quantity, pattern, psi0, units, headers);
 }
 
 /**
@@ -208,10 +214,12 @@ export function envelope(spans: any[][], loads: any[][], x: any[][], combos: any
  * @param [EI] Flexural stiffness: one value or one per span. Adds the slope and deflection rows.
  * @param [pattern] Pattern live load: blank or none, standard (classical arrangements) or full (every subset of spans, none included, exact by superposition), optionally followed by the live case label (default L). At most 12 spans when patterned.
  * @param [psi0] EN 1990 combination factor psi0: one number, or pairs such as "Q 0.7, S 0.5".
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs read and results given in those units (moments in force x length, deflection in the deflection unit). Blank = consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns Rows shear, moment (slope, deflection with EI): label, max, x at max, governing combination, min, x at min, governing combination.
  */
-export function peaks(spans: any[][], loads: any[][], combos: any[][], supports?: any[][], EI?: any[][], pattern?: any, psi0?: any): any[][] {
-  return sheetPeaks(spans, loads, combos, supports, EI, pattern, psi0);
+export function peaks(spans: any[][], loads: any[][], combos: any[][], supports?: any[][], EI?: any[][], pattern?: any, psi0?: any, units?: any[][], headers?: any): any[][] {
+  return sheetPeaks(spans, loads, combos, supports, EI, pattern, psi0, units, headers);
 }
 
 /**
@@ -224,10 +232,11 @@ export function peaks(spans: any[][], loads: any[][], combos: any[][], supports?
  * @param positions Unit-load positions from the left end: a cell, row, column or block; the result has the same shape.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, a spring stiffness, or with rot K a rotational spring (pin+rot 5000). Blank = every node pin.
  * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in". The unit load is one force unit: reaction and shear ordinates have no unit, moment ordinates are lengths, deflection is per force unit.
  * @returns The ordinate at each position, in the shape of positions.
  */
-export function influence(spans: any[][], effect: any, positions: any[][], supports?: any[][], EI?: any[][]): any[][] {
-  return sheetInfluence(spans, effect, positions, supports, EI);
+export function influence(spans: any[][], effect: any, positions: any[][], supports?: any[][], EI?: any[][], units?: any[][]): any[][] {
+  return sheetInfluence(spans, effect, positions, supports, EI, units);
 }
 
 /**
@@ -241,10 +250,12 @@ export function influence(spans: any[][], effect: any, positions: any[][], suppo
  * @param effect What is measured: "absolute moment" (largest moment anywhere), "moment at 6", "shear at 4.5", "reaction 2", "moment reaction 1" or "deflection at 3" (needs EI).
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, a spring stiffness, or with rot K a rotational spring (pin+rot 5000). Blank = every node pin.
  * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
+ * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs read and results given in those units (moments in force x length, deflection in the deflection unit). Blank = consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns Rows max and min: label, value, x of the first axle, direction ("as given": the other axles follow at larger x; "reversed"), x where the effect is measured.
  */
-export function moving(spans: any[][], axles: any[][], spacings: any[][], effect: any, supports?: any[][], EI?: any[][]): any[][] {
-  return sheetMoving(spans, axles, spacings, effect, supports, EI);
+export function moving(spans: any[][], axles: any[][], spacings: any[][], effect: any, supports?: any[][], EI?: any[][], units?: any[][], headers?: any): any[][] {
+  return sheetMoving(spans, axles, spacings, effect, supports, EI, units, headers);
 }
 
 /**
@@ -294,10 +305,11 @@ export function section(shape: any, dimensions: any[][], unit?: any, resultUnit?
  * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Needed for springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs: length=ft, force=kip (both needed when any is given), EI=kip*in^2, section=in (default length), stress=ksi (default force/section^2). Blank = consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns Rows top and bottom: fibre, largest stress, x, smallest stress, x.
  */
-export function stress(spans: any[][], loads: any[][], section: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetStress(spans, loads, section, supports, EI, combo, units);
+export function stress(spans: any[][], loads: any[][], section: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetStress(spans, loads, section, supports, EI, combo, units, headers);
 }
 
 /**
@@ -312,10 +324,11 @@ export function stress(spans: any[][], loads: any[][], section: any[][], support
  * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Needed for springs; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs: length=m, force=kN (both needed when any is given), EI=kN*m^2, section=mm (default length), stress=MPa (default force/section^2). Blank = consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns Rows average and peak: label, stress, x of the largest |V|.
  */
-export function shearStress(spans: any[][], loads: any[][], section: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetShearStress(spans, loads, section, supports, EI, combo, units);
+export function shearStress(spans: any[][], loads: any[][], section: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetShearStress(spans, loads, section, supports, EI, combo, units, headers);
 }
 
 /**
@@ -330,10 +343,11 @@ export function shearStress(spans: any[][], loads: any[][], section: any[][], su
  * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Required here; SPAN.STIFFNESS builds it from E and I.
  * @param [combo] Load combination such as D+L or L alone: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs: length=ft, force=kip (both needed when any is given), EI=kip*in^2, deflection=in (default length). Blank = consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns One row per span: span number, span length, deflection, x, span/deflection ("" when 0), limit divisor, pass or fail.
  */
-export function deflectionCheck(spans: any[][], loads: any[][], limit: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetDeflectionCheck(spans, loads, limit, supports, EI, combo, units);
+export function deflectionCheck(spans: any[][], loads: any[][], limit: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetDeflectionCheck(spans, loads, limit, supports, EI, combo, units, headers);
 }
 
 /**
@@ -396,10 +410,11 @@ export function stiffness(E: any[][], I: any[][], EUnit?: any, IUnit?: any, resu
  * @param [EI] Flexural stiffness, one value or one per span. Adds the deflection columns; without it the member is taken as uniform.
  * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in", as for SPAN.REACTIONS. Blank = consistent units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns One row per span: span, length, largest M, x, smallest M, x, largest |V|, x, largest |deflection|, x.
  */
-export function spanPeaks(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][]): any[][] {
-  return sheetSpanPeaks(spans, loads, supports, EI, combo, units);
+export function spanPeaks(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], headers?: any): any[][] {
+  return sheetSpanPeaks(spans, loads, supports, EI, combo, units, headers);
 }
 
 /**
@@ -414,10 +429,11 @@ export function spanPeaks(spans: any[][], loads: any[][], supports?: any[][], EI
  * @param [combo] Load combination such as 1.2D+1.6L: adds a last column with the factored reactions. Blank = no combination column.
  * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2", as for SPAN.REACTIONS. Blank = consistent units.
  * @param [reaction] vertical (blank: vertical force, up +) or moment (moment reactions, counter-clockwise +; 0 where a node is not fixed).
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns One row per node: x, one reaction per case, and the combination's.
  */
-export function caseReactions(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], reaction?: any): any[][] {
-  return sheetCaseReactions(spans, loads, supports, EI, combo, units, reaction);
+export function caseReactions(spans: any[][], loads: any[][], supports?: any[][], EI?: any[][], combo?: any, units?: any[][], reaction?: any, headers?: any): any[][] {
+  return sheetCaseReactions(spans, loads, supports, EI, combo, units, reaction, headers);
 }
 
 /**
@@ -434,10 +450,11 @@ export function caseReactions(spans: any[][], loads: any[][], supports?: any[][]
  * @param [combo] Combination that gives the mass loads, such as D+0.1L. Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=m, force=kN, EI=kN*m^2": lengths, loads and EI in these units; mass in force x s^2 / length^2 of them. Blank = consistent units.
  * @param [g] Acceleration of gravity for loads/g, in the length unit per s^2 (9.80665 for m, 32.174 for ft). Blank = standard gravity in the units' length unit; needed with loads and no units.
+ * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns One row per mode: mode, frequency (Hz), circular frequency (rad/s). Floor vibration acceptance is the governing guide's and the engineer's call.
  */
-export function frequencies(spans: any[][], EI: any[][], mass: any[][], modes?: any, supports?: any[][], loads?: any[][], combo?: any, units?: any[][], g?: any): any[][] {
-  return sheetFrequencies(spans, EI, mass, modes, supports, loads, combo, units, g);
+export function frequencies(spans: any[][], EI: any[][], mass: any[][], modes?: any, supports?: any[][], loads?: any[][], combo?: any, units?: any[][], g?: any, headers?: any): any[][] {
+  return sheetFrequencies(spans, EI, mass, modes, supports, loads, combo, units, g, headers);
 }
 
 /**

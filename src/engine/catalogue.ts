@@ -60,6 +60,8 @@ const tail = [
   { name: "combo", kind: "value", optional: true },
 ] as const;
 const withUnits = [...tail, { name: "units", kind: "block", optional: true }] as const;
+/** The optional last argument of the tabular functions that adds a header row (src/sheet/headers.ts). */
+const headers = { name: "headers", kind: "value", optional: true } as const;
 const atX = [...member, { name: "x", kind: "block", optional: false }, ...withUnits] as const;
 
 const block = (name: string, optional = false) => ({ name, kind: "block" as const, optional });
@@ -70,25 +72,25 @@ const STUDIES: SpanFunctionEntry[] = [
   {
     sheetName: "SPAN.ENVELOPE",
     exportName: "envelope",
-    arguments: [...member, block("x"), block("combos"), block("supports", true), block("EI", true), value("quantity", true), value("pattern", true), value("psi0", true)],
+    arguments: [...member, block("x"), block("combos"), block("supports", true), block("EI", true), value("quantity", true), value("pattern", true), value("psi0", true), block("units", true), value("headers", true)],
     sizeRule: "rowPerX",
   },
   {
     sheetName: "SPAN.PEAKS",
     exportName: "peaks",
-    arguments: [...member, block("combos"), block("supports", true), block("EI", true), value("pattern", true), value("psi0", true)],
+    arguments: [...member, block("combos"), block("supports", true), block("EI", true), value("pattern", true), value("psi0", true), block("units", true), value("headers", true)],
     sizeRule: "peaks",
   },
   {
     sheetName: "SPAN.INFLUENCE",
     exportName: "influence",
-    arguments: [block("spans"), value("effect"), block("positions"), block("supports", true), block("EI", true)],
+    arguments: [block("spans"), value("effect"), block("positions"), block("supports", true), block("EI", true), block("units", true)],
     sizeRule: "shapeOfPositions",
   },
   {
     sheetName: "SPAN.MOVING",
     exportName: "moving",
-    arguments: [block("spans"), block("axles"), block("spacings"), value("effect"), block("supports", true), block("EI", true)],
+    arguments: [block("spans"), block("axles"), block("spacings"), value("effect"), block("supports", true), block("EI", true), block("units", true), value("headers", true)],
     sizeRule: "twoByFive",
   },
   { sheetName: "SPAN.COMBOS", exportName: "combos", arguments: [value("set"), value("psi0", true), block("cases", true)], sizeRule: "learned" },
@@ -101,10 +103,10 @@ const CHECKS: SpanFunctionEntry[] = [
   ...(["stress", "shearStress"] as const).map((exportName) => ({
     sheetName: `SPAN.${exportName.toUpperCase()}`,
     exportName,
-    arguments: [...member, block("section"), ...tail, block("units", true)],
+    arguments: [...member, block("section"), ...tail, block("units", true), headers],
     sizeRule: "learned" as const,
   })),
-  { sheetName: "SPAN.DEFLECTIONCHECK", exportName: "deflectionCheck", arguments: [...member, block("limit"), ...tail, block("units", true)], sizeRule: "learned" },
+  { sheetName: "SPAN.DEFLECTIONCHECK", exportName: "deflectionCheck", arguments: [...member, block("limit"), ...tail, block("units", true), headers], sizeRule: "learned" },
   { sheetName: "SPAN.UTILISATION", exportName: "utilisation", arguments: [block("demand"), block("capacity"), value("demandUnit", true), value("capacityUnit", true)], sizeRule: "learned" },
   { sheetName: "SPAN.CONVERT", exportName: "convertUnits", arguments: [block("value"), value("from"), value("to")], sizeRule: "learned" },
   { sheetName: "SPAN.STIFFNESS", exportName: "stiffness", arguments: [block("E"), block("I"), value("EUnit", true), value("IUnit", true), value("resultUnit", true)], sizeRule: "learned" },
@@ -112,12 +114,12 @@ const CHECKS: SpanFunctionEntry[] = [
 
 /** Results per span and per load case, natural frequencies and mode shapes. */
 const RESULTS: SpanFunctionEntry[] = [
-  { sheetName: "SPAN.SPANPEAKS", exportName: "spanPeaks", arguments: [...member, ...withUnits], sizeRule: "learned" },
-  { sheetName: "SPAN.CASEREACTIONS", exportName: "caseReactions", arguments: [...member, ...withUnits, value("reaction", true)], sizeRule: "learned" },
+  { sheetName: "SPAN.SPANPEAKS", exportName: "spanPeaks", arguments: [...member, ...withUnits, headers], sizeRule: "learned" },
+  { sheetName: "SPAN.CASEREACTIONS", exportName: "caseReactions", arguments: [...member, ...withUnits, value("reaction", true), headers], sizeRule: "learned" },
   {
     sheetName: "SPAN.FREQUENCIES",
     exportName: "frequencies",
-    arguments: [block("spans"), block("EI"), block("mass"), value("modes", true), block("supports", true), block("loads", true), value("combo", true), block("units", true), value("g", true)],
+    arguments: [block("spans"), block("EI"), block("mass"), value("modes", true), block("supports", true), block("loads", true), value("combo", true), block("units", true), value("g", true), headers],
     sizeRule: "learned",
   },
   {
@@ -129,17 +131,17 @@ const RESULTS: SpanFunctionEntry[] = [
 ];
 
 export const SPAN_FUNCTIONS: readonly SpanFunctionEntry[] = [
-  { sheetName: "SPAN.REACTIONS", exportName: "reactions", arguments: [...member, ...withUnits], sizeRule: "perNode" },
+  { sheetName: "SPAN.REACTIONS", exportName: "reactions", arguments: [...member, ...withUnits, headers], sizeRule: "perNode" },
   { sheetName: "SPAN.SHEAR", exportName: "shear", arguments: atX, sizeRule: "shapeOfX" },
   { sheetName: "SPAN.MOMENT", exportName: "moment", arguments: atX, sizeRule: "shapeOfX" },
   { sheetName: "SPAN.SLOPE", exportName: "slope", arguments: atX, sizeRule: "shapeOfX" },
   { sheetName: "SPAN.DEFLECTION", exportName: "deflection", arguments: atX, sizeRule: "shapeOfX" },
-  { sheetName: "SPAN.MAXMOMENT", exportName: "maxMoment", arguments: [...member, ...withUnits], sizeRule: "twoByTwo" },
-  { sheetName: "SPAN.EXTREMES", exportName: "extremes", arguments: [...member, ...withUnits], sizeRule: "extremes" },
+  { sheetName: "SPAN.MAXMOMENT", exportName: "maxMoment", arguments: [...member, ...withUnits, headers], sizeRule: "twoByTwo" },
+  { sheetName: "SPAN.EXTREMES", exportName: "extremes", arguments: [...member, ...withUnits, headers], sizeRule: "extremes" },
   {
     sheetName: "SPAN.DIAGRAM",
     exportName: "diagram",
-    arguments: [...member, { name: "points", kind: "value", optional: true }, ...withUnits],
+    arguments: [...member, { name: "points", kind: "value", optional: true }, ...withUnits, headers],
     sizeRule: "diagram",
   },
   ...STUDIES,

@@ -16,6 +16,8 @@ export interface BlockSize {
 export interface ArgumentNode {
   type: string;
   value?: unknown;
+  /** The function's name, for a call such as TRUE() or FALSE(). */
+  procedureName?: unknown;
 }
 
 /** Size of an argument's value as the engine predicts it (a range's shape, 1 x 1 for a cell). */
@@ -52,8 +54,28 @@ export function countEntries(text: string): number {
   return count;
 }
 
+/**
+ * Whether a headers argument asks for a header row, as far as the text tells: blank, 0, FALSE
+ * and "no" do not; a literal yes does; a reference or formula is taken to (the workbook learns
+ * the true size from the first evaluation if not). Words as in src/sheet/headers.ts.
+ */
+export function headersAsked(node: ArgumentNode | undefined): boolean {
+  if (!isGiven(node)) return false;
+  if (node.type === "NUMBER") return node.value !== 0;
+  if (node.type === "STRING") return typeof node.value === "string" && !["", "no", "false", "n", "0"].includes(node.value.trim().toLowerCase());
+  if (node.type === "FUNCTION_CALL" && typeof node.procedureName === "string") return node.procedureName.toUpperCase() !== "FALSE";
+  return true;
+}
+
 export function predictSize(entry: SpanFunctionEntry, args: readonly ArgumentNode[], sizeOf: ArgumentSize, textOf?: ReferencedText): BlockSize {
   const argument = (name: string): ArgumentNode | undefined => args[entry.arguments.findIndex((arg) => arg.name === name)];
+  const size = bodySize(entry, argument, sizeOf, textOf);
+  const hasHeaders = entry.arguments.some((arg) => arg.name === "headers");
+  return hasHeaders && headersAsked(argument("headers")) ? { rows: size.rows + 1, cols: size.cols } : size;
+}
+
+/** The size of the result without its header row. */
+function bodySize(entry: SpanFunctionEntry, argument: (name: string) => ArgumentNode | undefined, sizeOf: ArgumentSize, textOf?: ReferencedText): BlockSize {
   const rule: SizeRule = entry.sizeRule;
   switch (rule) {
     case "perNode": {

@@ -3,7 +3,7 @@
  * ENVELOPE or PEAKS cell, the influence line of an INFLUENCE cell, the extremes of a MOVING
  * cell with the train where it stands. Every number comes from the same sheet-layer function
  * the cell itself calls (sheetEnvelope, sheetPeaks, sheetInfluence, sheetMoving), with the
- * cell's own arguments; the pane only chooses the positions to evaluate at. Pure.
+ * cell's own arguments (its units argument included); the pane only chooses the positions to evaluate at. Pure.
  */
 import type { Load, Member, Quantity } from "../core";
 import { describeError, readEffect, readMember, readTrain, sheetEnvelope, sheetInfluence, sheetMoving, sheetPeaks } from "../sheet";
@@ -91,7 +91,7 @@ function studyMember(resolved: ResolvedMember, withLoads: boolean): Member {
 function envelopeRows(resolved: ResolvedMember, xs: number[], quantity: EnvelopeQuantity): (number | string)[][] {
   const a = resolved.args;
   const s = resolved.study;
-  return sheetEnvelope(a.spans, a.loads, column(xs), s.combos ?? null, a.supports, a.EI, quantity, s.pattern ?? null, s.psi0 ?? null);
+  return sheetEnvelope(a.spans, a.loads, column(xs), s.combos ?? null, a.supports, a.EI, quantity, s.pattern ?? null, s.psi0 ?? null, a.units ?? null);
 }
 
 /** The bounds at one x with what governs each, for the readout: [quantity, max, by, min, by]. */
@@ -106,14 +106,14 @@ export function envelopeAt(resolved: ResolvedMember, member: Member, x: number):
 /** The influence ordinate at x, as SPAN.INFLUENCE gives it. */
 export function influenceAt(resolved: ResolvedMember, x: number): number {
   const a = resolved.args;
-  return sheetInfluence(a.spans, resolved.study.effect ?? null, [[x]], a.supports, a.EI)[0][0] as number;
+  return sheetInfluence(a.spans, resolved.study.effect ?? null, [[x]], a.supports, a.EI, a.units ?? null)[0][0] as number;
 }
 
 function influenceLineOf(resolved: ResolvedMember, member: Member, effect: unknown): { xs: number[]; values: number[] } {
   const a = resolved.args;
   const parsed = readEffect(effect, false);
   const xs = stationsFor(member, "x" in parsed ? [parsed.x] : []);
-  const values = sheetInfluence(a.spans, effect, column(xs), a.supports, a.EI).map((row) => row[0] as number);
+  const values = sheetInfluence(a.spans, effect, column(xs), a.supports, a.EI, a.units ?? null).map((row) => row[0] as number);
   return { xs, values };
 }
 
@@ -138,9 +138,9 @@ function checkCell(resolved: ResolvedMember): void {
   const a = resolved.args;
   const s = resolved.study;
   if (resolved.kind === "envelope" && s.x !== undefined) {
-    sheetEnvelope(a.spans, a.loads, s.x, s.combos ?? null, a.supports, a.EI, s.quantity ?? null, s.pattern ?? null, s.psi0 ?? null);
+    sheetEnvelope(a.spans, a.loads, s.x, s.combos ?? null, a.supports, a.EI, s.quantity ?? null, s.pattern ?? null, s.psi0 ?? null, a.units ?? null);
   }
-  if (resolved.kind === "influence" && s.positions !== undefined) sheetInfluence(a.spans, s.effect ?? null, s.positions, a.supports, a.EI);
+  if (resolved.kind === "influence" && s.positions !== undefined) sheetInfluence(a.spans, s.effect ?? null, s.positions, a.supports, a.EI, a.units ?? null);
 }
 
 /** Computes what a study cell shows; bad input gives the sheet layer's code and message. */
@@ -161,7 +161,7 @@ export function computeStudy(resolved: ResolvedMember): Study | { error: string 
         });
         const peaks =
           resolved.kind === "peaks"
-            ? sheetPeaks(a.spans, a.loads, s.combos ?? null, a.supports, a.EI, s.pattern ?? null, s.psi0 ?? null).map((r) => ({
+            ? sheetPeaks(a.spans, a.loads, s.combos ?? null, a.supports, a.EI, s.pattern ?? null, s.psi0 ?? null, a.units ?? null).map((r) => ({
                 quantity: r[0] as Quantity,
                 max: r[1] as number,
                 xMax: r[2] as number,
@@ -180,7 +180,7 @@ export function computeStudy(resolved: ResolvedMember): Study | { error: string 
       }
       case "moving": {
         const member = studyMember(resolved, false);
-        const rows = sheetMoving(a.spans, s.axles ?? null, s.spacings ?? null, s.effect ?? null, a.supports, a.EI);
+        const rows = sheetMoving(a.spans, s.axles ?? null, s.spacings ?? null, s.effect ?? null, a.supports, a.EI, a.units ?? null);
         const train = readTrain(s.axles ?? null, s.spacings ?? null);
         const length = memberLength(member);
         const placements = rows.map((r) => ({

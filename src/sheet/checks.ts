@@ -27,6 +27,7 @@ import {
   type Unit,
 } from "../core";
 import { errorCodeOf, isBlank, isEmpty, numberFromText, readNumber, show } from "./cells";
+import { COLUMNS, readHeaders, withHeaders } from "./headers";
 import { guarded } from "./hostError";
 import type { MemberArgs } from "./member";
 import { listEntries, rowsOf } from "./ranges";
@@ -96,8 +97,18 @@ const forceSI = (value: number, units: MemberUnits | null) => (units === null ? 
 const deflectionShown = (value: number, units: MemberUnits | null) => (units === null ? value : (value * units.length.factor) / units.deflection.factor);
 
 /** SPAN.STRESS: rows [fibre, largest stress, x, smallest stress, x]; tension +. */
-export function sheetStress(spans: unknown, loads: unknown, section: unknown, supports: unknown, EI: unknown, combo: unknown, units: unknown): (number | string)[][] {
+export function sheetStress(
+  spans: unknown,
+  loads: unknown,
+  section: unknown,
+  supports: unknown,
+  EI: unknown,
+  combo: unknown,
+  units: unknown,
+  headers?: unknown,
+): (number | string)[][] {
   return guarded(() => {
+    const header = readHeaders(headers);
     const { solution, units: u } = solvedWithUnits(spans, loads, supports, EI, combo, units);
     const values = readSection(section, [["Sx top", "length^3"], ["Sx bottom", "length^3"]], [1, 2], "S (one value) or S top and S bottom");
     const top = sectionSI(values[0], u, 3, "S top");
@@ -105,19 +116,30 @@ export function sheetStress(spans: unknown, loads: unknown, section: unknown, su
     const x = (v: number) => v;
     const m = extremes(solution, "moment");
     const moment = { ...m, max: momentSI(m.max, u), min: momentSI(m.min, u) };
-    return fibreStresses(moment, top, bottom).map((f) => [
+    const rows = fibreStresses(moment, top, bottom).map((f) => [
       f.fibre,
       finite(out(f.max, u && u.stress), `the largest ${f.fibre} stress`),
       x(f.xMax),
       finite(out(f.min, u && u.stress), `the smallest ${f.fibre} stress`),
       x(f.xMin),
     ]);
+    return withHeaders(rows, header, COLUMNS.stress, u);
   });
 }
 
 /** SPAN.SHEARSTRESS: rows [average, V/A, x] and [peak, V Q/(I t), x] at the largest |V|. */
-export function sheetShearStress(spans: unknown, loads: unknown, section: unknown, supports: unknown, EI: unknown, combo: unknown, units: unknown): (number | string)[][] {
+export function sheetShearStress(
+  spans: unknown,
+  loads: unknown,
+  section: unknown,
+  supports: unknown,
+  EI: unknown,
+  combo: unknown,
+  units: unknown,
+  headers?: unknown,
+): (number | string)[][] {
   return guarded(() => {
+    const header = readHeaders(headers);
     const { solution, units: u } = solvedWithUnits(spans, loads, supports, EI, combo, units);
     const values = readSection(section, [["area", "length^2"], ["Ix", "length^4"], ["Q/t max", "length^2"]], [1, 4], "A, or A I Q t");
     const peakV = largestMagnitude(extremes(solution, "shear"));
@@ -125,13 +147,13 @@ export function sheetShearStress(spans: unknown, loads: unknown, section: unknow
     const x = V.x;
     const area = sectionSI(values[0], u, 2, "A");
     const average = finite(out(averageShearStress(V.value, area), u && u.stress), "the average shear stress");
-    if (values.length === 1) return [["average", average, x], ["peak", "", ""]];
+    if (values.length === 1) return withHeaders([["average", average, x], ["peak", "", ""]], header, COLUMNS.shearStress, u);
     const I = sectionSI(values[1], u, 4, "I");
     const peak =
       values.length === 3
         ? peakShearStress(V.value, sectionSI(values[2], u, 2, "Q/t max"), I, 1)
         : peakShearStress(V.value, sectionSI(values[2], u, 3, "Q"), I, sectionSI(values[3], u, 1, "t"));
-    return [["average", average, x], ["peak", finite(out(peak, u && u.stress), "the peak shear stress"), x]];
+    return withHeaders([["average", average, x], ["peak", finite(out(peak, u && u.stress), "the peak shear stress"), x]], header, COLUMNS.shearStress, u);
   });
 }
 
@@ -150,12 +172,22 @@ function readLimits(arg: unknown): number[] {
 }
 
 /** SPAN.DEFLECTIONCHECK: one row per span [span, length, deflection, x, span/deflection, limit, pass|fail]. */
-export function sheetDeflectionCheck(spans: unknown, loads: unknown, limit: unknown, supports: unknown, EI: unknown, combo: unknown, units: unknown): (number | string)[][] {
+export function sheetDeflectionCheck(
+  spans: unknown,
+  loads: unknown,
+  limit: unknown,
+  supports: unknown,
+  EI: unknown,
+  combo: unknown,
+  units: unknown,
+  headers?: unknown,
+): (number | string)[][] {
   return guarded(() => {
     const limits = readLimits(limit);
+    const header = readHeaders(headers);
     const { solution, units: u } = solvedWithUnits(spans, loads, supports, EI, combo, units);
     if (!solution.hasStiffness) throw unavailable("deflection needs EI: give EI for the member or each span");
-    return spanDeflections(solution, limits).map((r) => [
+    const rows = spanDeflections(solution, limits).map((r) => [
       r.span,
       r.length,
       finite(deflectionShown(r.deflection, u), `span ${r.span}'s deflection`),
@@ -164,6 +196,7 @@ export function sheetDeflectionCheck(spans: unknown, loads: unknown, limit: unkn
       r.limit,
       r.pass ? "pass" : "fail",
     ]);
+    return withHeaders(rows, header, COLUMNS.deflectionCheck, u);
   });
 }
 

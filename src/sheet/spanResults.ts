@@ -4,6 +4,7 @@
  */
 import { caseReactions, invalid, spanPeaks } from "../core";
 import { errorCodeOf, isBlank, show } from "./cells";
+import { COLUMNS, readHeaders, withHeaders } from "./headers";
 import { guarded } from "./hostError";
 import { readComboText, readMember, type MemberArgs } from "./member";
 import { singleCell } from "./ranges";
@@ -16,13 +17,22 @@ function argsOf(spans: unknown, loads: unknown, supports: unknown, EI: unknown, 
 }
 
 /** SPAN.SPANPEAKS: one row per span [span, length, M max, x, M min, x, V, x, deflection, x]; deflection "" without EI. */
-export function sheetSpanPeaks(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown): (number | string)[][] {
+export function sheetSpanPeaks(
+  spans: unknown,
+  loads: unknown,
+  supports: unknown,
+  EI: unknown,
+  combo: unknown,
+  units?: unknown,
+  headers?: unknown,
+): (number | string)[][] {
   return guarded(() => {
     const args = argsOf(spans, loads, supports, EI, combo, units);
     const given = readMemberUnits(args.units);
+    const header = readHeaders(headers);
     const solution = solvedMember(args, given);
     const scale = outputScale(given);
-    return spanPeaks(solution).map((p) => {
+    const rows = spanPeaks(solution).map((p) => {
       const what = (q: string) => `span ${p.span}'s ${q}`;
       return [
         p.span,
@@ -37,6 +47,7 @@ export function sheetSpanPeaks(spans: unknown, loads: unknown, supports: unknown
         orBlank(p.xDeflection / scale.length),
       ];
     });
+    return withHeaders(rows, header, COLUMNS.spanPeaks, given);
   });
 }
 
@@ -65,23 +76,27 @@ export function sheetCaseReactions(
   combo: unknown,
   units: unknown,
   reaction: unknown,
-): number[][] {
+  headers?: unknown,
+): (number | string)[][] {
   return guarded(() => {
     const kind = readReactionKind(reaction);
+    const header = readHeaders(headers);
     const args = argsOf(spans, loads, supports, EI, combo, units);
     const given = readMemberUnits(args.units);
     const scale = outputScale(given);
     const member = readMember({ ...args, combo: null });
-    const { reactions } = caseReactions(given === null ? member : memberInOwnUnits(member, given));
+    const { cases, reactions } = caseReactions(given === null ? member : memberInOwnUnits(member, given));
     const withCombo = readComboText(args.combo) !== "";
     const combined = withCombo ? solvedMember(args, given).reactions : null;
     const unit = kind === "force" ? scale.force : scale.moment;
     const what = kind === "force" ? "a vertical reaction" : "a moment reaction";
-    return reactions[0].map((node, i) => {
+    const rows = reactions[0].map((node, i) => {
       const row = [node.x / scale.length];
       for (const byCase of reactions) row.push(finite(byCase[i][kind] / unit, what));
       if (combined !== null) row.push(finite(combined[i][kind] / unit, what));
       return row;
     });
+    const columns = COLUMNS.caseReactions(cases, withCombo ? readComboText(args.combo) : null, kind === "force" ? "force" : "moment");
+    return withHeaders(rows, header, columns, given);
   });
 }

@@ -29,9 +29,25 @@ import type { LoadRow } from "./loadRow";
 import { readLoads, readMember } from "./member";
 import { isAllBlank, listEntries, rowsOf, singleCell } from "./ranges";
 import { finite, mapPositions } from "./shape";
+import { COLUMNS, readHeaders, withHeaders } from "./headers";
+import { memberInOwnUnits, readMemberUnits, type MemberUnits } from "./units";
+import { outputScale } from "./worksheet";
 
-function memberOf(spans: unknown, loads: unknown, supports: unknown, EI: unknown): Member {
-  return readMember({ spans, loads, supports: supports ?? null, EI: EI ?? null, combo: null });
+/**
+ * The member of a study and the factor that brings a deflection into the sheet's units. As for
+ * the analysis functions, with units the member is studied in its own length and force units
+ * (only EI converted), so spans, x, positions and effects are never converted; deflection
+ * alone is shown in the deflection unit of the units argument.
+ */
+function memberOf(spans: unknown, loads: unknown, supports: unknown, EI: unknown, units: unknown): { member: Member; deflection: number; given: MemberUnits | null } {
+  const given = readMemberUnits(units ?? null);
+  const member = readMember({ spans, loads, supports: supports ?? null, EI: EI ?? null, combo: null });
+  return { member: given === null ? member : memberInOwnUnits(member, given), deflection: outputScale(given).deflection, given };
+}
+
+/** A study value in the sheet's units: only a deflection (or deflection per unit force) is scaled. */
+function shownAs(kind: string, value: number, deflection: number): number {
+  return kind === "deflection" ? value / deflection : value;
 }
 
 /** Cells of a range argument (a single value is one cell), counted before any is read. */
@@ -108,9 +124,12 @@ export function sheetEnvelope(
   quantity: unknown,
   pattern: unknown,
   psi0: unknown,
+  units?: unknown,
+  headers?: unknown,
 ): (number | string)[][] {
   return guarded(() => {
-    const member = memberOf(spans, loads, supports, EI);
+    const { member, deflection, given: unitsGiven } = memberOf(spans, loads, supports, EI, units);
+    const header = readHeaders(headers);
     const q = readQuantity(quantity ?? null);
     if (q === "deflection" && member.stiffness === null) throw invalid("quantity deflection needs EI: give EI for the member or each span");
     checkCombinationCells(combos);
@@ -120,13 +139,20 @@ export function sheetEnvelope(
     const given = values.filter((v): v is number => v !== null);
     const stations = envelope(member, combinations, given, options);
     let next = 0;
-    return values.map((v) => {
+    const rows = values.map((v) => {
       if (v === null) return ["", "", "", "", ""];
       const s = stations[next++];
       const max = s.max[q]!;
       const min = s.min[q]!;
-      return [v, finite(max.value, `the largest ${q}`), governedBy(max), finite(min.value, `the smallest ${q}`), governedBy(min)];
+      return [
+        v,
+        finite(shownAs(q, max.value, deflection), `the largest ${q}`),
+        governedBy(max),
+        finite(shownAs(q, min.value, deflection), `the smallest ${q}`),
+        governedBy(min),
+      ];
     });
+    return withHeaders(rows, header, COLUMNS.envelope(q), unitsGiven);
   });
 }
 
@@ -139,32 +165,41 @@ export function sheetPeaks(
   EI: unknown,
   pattern: unknown,
   psi0: unknown,
+  units?: unknown,
+  headers?: unknown,
 ): (number | string)[][] {
   return guarded(() => {
-    const member = memberOf(spans, loads, supports, EI);
+    const { member, deflection, given } = memberOf(spans, loads, supports, EI, units);
+    const header = readHeaders(headers);
     checkCombinationCells(combos);
     const combinations = readCombinations(combos, psi0 ?? null, caseLabels(loads));
     const peaks = governingPeaks(member, combinations, readPattern(pattern ?? null));
-    return peaks.map((p) => [
+    const rows = peaks.map((p) => [
       p.quantity,
-      finite(p.max.value, `the largest ${p.quantity}`),
+      finite(shownAs(p.quantity, p.max.value, deflection), `the largest ${p.quantity}`),
       p.max.x,
       governedBy(p.max),
-      finite(p.min.value, `the smallest ${p.quantity}`),
+      finite(shownAs(p.quantity, p.min.value, deflection), `the smallest ${p.quantity}`),
       p.min.x,
       governedBy(p.min),
     ]);
+    return withHeaders(rows, header, COLUMNS.peaks, given);
   });
 }
 
-/** SPAN.INFLUENCE: the effect of a unit load at each position, in the shape of positions. */
-export function sheetInfluence(spans: unknown, effect: unknown, positions: unknown, supports: unknown, EI: unknown): (number | string)[][] {
+/**
+ * SPAN.INFLUENCE: the effect of a unit load at each position, in the shape of positions. With
+ * units the load is one force unit: a reaction or shear ordinate is dimensionless, a moment or
+ * moment-reaction ordinate a length (the length unit), a deflection ordinate the deflection unit
+ * per force unit.
+ */
+export function sheetInfluence(spans: unknown, effect: unknown, positions: unknown, supports: unknown, EI: unknown, units?: unknown): (number | string)[][] {
   return guarded(() => {
-    const member = memberOf(spans, null, supports, EI);
+    const { member, deflection } = memberOf(spans, null, supports, EI, units);
     const e = readEffect(effect, false);
     if (e.kind === "absolute-moment") throw invalid("effect: absolute moment applies to moving loads only");
     checkInfluence(member, cellCount(positions));
-    return mapPositions(positions, (p) => influenceLine(member, e, [p])[0], "positions");
+    return mapPositions(positions, (p) => shownAs(e.kind, influenceLine(member, e, [p])[0], deflection), "positions");
   });
 }
 
@@ -191,14 +226,20 @@ export function sheetMoving(
   effect: unknown,
   supports: unknown,
   EI: unknown,
+  units?: unknown,
+  headers?: unknown,
 ): (number | string)[][] {
   return guarded(() => {
-    const member = memberOf(spans, null, supports, EI);
-    const result = movingLoad(member, readTrain(axles, spacings), readEffect(effect, true));
-    return (["max", "min"] as const).map((label) => {
+    const { member, deflection, given } = memberOf(spans, null, supports, EI, units);
+    const header = readHeaders(headers);
+    const train = readTrain(axles, spacings);
+    const e = readEffect(effect, true);
+    const result = movingLoad(member, train, e);
+    const rows = (["max", "min"] as const).map((label) => {
       const p = result[label];
-      return [label, finite(p.value, `the ${label} value`), p.leadX, p.direction, p.x];
+      return [label, finite(shownAs(e.kind, p.value, deflection), `the ${label} value`), p.leadX, p.direction, p.x];
     });
+    return withHeaders(rows, header, COLUMNS.moving(e.kind), given);
   });
 }
 

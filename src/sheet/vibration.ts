@@ -18,6 +18,7 @@ import {
   type VibrationModel,
 } from "../core";
 import { errorCodeOf, isBlank, readNumber, show } from "./cells";
+import { COLUMNS, readHeaders, withHeaders } from "./headers";
 import { guarded } from "./hostError";
 import { readMember } from "./member";
 import { isAllBlank, listEntries, rowsOf, singleCell } from "./ranges";
@@ -116,11 +117,14 @@ export function sheetFrequencies(
   combo: unknown,
   units: unknown,
   g: unknown,
-): number[][] {
+  headers?: unknown,
+): (number | string)[][] {
   return guarded(() => {
     const count = readModeCount(modes, "modes", 1);
+    const header = readHeaders(headers);
     const model = readVibrationModel({ spans, EI, mass, supports, loads, combo, units, g });
-    return naturalFrequencies(model, count).map((omega, i) => [i + 1, finite(omega / (2 * Math.PI), "a frequency"), finite(omega, "a circular frequency")]);
+    const rows = naturalFrequencies(model, count).map((omega, i) => [i + 1, finite(omega / (2 * Math.PI), "a frequency"), finite(omega, "a circular frequency")]);
+    return withHeaders(rows, header, COLUMNS.frequencies, null);
   });
 }
 

@@ -6,6 +6,7 @@
 import { diagram, extremes, invalid, solve, unavailable, valueAt, type Quantity, type Solution } from "../core";
 import { errorCodeOf, isEmpty, readNumber } from "./cells";
 import { solvedMembers } from "./cache";
+import { COLUMNS, readHeaders, withHeaders } from "./headers";
 import { guarded } from "./hostError";
 import { readMember, type MemberArgs } from "./member";
 import { memberInOwnUnits, readMemberUnits, type MemberUnits } from "./units";
@@ -53,9 +54,9 @@ export function outputScale(units: MemberUnits | null): OutputScale {
 }
 
 /** The solved member and the factors that bring its results into the sheet's units; the units argument is read once. */
-function solvedWithScale(args: MemberArgs): { solution: Solution; scale: OutputScale } {
+function solvedWithScale(args: MemberArgs): { solution: Solution; scale: OutputScale; units: MemberUnits | null } {
   const units = readMemberUnits(args.units ?? null);
-  return { solution: solvedMember(args, units), scale: outputScale(units) };
+  return { solution: solvedMember(args, units), scale: outputScale(units), units };
 }
 
 /** Divides a quantity's value in the solution's units into the sheet's units. */
@@ -99,15 +100,18 @@ function checkPoints(points: number): number {
   return points;
 }
 
-/** SPAN.REACTIONS: one row per node [x, vertical reaction (up +), moment reaction (ccw +)]. */
-export function sheetReactions(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown): number[][] {
+/** SPAN.REACTIONS: one row per node [x, vertical reaction (up +), moment reaction (ccw +)], under an optional header row. */
+export function sheetReactions(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown): number[][];
+export function sheetReactions(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units: unknown, headers: unknown): (number | string)[][];
+export function sheetReactions(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown, headers?: unknown): (number | string)[][] {
   return guarded(() => {
-    const { solution, scale } = solvedWithScale(memberArgs(spans, loads, supports, EI, combo, units));
-    return solution.reactions.map((r) => [
+    const header = readHeaders(headers);
+    const { solution, scale, units: given } = solvedWithScale(memberArgs(spans, loads, supports, EI, combo, units));
+    return withHeaders(solution.reactions.map((r) => [
       r.x / scale.length,
       finite(r.force / scale.force, "a vertical reaction"),
       finite(r.moment / scale.moment, "a moment reaction"),
-    ]);
+    ]), header, COLUMNS.reactions, given);
   });
 }
 
@@ -130,26 +134,38 @@ export function sheetValuesAt(
 }
 
 /** SPAN.MAXMOMENT: [[largest M, x], [smallest M, x]]. */
-export function sheetMaxMoment(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown): number[][] {
+export function sheetMaxMoment(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown, headers?: unknown): (number | string)[][] {
   return guarded(() => {
-    const { solution, scale } = solvedWithScale(memberArgs(spans, loads, supports, EI, combo, units));
+    const header = readHeaders(headers);
+    const { solution, scale, units: given } = solvedWithScale(memberArgs(spans, loads, supports, EI, combo, units));
     const e = extremes(solution, "moment");
-    return [
+    const rows = [
       [finite(e.max / scale.moment, "the largest moment"), e.xMax / scale.length],
       [finite(e.min / scale.moment, "the smallest moment"), e.xMin / scale.length],
     ];
+    return withHeaders(rows, header, COLUMNS.maxMoment, given);
   });
 }
 
 /** SPAN.EXTREMES: rows [label, max, x at max, min, x at min]; slope and deflection only with EI. */
-export function sheetExtremes(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown): (number | string)[][] {
+export function sheetExtremes(
+  spans: unknown,
+  loads: unknown,
+  supports: unknown,
+  EI: unknown,
+  combo: unknown,
+  units?: unknown,
+  headers?: unknown,
+): (number | string)[][] {
   return guarded(() => {
-    const { solution, scale } = solvedWithScale(memberArgs(spans, loads, supports, EI, combo, units));
+    const header = readHeaders(headers);
+    const { solution, scale, units: given } = solvedWithScale(memberArgs(spans, loads, supports, EI, combo, units));
     const quantities: Quantity[] = solution.hasStiffness ? ["shear", "moment", "slope", "deflection"] : ["shear", "moment"];
-    return quantities.map((q) => {
+    const rows = quantities.map((q) => {
       const e = extremes(solution, q);
       return [q, finite(shown(q, e.max, scale), `the largest ${q}`), e.xMax / scale.length, finite(shown(q, e.min, scale), `the smallest ${q}`), e.xMin / scale.length];
     });
+    return withHeaders(rows, header, COLUMNS.extremes, given);
   });
 }
 
@@ -162,16 +178,19 @@ export function sheetDiagram(
   EI: unknown,
   combo: unknown,
   units?: unknown,
+  headers?: unknown,
 ): (number | string)[][] {
   return guarded(() => {
     const count = readPoints(points);
-    const { solution, scale } = solvedWithScale(memberArgs(spans, loads, supports, EI, combo, units));
-    return diagram(solution, count).map((row) => [
+    const header = readHeaders(headers);
+    const { solution, scale, units: given } = solvedWithScale(memberArgs(spans, loads, supports, EI, combo, units));
+    const rows = diagram(solution, count).map((row) => [
       row.x / scale.length,
       finite(row.shear / scale.force, "a shear value"),
       finite(row.moment / scale.moment, "a moment value"),
       orBlank(row.slope),
       orBlank(row.deflection / scale.deflection),
     ]);
+    return withHeaders(rows, header, COLUMNS.diagram, given);
   });
 }

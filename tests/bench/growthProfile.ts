@@ -8,5 +8,5 @@ import { growthMember } from "./row.bench";
 
 const m = growthMember(10000);
 let sink = 0;
-for (let i = 0; i < 8; i++) sink += sheetMaxMoment(m.spans, [["udl", 1 + i / 1000, "", "", "", ""], ...m.points], null, null, null)[0][0];
+for (let i = 0; i < 8; i++) sink += Number(sheetMaxMoment(m.spans, [["udl", 1 + i / 1000, "", "", "", ""], ...m.points], null, null, null)[0][0]);
 console.log(`done (${sink.toFixed(0)})`);

@@ -22,49 +22,51 @@ const trailing: CatalogueEntry["parameters"] = [
 ];
 /** The analysis functions' trailing arguments: the member's own, then the units labels. */
 const analysis: CatalogueEntry["parameters"] = [...trailing, ["units", "matrix", true]];
+/** The optional last argument of the tabular functions: a header row. */
+const headers: CatalogueEntry["parameters"][number] = ["headers", "scalar", true];
 
 export const CATALOGUE: CatalogueEntry[] = [
-  { id: "REACTIONS", exportName: "reactions", parameters: [...member, ...analysis] },
+  { id: "REACTIONS", exportName: "reactions", parameters: [...member, ...analysis, headers] },
   { id: "SHEAR", exportName: "shear", parameters: [...member, ["x", "matrix", false], ...analysis] },
   { id: "MOMENT", exportName: "moment", parameters: [...member, ["x", "matrix", false], ...analysis] },
   { id: "SLOPE", exportName: "slope", parameters: [...member, ["x", "matrix", false], ...analysis] },
   { id: "DEFLECTION", exportName: "deflection", parameters: [...member, ["x", "matrix", false], ...analysis] },
-  { id: "MAXMOMENT", exportName: "maxMoment", parameters: [...member, ...analysis] },
-  { id: "EXTREMES", exportName: "extremes", parameters: [...member, ...analysis] },
-  { id: "DIAGRAM", exportName: "diagram", parameters: [...member, ["points", "scalar", true], ...analysis] },
+  { id: "MAXMOMENT", exportName: "maxMoment", parameters: [...member, ...analysis, headers] },
+  { id: "EXTREMES", exportName: "extremes", parameters: [...member, ...analysis, headers] },
+  { id: "DIAGRAM", exportName: "diagram", parameters: [...member, ["points", "scalar", true], ...analysis, headers] },
   // load arrangements: envelopes, peaks, influence lines, moving loads, combination sets
   {
     id: "ENVELOPE",
     exportName: "envelope",
-    parameters: [...member, ["x", "matrix", false], ["combos", "matrix", false], ["supports", "matrix", true], ["EI", "matrix", true], ["quantity", "scalar", true], ["pattern", "scalar", true], ["psi0", "scalar", true]],
+    parameters: [...member, ["x", "matrix", false], ["combos", "matrix", false], ["supports", "matrix", true], ["EI", "matrix", true], ["quantity", "scalar", true], ["pattern", "scalar", true], ["psi0", "scalar", true], ["units", "matrix", true], headers],
   },
   {
     id: "PEAKS",
     exportName: "peaks",
-    parameters: [...member, ["combos", "matrix", false], ["supports", "matrix", true], ["EI", "matrix", true], ["pattern", "scalar", true], ["psi0", "scalar", true]],
+    parameters: [...member, ["combos", "matrix", false], ["supports", "matrix", true], ["EI", "matrix", true], ["pattern", "scalar", true], ["psi0", "scalar", true], ["units", "matrix", true], headers],
   },
-  { id: "INFLUENCE", exportName: "influence", parameters: [["spans", "matrix", false], ["effect", "scalar", false], ["positions", "matrix", false], ["supports", "matrix", true], ["EI", "matrix", true]] },
+  { id: "INFLUENCE", exportName: "influence", parameters: [["spans", "matrix", false], ["effect", "scalar", false], ["positions", "matrix", false], ["supports", "matrix", true], ["EI", "matrix", true], ["units", "matrix", true]] },
   {
     id: "MOVING",
     exportName: "moving",
-    parameters: [["spans", "matrix", false], ["axles", "matrix", false], ["spacings", "matrix", false], ["effect", "scalar", false], ["supports", "matrix", true], ["EI", "matrix", true]],
+    parameters: [["spans", "matrix", false], ["axles", "matrix", false], ["spacings", "matrix", false], ["effect", "scalar", false], ["supports", "matrix", true], ["EI", "matrix", true], ["units", "matrix", true], headers],
   },
   { id: "COMBOS", exportName: "combos", parameters: [["set", "scalar", false], ["psi0", "scalar", true], ["cases", "matrix", true]] },
   // sections, stresses, serviceability checks and units
   { id: "SECTION", exportName: "section", parameters: [["shape", "scalar", false], ["dimensions", "matrix", false], ["unit", "scalar", true], ["resultUnit", "scalar", true]] },
-  { id: "STRESS", exportName: "stress", parameters: [...member, ["section", "matrix", false], ...trailing, ["units", "matrix", true]] },
-  { id: "SHEARSTRESS", exportName: "shearStress", parameters: [...member, ["section", "matrix", false], ...trailing, ["units", "matrix", true]] },
-  { id: "DEFLECTIONCHECK", exportName: "deflectionCheck", parameters: [...member, ["limit", "matrix", false], ...trailing, ["units", "matrix", true]] },
+  { id: "STRESS", exportName: "stress", parameters: [...member, ["section", "matrix", false], ...trailing, ["units", "matrix", true], headers] },
+  { id: "SHEARSTRESS", exportName: "shearStress", parameters: [...member, ["section", "matrix", false], ...trailing, ["units", "matrix", true], headers] },
+  { id: "DEFLECTIONCHECK", exportName: "deflectionCheck", parameters: [...member, ["limit", "matrix", false], ...trailing, ["units", "matrix", true], headers] },
   { id: "UTILISATION", exportName: "utilisation", parameters: [["demand", "matrix", false], ["capacity", "matrix", false], ["demandUnit", "scalar", true], ["capacityUnit", "scalar", true]] },
   { id: "CONVERT", exportName: "convertUnits", parameters: [["value", "matrix", false], ["from", "scalar", false], ["to", "scalar", false]] },
   { id: "STIFFNESS", exportName: "stiffness", parameters: [["E", "matrix", false], ["I", "matrix", false], ["EUnit", "scalar", true], ["IUnit", "scalar", true], ["resultUnit", "scalar", true]] },
   // results per span and per load case, natural frequencies and mode shapes
-  { id: "SPANPEAKS", exportName: "spanPeaks", parameters: [...member, ...analysis] },
-  { id: "CASEREACTIONS", exportName: "caseReactions", parameters: [...member, ...analysis, ["reaction", "scalar", true]] },
+  { id: "SPANPEAKS", exportName: "spanPeaks", parameters: [...member, ...analysis, headers] },
+  { id: "CASEREACTIONS", exportName: "caseReactions", parameters: [...member, ...analysis, ["reaction", "scalar", true], headers] },
   {
     id: "FREQUENCIES",
     exportName: "frequencies",
-    parameters: [["spans", "matrix", false], ["EI", "matrix", false], ["mass", "matrix", false], ["modes", "scalar", true], ["supports", "matrix", true], ["loads", "matrix", true], ["combo", "scalar", true], ["units", "matrix", true], ["g", "scalar", true]],
+    parameters: [["spans", "matrix", false], ["EI", "matrix", false], ["mass", "matrix", false], ["modes", "scalar", true], ["supports", "matrix", true], ["loads", "matrix", true], ["combo", "scalar", true], ["units", "matrix", true], ["g", "scalar", true], headers],
   },
   {
     id: "MODESHAPE",

@@ -62,7 +62,7 @@ describe("parseSpanFormula", () => {
 
   it("maps DIAGRAM with points before the supports, and skipped arguments", () => {
     const call = parsed("=SPAN.DIAGRAM(Schedule!$B$4,Schedule!$C$4,101,,Schedule!E4)");
-    expect(call.entry.arguments.map((a) => a.name)).toEqual(["spans", "loads", "points", "supports", "EI", "combo", "units"]);
+    expect(call.entry.arguments.map((a) => a.name)).toEqual(["spans", "loads", "points", "supports", "EI", "combo", "units", "headers"]);
     expect(call.args.points).toEqual({ kind: "literal", value: 101, text: "101" });
     expect(call.args.supports).toEqual({ kind: "omitted", text: "" });
     expect(call.args.EI).toEqual({ kind: "range", sheet: "Schedule", address: "E4", text: "Schedule!E4" });

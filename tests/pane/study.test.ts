@@ -144,3 +144,21 @@ describe("a study cell that shows an error is not drawn", () => {
     if ("error" in study) expect(study.error).toMatch(message);
   });
 });
+
+describe("a study cell with units is drawn in those units", () => {
+  it("an ENVELOPE cell's deflection curve is SPAN.ENVELOPE's with the cell's units argument (EI in kip*in^2, deflection in in)", async () => {
+    const units = "length=ft, force=kip, EI=kip*in^2, deflection=in";
+    const host = new FakeHost()
+      .put("A1", [[20], ["udl 1 D; udl 2 L"], ["1.2D+1.6L"], ["0.9D"], [14790000], [units]])
+      .putFormula("C1", '=SPAN.ENVELOPE(A1,A2,3,A3:A4,,A5,"deflection",,,A6)');
+    const member = await memberAt(host, "C1");
+    const study = computeStudy(member);
+    if ("error" in study || study.kind !== "envelope") throw new Error("no envelope");
+    const deflection = study.curves.find((c) => c.quantity === "deflection")!;
+    const xs = deflection.xs.map((x) => [x]);
+    const withUnits = sheetEnvelope(20, "udl 1 D; udl 2 L", xs, [["1.2D+1.6L"], ["0.9D"]], null, 14790000, "deflection", null, null, units);
+    const without = sheetEnvelope(20, "udl 1 D; udl 2 L", xs, [["1.2D+1.6L"], ["0.9D"]], null, 14790000, "deflection", null, null);
+    expect(deflection.max).toEqual(withUnits.map((r) => r[1]));
+    expect(deflection.max).not.toEqual(without.map((r) => r[1]));
+  });
+});
