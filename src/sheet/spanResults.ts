@@ -6,15 +6,11 @@ import { caseReactions, invalid, spanPeaks } from "../core";
 import { errorCodeOf, isBlank, show } from "./cells";
 import { COLUMNS, readHeaders, withHeaders } from "./headers";
 import { guarded } from "./hostError";
-import { readComboText, readMember, type MemberArgs } from "./member";
+import { readComboText, readMember } from "./member";
 import { singleCell } from "./ranges";
 import { finite, orBlank } from "./shape";
 import { memberInOwnUnits, readMemberUnits } from "./units";
-import { outputScale, solvedMember } from "./worksheet";
-
-function argsOf(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units: unknown): MemberArgs {
-  return { spans, loads, supports: supports ?? null, EI: EI ?? null, combo: combo ?? null, units: units ?? null };
-}
+import { memberArgs, outputScale, solvedMember, solvedWithScale } from "./worksheet";
 
 /** SPAN.SPANPEAKS: one row per span [span, length, M max, x, M min, x, V, x, deflection, x]; deflection "" without EI. */
 export function sheetSpanPeaks(
@@ -27,11 +23,8 @@ export function sheetSpanPeaks(
   headers?: unknown,
 ): (number | string)[][] {
   return guarded(() => {
-    const args = argsOf(spans, loads, supports, EI, combo, units);
-    const given = readMemberUnits(args.units);
     const header = readHeaders(headers);
-    const solution = solvedMember(args, given);
-    const scale = outputScale(given);
+    const { solution, scale, units: given } = solvedWithScale(memberArgs(spans, loads, supports, EI, combo, units));
     const rows = spanPeaks(solution).map((p) => {
       const what = (q: string) => `span ${p.span}'s ${q}`;
       return [
@@ -81,7 +74,7 @@ export function sheetCaseReactions(
   return guarded(() => {
     const kind = readReactionKind(reaction);
     const header = readHeaders(headers);
-    const args = argsOf(spans, loads, supports, EI, combo, units);
+    const args = memberArgs(spans, loads, supports, EI, combo, units);
     const given = readMemberUnits(args.units);
     const scale = outputScale(given);
     const member = readMember({ ...args, combo: null });

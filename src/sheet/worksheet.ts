@@ -54,7 +54,7 @@ export function outputScale(units: MemberUnits | null): OutputScale {
 }
 
 /** The solved member and the factors that bring its results into the sheet's units; the units argument is read once. */
-function solvedWithScale(args: MemberArgs): { solution: Solution; scale: OutputScale; units: MemberUnits | null } {
+export function solvedWithScale(args: MemberArgs): { solution: Solution; scale: OutputScale; units: MemberUnits | null } {
   const units = readMemberUnits(args.units ?? null);
   return { solution: solvedMember(args, units), scale: outputScale(units), units };
 }
@@ -73,7 +73,8 @@ function shown(quantity: Quantity, value: number, scale: OutputScale): number {
   }
 }
 
-function memberArgs(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown): MemberArgs {
+/** The member arguments as the host passes them (skipped optional arguments arrive as null or undefined). */
+export function memberArgs(spans: unknown, loads: unknown, supports: unknown, EI: unknown, combo: unknown, units?: unknown): MemberArgs {
   return { spans, loads, supports: supports ?? null, EI: EI ?? null, combo: combo ?? null, units: units ?? null };
 }
 
