@@ -113,15 +113,14 @@ export function sheetStress(
     const values = readSection(section, [["Sx top", "length^3"], ["Sx bottom", "length^3"]], [1, 2], "S (one value) or S top and S bottom");
     const top = sectionSI(values[0], u, 3, "S top");
     const bottom = values.length > 1 ? sectionSI(values[1], u, 3, "S bottom") : top;
-    const x = (v: number) => v;
     const m = extremes(solution, "moment");
     const moment = { ...m, max: momentSI(m.max, u), min: momentSI(m.min, u) };
     const rows = fibreStresses(moment, top, bottom).map((f) => [
       f.fibre,
       finite(out(f.max, u && u.stress), `the largest ${f.fibre} stress`),
-      x(f.xMax),
+      f.xMax,
       finite(out(f.min, u && u.stress), `the smallest ${f.fibre} stress`),
-      x(f.xMin),
+      f.xMin,
     ]);
     return withHeaders(rows, header, COLUMNS.stress, u);
   });
