@@ -31,16 +31,21 @@ export function twoSum(a: number, b: number): DD {
   return { hi: s, lo: a - (s - v) + (b - v) };
 }
 
-/** a * b exactly, as a double-double (Dekker). */
-export function twoProduct(a: number, b: number): DD {
-  const p = a * b;
+/** The rounding error of the product p = a * b (Dekker's split): a * b = p + productError(a, b, p) exactly. No allocation. */
+export function productError(a: number, b: number, p: number): number {
   const ca = SPLITTER * a;
   const ah = ca - (ca - a);
   const al = a - ah;
   const cb = SPLITTER * b;
   const bh = cb - (cb - b);
   const bl = b - bh;
-  return { hi: p, lo: ah * bh - p + ah * bl + al * bh + al * bl };
+  return ah * bh - p + ah * bl + al * bh + al * bl;
+}
+
+/** a * b exactly, as a double-double (Dekker). */
+export function twoProduct(a: number, b: number): DD {
+  const p = a * b;
+  return { hi: p, lo: productError(a, b, p) };
 }
 
 export function add(x: DD, y: DD): DD {

@@ -9,21 +9,14 @@
  *   the final reactions against the loads, which the solver refuses to report when it fails.
  */
 import { solveBanded, type PivotStats } from "./banded";
+import { productError } from "./doubleDouble";
 import type { Load, Reaction } from "./model";
 import type { StiffnessSystem } from "./stiffness";
-
-const SPLITTER = 134217729; // 2^27 + 1 (Veltkamp)
 
 /** Adds a * b to the double-double (hi, lo) held in acc, without losing the product's low part. */
 function addProduct(acc: [number, number], a: number, b: number): void {
   const p = a * b;
-  const ca = SPLITTER * a;
-  const ah = ca - (ca - a);
-  const al = a - ah;
-  const cb = SPLITTER * b;
-  const bh = cb - (cb - b);
-  const bl = b - bh;
-  const pe = ah * bh - p + ah * bl + al * bh + al * bl;
+  const pe = productError(a, b, p);
   const s = acc[0] + p;
   const v = s - acc[0];
   const se = acc[0] - (s - v) + (p - v);
