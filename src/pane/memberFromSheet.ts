@@ -3,8 +3,8 @@
  * argument through the host (ranges, spilled ranges, names, literals, array constants),
  * builds the member with the sheet layer's own readers and solves it with the core.
  */
-import { solve, type Member, type Solution } from "../core";
-import { describeError, memberInOwnUnits, readLoads, readMember, readMemberUnits, sheetReactions, type MemberArgs } from "../sheet";
+import type { Member, Solution } from "../core";
+import { describeError, memberInOwnUnits, readLoads, readMember, readMemberUnits, solvedMember, type MemberArgs } from "../sheet";
 import { MEMBER_ARGUMENTS, parseSpanFormula, unresolvedArguments, type ArgSource, type MemberArgument, type SpanCall } from "./formulaRefs";
 import { qualify, type Selection, type SheetHost } from "./host";
 import { NO_UNITS, paneUnits, type Units } from "./units";
@@ -186,19 +186,18 @@ export interface Solved {
 
 /**
  * Solves the member, with `combo` in place of the formula's combination when given
- * (`""` = every load at 1). The arguments first go through SPAN.REACTIONS' own body
- * (sheetReactions), so the combination box and every other input obey exactly the rules the
- * worksheet functions obey (case labels, combinations, blanks, units); its refusal comes back
- * as `{ error }` with the sheet layer's code and message. The member drawn is then read in the
- * formula's own length and force units.
+ * (`""` = every load at 1). The solution is the sheet layer's own (solvedMember, the cached
+ * solve every analysis function uses), so the combination box and every other input obey
+ * exactly the rules the worksheet functions obey (case labels, combinations, blanks, units);
+ * a refusal comes back as `{ error }` with the sheet layer's code and message. The member drawn
+ * is read the same way, in the formula's own length and force units.
  */
 export function solveMember(resolved: ResolvedMember, combo?: string): Solved | { error: string } {
   try {
     const args: MemberArgs = combo === undefined ? resolved.args : { ...resolved.args, combo };
-    sheetReactions(args.spans, args.loads, args.supports, args.EI, args.combo, args.units ?? null);
     const units = readMemberUnits(args.units ?? null);
+    const solution = solvedMember(args, units);
     const member = units === null ? readMember(args) : memberInOwnUnits(readMember(args), units);
-    const solution = solve(member);
     const comboText = combo ?? (typeof args.combo === "string" ? args.combo : Array.isArray(args.combo) ? String(args.combo[0]?.[0] ?? "") : "");
     return { member, solution, comboText };
   } catch (error) {
