@@ -14,6 +14,7 @@ import type { SpanFunctions } from "./catalogue";
 import { cellKey, attachContext, buildingWith, type CellAddress, type EngineContext } from "./learnedSizes";
 import { columnLetters, expandSpillReferences, hasSpillReference, normalizeFormula } from "./formulaText";
 import type { BlockSize } from "./resultSize";
+import { formulaAfterRows } from "./references";
 import { registerSpanPlugin } from "./spanPlugin";
 import { registerSinglePlugin } from "./singlePlugin";
 import { SPAN_EXPORTS } from "./spanFunctions";
@@ -165,13 +166,65 @@ export class SpanWorkbook {
    * to the engine in one call (many single-cell calls in one batch cost quadratic time).
    */
   setCells(sheet: number, top: number, left: number, block: readonly (readonly CellInput[])[]): void {
+    this.write(sheet, top, left, block);
+  }
+
+  /**
+   * As setCells, and says which cells' values changed, as the engine reports them from every
+   * pass: the block itself, what depends on it, and the cells of spills that changed or grew.
+   * Cells a shrinking spill leaves empty are not among them: a grid repaints the cells of an
+   * old spill whose anchor is reported.
+   */
+  setCellsReporting(sheet: number, top: number, left: number, block: readonly (readonly CellInput[])[]): CellAddress[] {
+    const changed: CellAddress[] = [];
+    this.write(sheet, top, left, block, changed);
+    return changed;
+  }
+
+  private write(sheet: number, top: number, left: number, block: readonly (readonly CellInput[])[], changed?: CellAddress[]): void {
     // Array.from, not block.map: a block from another frame (the pane writing into the workbench)
     // would map into that frame's arrays, which the engine does not take for arrays.
     const prepared = Array.from(block, (row, r) => Array.from(row, (input, c) => this.prepare({ sheet, row: top + r, col: left + c }, input)));
     const width = prepared[0]?.length ?? 0;
     if (width === 0) return;
-    if (prepared.every((row) => row.length === width)) this.hf.setCellContents({ sheet, row: top, col: left }, prepared as never);
-    else this.hf.batch(() => prepared.forEach((row, r) => row.length > 0 && this.hf.setCellContents({ sheet, row: top + r, col: left }, [row] as never)));
+    const changes =
+      prepared.every((row) => row.length === width)
+        ? this.hf.setCellContents({ sheet, row: top, col: left }, prepared as never)
+        : this.hf.batch(() => prepared.forEach((row, r) => row.length > 0 && this.hf.setCellContents({ sheet, row: top + r, col: left }, [row] as never)));
+    if (changed) collect(changes, changed);
+    this.settle(changed);
+  }
+
+  /** Inserts `count` empty rows before row `at`; formulas everywhere follow the rows that moved. */
+  insertRows(sheet: number, at: number, count: number): void {
+    if (!Number.isInteger(at) || !Number.isInteger(count) || at < 0 || count < 1) throw new RangeError(`cannot insert ${count} rows at row ${at + 1}`);
+    if (this.dimensions(sheet).rows + count > SHEET_LIMITS.rows) throw new RangeError(`the sheet would have more than ${SHEET_LIMITS.rows} rows`);
+    this.hf.addRows(sheet, [at, count]);
+    this.afterRows(sheet, at, count);
+  }
+
+  /** Deletes rows `at` to `at + count - 1`; references into them become #REF!, ranges keep the rows left. */
+  deleteRows(sheet: number, at: number, count: number): void {
+    if (!Number.isInteger(at) || !Number.isInteger(count) || at < 0 || count < 1) throw new RangeError(`cannot delete ${count} rows at row ${at + 1}`);
+    this.hf.removeRows(sheet, [at, count]);
+    this.afterRows(sheet, at, -count);
+  }
+
+  /** Formulas kept as typed follow a row insertion (count > 0) or deletion (count < 0). */
+  private afterRows(sheet: number, at: number, count: number): void {
+    const name = this.hf.getSheetName(sheet) ?? "";
+    const entries = [...this.typed.values()];
+    this.typed.clear();
+    for (const entry of entries) {
+      let row = entry.address.row;
+      if (entry.address.sheet === sheet && row >= at) {
+        if (count < 0 && row < at - count) continue;
+        row += count;
+      }
+      const address = { ...entry.address, row };
+      const text = formulaAfterRows(entry.text, name, entry.address.sheet === sheet, at, count, SHEET_LIMITS);
+      this.typed.set(cellKey(address), { address, text, engineText: this.hf.getCellFormula(address) ?? "" });
+    }
     this.settle();
   }
 
@@ -271,7 +324,7 @@ export class SpanWorkbook {
     });
   }
 
-  private settle(): void {
+  private settle(changed?: CellAddress[]): void {
     for (let pass = 0; pass < MAX_PASSES; pass++) {
       const pending = new Map<string, { address: CellAddress; text: string }>();
       for (const [key, address] of this.context.mismatched) {
@@ -285,14 +338,23 @@ export class SpanWorkbook {
         if (text !== entry.engineText) pending.set(key, { address: entry.address, text });
       }
       if (pending.size === 0) return;
-      this.hf.batch(() => {
+      const changes = this.hf.batch(() => {
         for (const [key, { address, text }] of pending) {
           const typed = this.typed.get(key);
           if (typed) typed.engineText = text;
           this.hf.setCellContents(address, [[text]]);
         }
       });
+      if (changed) collect(changes, changed);
     }
+  }
+}
+
+/** The cell addresses among the engine's exported changes (named expressions have none). */
+function collect(changes: readonly unknown[], into: CellAddress[]): void {
+  for (const change of changes) {
+    const address = (change as { address?: CellAddress }).address;
+    if (address) into.push(address);
   }
 }
 
