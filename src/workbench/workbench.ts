@@ -556,7 +556,8 @@ export class Workbench {
     for (const [r, cells] of this.rendered)
       for (let c = 0; c < cells.length; c++) {
         const td = cells[c];
-        if (keys.has(anchorKey(r, c)) || (td.dataset.anchor !== undefined && keys.has(td.dataset.anchor))) paintCell(td, context, r, c);
+        // The left neighbour too: whether its text runs on over this cell may have changed.
+        if (keys.has(anchorKey(r, c)) || keys.has(anchorKey(r, c + 1)) || (td.dataset.anchor !== undefined && keys.has(td.dataset.anchor))) paintCell(td, context, r, c);
       }
     this.markSelection();
   }
@@ -606,6 +607,7 @@ export class Workbench {
   }
 
   private showSelection(): void {
+    this.markSelection();
     const { anchor } = this.selection;
     const block = this.selectedBlock();
     const address = rangeText({ row: block.top, col: block.left }, { row: block.bottom, col: block.right });
@@ -719,13 +721,17 @@ export class Workbench {
       this.el.formulaBar.focus();
     });
     this.el.formulaBar.addEventListener("keydown", (event) => {
+      // stopPropagation: the grid's own keys (document) must not see the key that ends an edit.
       if (event.key === "Enter") {
         event.preventDefault();
+        event.stopPropagation();
         this.commit(this.el.formulaBar.value, { row: event.shiftKey ? -1 : 1, col: 0 });
         this.el.formulaBar.blur();
       } else if (event.key === "Tab") {
         event.preventDefault();
+        event.stopPropagation();
         this.commit(this.el.formulaBar.value, { row: 0, col: event.shiftKey ? -1 : 1 });
+        this.el.formulaBar.blur();
       } else if (event.key === "Escape") {
         this.showSelection();
         this.el.formulaBar.blur();
@@ -737,6 +743,7 @@ export class Workbench {
       nameBox.addEventListener("keydown", (event) => {
         if (event.key === "Enter") {
           event.preventDefault();
+          event.stopPropagation();
           const ref = parseNameBox(nameBox.value);
           if (typeof ref === "string") return this.say(ref, true);
           if (ref.sheet !== undefined && !this.book.sheetNames().includes(ref.sheet)) return this.say(`no sheet named "${ref.sheet}"`, true);

@@ -31,6 +31,11 @@ function hintOf(context: PaintContext, row: number, col: number): TableHint | un
   return context.hints.get(key);
 }
 
+function isBlank(book: SpanWorkbook, sheet: number, row: number, col: number): boolean {
+  const value = book.getValue(sheet, row, col);
+  return (value === null || value === "") && book.getFormula(sheet, row, col) === undefined;
+}
+
 export function paintCell(td: HTMLTableCellElement, context: PaintContext, row: number, col: number): void {
   const { book, sheet } = context;
   const value = book.getValue(sheet, row, col);
@@ -48,6 +53,8 @@ export function paintCell(td: HTMLTableCellElement, context: PaintContext, row: 
   if (spilledFrom || anchor) className += " spill";
   if (anchor) className += " anchor";
   if (isCellError(value)) className += " error";
+  // Text runs on over an empty neighbour, as in a spreadsheet (numbers never do: they fit or show ###).
+  if (typeof value === "string" && value !== "" && isBlank(book, sheet, row, col + 1)) className += " overflow";
   td.className = className.trim();
   if (spilledFrom) td.dataset.anchor = anchorKey(spilledFrom.row, spilledFrom.col);
   else if (anchor) td.dataset.anchor = anchorKey(row, col);
