@@ -55,6 +55,8 @@ export interface WorkbenchApi {
   /** A column's width in px on the active sheet ("B" or a cell of it). */
   columnWidth(column: string): number;
   setColumnWidth(column: string, px: number): void;
+  /** The last block write: cells written, cells the engine reported changed, ms in the engine and in painting. */
+  lastWriteTiming(): { cells: number; changed: number; engineMs: number; paintMs: number } | undefined;
 }
 
 export function createApi(bench: Workbench, charts: HTMLElement): WorkbenchApi {
@@ -164,6 +166,7 @@ export function createApi(bench: Workbench, charts: HTMLElement): WorkbenchApi {
     },
     columnWidth: (text: string) => bench.width(column(text)),
     setColumnWidth: (text: string, px: number) => bench.setColumnWidth(column(text), px),
+    lastWriteTiming: () => (bench.lastWrite ? { ...bench.lastWrite } : undefined),
   };
   return api;
 }

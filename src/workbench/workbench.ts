@@ -42,6 +42,8 @@ interface Copied {
   text: string;
   block: Block;
   inputs: CellInput[][];
+  /** A cut pastes its inputs once, references unmoved (the cells moved, not copied). */
+  cut?: boolean;
 }
 
 export class Workbench {
@@ -55,6 +57,8 @@ export class Workbench {
   /** Rendered rows by sheet row, and their cells. */
   private rendered = new Map<number, HTMLTableCellElement[]>();
   private window: RowWindow = { first: 0, last: -1 };
+  /** The sheet height (rows) the spacers were last sized for. */
+  private windowTotal = 0;
   private totalRows = 0;
   private totalCols = 0;
   private table!: HTMLTableElement;
@@ -252,7 +256,8 @@ export class Workbench {
     try {
       if (this.copied && this.copied.text === text) {
         source = this.copied.inputs;
-        shiftFrom = this.copied.block;
+        if (!this.copied.cut) shiftFrom = this.copied.block;
+        else this.copied = undefined;
       } else source = parseTsv(text).map((row) => row.map(inputOf));
     } catch (error) {
       this.say((error as Error).message, true);
@@ -281,6 +286,7 @@ export class Workbench {
   deleteRows(at = this.selectedBlock().top, count = blockRows(this.selectedBlock())): void {
     const id = this.sheetId();
     const cols = this.book.dimensions(id).cols;
+    if (!this.withinLimit({ top: at, left: 0, bottom: at + count - 1, right: Math.max(0, cols - 1) })) return;
     const removed = Array.from({ length: count }, (_, r) => Array.from({ length: Math.max(1, cols) }, (_, c) => this.book.getInput(id, at + r, c) ?? null));
     const formulas: { sheet: string; row: number; col: number; text: string }[] = [];
     for (const sheet of this.book.sheetNames()) {
@@ -327,7 +333,9 @@ export class Workbench {
       const before = Array.from({ length: rows }, (_, r) => Array.from({ length: cols }, (_, c) => this.book.getInput(id, top + r, left + c) ?? null));
       this.history.record({ kind: "block", sheet, top, left, before, after: square });
     }
+    const started = performance.now();
     const changed = this.book.setCellsReporting(id, top, left, square);
+    const computed = performance.now();
     if (id === this.sheetId()) {
       const keys = new Set<string>();
       for (const a of changed) if (a.sheet === id) keys.add(anchorKey(a.row, a.col));
@@ -335,8 +343,12 @@ export class Workbench {
       this.repaint(keys);
     }
     this.showSelection();
+    this.lastWrite = { cells: rows * cols, changed: changed.length, engineMs: computed - started, paintMs: performance.now() - computed };
     this.changed();
   }
+
+  /** How long the last block write took in the engine and in painting the grid (for the benchmark). */
+  lastWrite: { cells: number; changed: number; engineMs: number; paintMs: number } | undefined;
 
   /** Applies a step (again, for a redo); `record` puts a new row step on the undo list. */
   private apply(step: Step, record: boolean): void {
@@ -511,7 +523,8 @@ export class Workbench {
   private renderWindow(force = false): void {
     const view = this.el.sheet;
     const next = rowWindow(view.scrollTop, view.clientHeight || 600, this.totalRows);
-    if (!force && next.first === this.window.first && next.last === this.window.last) return;
+    if (!force && next.first === this.window.first && next.last === this.window.last && this.windowTotal === this.totalRows) return;
+    this.windowTotal = this.totalRows;
     const context = this.paintContext();
     const kept = force ? new Map<number, HTMLTableCellElement[]>() : this.rendered;
     const rendered = new Map<number, HTMLTableCellElement[]>();
@@ -767,7 +780,7 @@ export class Workbench {
       if (this.editing() || !event.clipboardData) return;
       event.preventDefault();
       event.clipboardData.setData("text/plain", this.copySelection());
-      this.copied = undefined;
+      if (this.copied) this.copied.cut = true;
       this.clearSelection();
     });
     document.addEventListener("paste", (event) => {

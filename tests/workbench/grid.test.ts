@@ -230,4 +230,14 @@ describe("virtual rows", () => {
     const top = await page.$eval('td[data-address="J2000"]', (td) => (td as HTMLElement).offsetTop);
     expect(top).toBe(24 + 1999 * 22);
   });
+
+  it("grows the sheet to show a cell past its last row, when asked to reveal or select it", async () => {
+    await page.click(".tabs button:has-text('Checks')");
+    expect(await page.$('td[data-address="C300"]')).toBeNull();
+    await api("api.reveal('Checks!C300')");
+    expect(await page.$('td[data-address="C300"]')).not.toBeNull();
+    await page.fill("#name-box", "D900");
+    await page.press("#name-box", "Enter");
+    expect(await page.getAttribute('td[data-address="D900"]', "class")).toContain("selected");
+  });
 });
