@@ -11,7 +11,8 @@ import { clipboardText, parseTsv, toTsv } from "./grid/clipboard";
 import { ColumnWidths, ROW_HEADER_WIDTH, TextMeasure } from "./grid/columns";
 import { filledBlock, fillDownSource, fillRightSource } from "./grid/fill";
 import { tableHint } from "./grid/headerHint";
-import { History, type Step } from "./grid/history";
+import { History, type BlockStep, type Step } from "./grid/history";
+import { mapReferences, namesSheet } from "../engine/references";
 import { inputOf } from "./grid/inputs";
 import { MAX_BLOCK_CELLS, blockCols, blockOf, blockRows, inBlock, parseNameBox, type Block, type Selection } from "./grid/selection";
 import { HEADER_HEIGHT, ROW_HEIGHT, rowWindow, scrollFor, type RowWindow } from "./grid/viewport";
@@ -42,7 +43,9 @@ interface Copied {
   text: string;
   block: Block;
   inputs: CellInput[][];
-  /** A cut pastes its inputs once, references unmoved (the cells moved, not copied). */
+  /** The sheet copied from. */
+  sheet: string;
+  /** A cut: the paste moves the cells (once), as a spreadsheet does. */
   cut?: boolean;
 }
 
@@ -241,23 +244,29 @@ export class Workbench {
       inputs.push(line);
     }
     const text = toTsv(rows);
-    this.copied = { text, block, inputs };
+    this.copied = { text, block, inputs, sheet: this.activeSheet() };
     return text;
   }
 
   /**
    * Pastes clipboard text at the selection. Text copied from this workbench pastes its formulas
    * (relative references moved); other text pastes as typed values ("=..." stays a formula as
-   * written). A selection that is a whole multiple of the pasted block is filled with it.
+   * written). A selection that is a whole multiple of the pasted block is filled with it. Text
+   * cut from this workbench moves the cells (see move).
    */
   paste(text: string): void {
     let source: CellInput[][];
     let shiftFrom: Block | undefined;
     try {
+      if (this.copied && this.copied.text === text && this.copied.cut) {
+        const cut = this.copied;
+        this.copied = undefined;
+        this.move(cut, this.selection.anchor);
+        return;
+      }
       if (this.copied && this.copied.text === text) {
         source = this.copied.inputs;
-        if (!this.copied.cut) shiftFrom = this.copied.block;
-        else this.copied = undefined;
+        shiftFrom = this.copied.block;
       } else source = parseTsv(text).map((row) => row.map(inputOf));
     } catch (error) {
       this.say((error as Error).message, true);
@@ -274,6 +283,52 @@ export class Workbench {
     const block = filledBlock(origin, target, (r, c) => source[r - origin.top][c - origin.left]);
     this.writeBlock(this.activeSheet(), target.top, target.left, block, true);
     this.selection = { sheet: this.activeSheet(), anchor: { row: target.top, col: target.left }, focus: { row: target.bottom, col: target.right } };
+    this.showSelection();
+  }
+
+  /**
+   * Moves cut cells to `to` (their new top-left), as a spreadsheet does, in one undo step: the
+   * source is emptied, the cells are written at the target, and references into the moved
+   * block (in the block itself and in every formula of the book) follow it; other references
+   * stay. Limit: references from other sheets follow only a move within one sheet.
+   */
+  private move(cut: Copied, to: CellRef): void {
+    const from = cut.block;
+    const rows = blockRows(from);
+    const cols = blockCols(from);
+    const target: Block = { top: to.row, left: to.col, bottom: to.row + rows - 1, right: to.col + cols - 1 };
+    if (!this.withinLimit(target)) return;
+    const toSheet = this.activeSheet();
+    const sameSheet = toSheet === cut.sheet;
+    const dr = to.row - from.top;
+    const dc = to.col - from.left;
+    const follow = (formula: string, formulaSheet: string): string =>
+      mapReferences(formula, SHEET_LIMITS, (ref) =>
+        namesSheet(ref.sheet, cut.sheet, formulaSheet === cut.sheet) && inBlock(from, ref.row, ref.col) ? { row: ref.row + dr, col: ref.col + dc } : { row: ref.row, col: ref.col },
+      );
+    const moved = cut.inputs.map((row) => row.map((input) => (typeof input === "string" && input.startsWith("=") ? follow(input, cut.sheet) : input)));
+    const others: { sheet: string; row: number; col: number; text: string }[] = [];
+    if (sameSheet)
+      for (const sheet of this.book.sheetNames()) {
+        const sid = this.book.sheetId(sheet);
+        for (const a of this.book.formulaCells(sid)) {
+          if (sheet === cut.sheet && (inBlock(from, a.row, a.col) || inBlock(target, a.row, a.col))) continue;
+          const text = this.book.getFormula(sid, a.row, a.col);
+          if (text === undefined) continue;
+          const next = follow(text, sheet);
+          if (next !== text) others.push({ sheet, row: a.row, col: a.col, text: next });
+        }
+      }
+    const steps: BlockStep[] = [];
+    const write = (sheet: string, top: number, left: number, block: CellInput[][]): void => {
+      const step = this.writeBlock(sheet, top, left, block, "collect");
+      if (step) steps.push(step);
+    };
+    write(cut.sheet, from.top, from.left, Array.from({ length: rows }, () => Array<CellInput>(cols).fill(null)));
+    write(toSheet, target.top, target.left, moved);
+    for (const o of others) write(o.sheet, o.row, o.col, [[o.text]]);
+    if (steps.length > 0) this.history.record({ kind: "multi", steps });
+    this.selection = { sheet: toSheet, anchor: { row: target.top, col: target.left }, focus: { row: target.bottom, col: target.right } };
     this.showSelection();
   }
 
@@ -319,19 +374,22 @@ export class Workbench {
     return false;
   }
 
-  private writeBlock(sheet: string, top: number, left: number, block: readonly (readonly CellInput[])[], record: boolean): void {
+  /** Writes a block in one engine call and repaints what changed; `record`: onto the undo list, or "collect": give the step back. */
+  private writeBlock(sheet: string, top: number, left: number, block: readonly (readonly CellInput[])[], record: boolean | "collect"): BlockStep | undefined {
     const id = this.book.sheetId(sheet);
     const rows = block.length;
     const cols = block.reduce((most, row) => Math.max(most, row.length), 0);
-    if (rows === 0 || cols === 0) return;
+    if (rows === 0 || cols === 0) return undefined;
     if (top + rows > SHEET_LIMITS.rows || left + cols > SHEET_LIMITS.cols) {
       this.say(`the block does not fit on the sheet (${SHEET_LIMITS.rows} rows, ${SHEET_LIMITS.cols} columns)`, true);
-      return;
+      return undefined;
     }
     const square = Array.from(block, (row) => (row.length === cols ? Array.from(row) : [...Array.from(row), ...Array<CellInput>(cols - row.length).fill(null)]));
+    let step: BlockStep | undefined;
     if (record) {
       const before = Array.from({ length: rows }, (_, r) => Array.from({ length: cols }, (_, c) => this.book.getInput(id, top + r, left + c) ?? null));
-      this.history.record({ kind: "block", sheet, top, left, before, after: square });
+      step = { kind: "block", sheet, top, left, before, after: square };
+      if (record === true) this.history.record(step);
     }
     const started = performance.now();
     const changed = this.book.setCellsReporting(id, top, left, square);
@@ -345,6 +403,7 @@ export class Workbench {
     this.showSelection();
     this.lastWrite = { cells: rows * cols, changed: changed.length, engineMs: computed - started, paintMs: performance.now() - computed };
     this.changed();
+    return step;
   }
 
   /** How long the last block write took in the engine and in painting the grid (for the benchmark). */
@@ -353,6 +412,7 @@ export class Workbench {
   /** Applies a step (again, for a redo); `record` puts a new row step on the undo list. */
   private apply(step: Step, record: boolean): void {
     if (step.kind === "block") this.writeBlock(step.sheet, step.top, step.left, step.after, false);
+    else if (step.kind === "multi") for (const s of step.steps) this.writeBlock(s.sheet, s.top, s.left, s.after, false);
     else {
       const id = this.book.sheetId(step.sheet);
       try {
@@ -370,6 +430,10 @@ export class Workbench {
   private revert(step: Step): void {
     if (step.kind === "block") {
       this.writeBlock(step.sheet, step.top, step.left, step.before, false);
+      return;
+    }
+    if (step.kind === "multi") {
+      for (const s of [...step.steps].reverse()) this.writeBlock(s.sheet, s.top, s.left, s.before, false);
       return;
     }
     const id = this.book.sheetId(step.sheet);
@@ -780,8 +844,8 @@ export class Workbench {
       if (this.editing() || !event.clipboardData) return;
       event.preventDefault();
       event.clipboardData.setData("text/plain", this.copySelection());
+      // The cells move when the cut is pasted (here), as in a spreadsheet; until then they stay.
       if (this.copied) this.copied.cut = true;
-      this.clearSelection();
     });
     document.addEventListener("paste", (event) => {
       if (this.editing() || !event.clipboardData) return;

@@ -50,6 +50,7 @@ beforeAll(async () => {
   const out = await buildWorkbench("development");
   server = await serve(out);
   browser = await openChromium("grid");
+  await browser.context.grantPermissions(["clipboard-read", "clipboard-write"], { origin: server.url });
   page = await browser.context.newPage();
   page.on("pageerror", (error) => problems.push(error.message));
   await page.goto(`${server.url}/workbench.html`);
@@ -122,6 +123,35 @@ describe("clipboard", () => {
     expect(await api("return api.getValues('Member!H40:J43')")).toEqual(before);
     await page.keyboard.press("Control+Shift+z");
     expect(await api("return api.getValues('Member!H42:J45')")).toEqual(expected);
+  });
+
+  it("goes through the system clipboard with the keys: Ctrl+V pastes what another program put there, Ctrl+C puts the range there", async () => {
+    await click("H90");
+    await page.evaluate(() => navigator.clipboard.writeText("1.5\t=H90*2\r\nx\t\r\n"));
+    await page.keyboard.press("Control+v");
+    expect(await api("return api.getValues('Member!H90:I91')")).toEqual([[1.5, 3], ["x", null]]);
+    await page.fill("#name-box", "H90:I90");
+    await page.press("#name-box", "Enter");
+    await page.keyboard.press("Control+c");
+    expect(await page.evaluate(() => navigator.clipboard.readText())).toBe("1.5\t3\r\n");
+    // Cut and paste moves the cells: references into the moved block follow it, in it and elsewhere; one undo step.
+    await api("api.setFormula('Member!J95', '=H90+I90+$H$90')");
+    await page.keyboard.press("Control+x");
+    expect(await api("return api.getValues('Member!H90:I90')")).toEqual([[1.5, 3]]);
+    await click("H92");
+    await page.keyboard.press("Control+v");
+    expect(await api("return [api.getFormula('Member!I92'), api.getFormula('Member!J95'), api.getValues('Member!H90:I92')]")).toEqual([
+      "=H92*2",
+      "=H92+I92+$H$92",
+      [[null, null], ["x", null], [1.5, 3]],
+    ]);
+    expect(await api("return api.getValues('Member!J95')")).toEqual([[6]]);
+    await page.keyboard.press("Control+z");
+    expect(await api("return [api.getFormula('Member!I90'), api.getFormula('Member!J95'), api.getValues('Member!H90:I92')]")).toEqual([
+      "=H90*2",
+      "=H90+I90+$H$90",
+      [[1.5, 3], ["x", null], [null, null]],
+    ]);
   });
 
   it("copies a range as tab-separated text in full precision, and pastes its formulas moved inside the workbench", async () => {

@@ -30,7 +30,13 @@ export interface RowsStep {
   formulas?: { sheet: string; row: number; col: number; text: string }[];
 }
 
-export type Step = BlockStep | RowsStep;
+/** Several block writes done as one action (a cut and paste: the source emptied, the target written, references elsewhere moved). */
+export interface MultiStep {
+  kind: "multi";
+  steps: BlockStep[];
+}
+
+export type Step = BlockStep | RowsStep | MultiStep;
 
 export class History {
   private readonly done: Step[] = [];
