@@ -57,6 +57,8 @@ export interface WorkbenchApi {
   setColumnWidth(column: string, px: number): void;
   /** The last block write: cells written, cells the engine reported changed, ms in the engine and in painting. */
   lastWriteTiming(): { cells: number; changed: number; engineMs: number; paintMs: number } | undefined;
+  /** Milliseconds the grid took to build and show its first sheet. */
+  firstRenderMs(): number;
 }
 
 export function createApi(bench: Workbench, charts: HTMLElement): WorkbenchApi {
@@ -167,6 +169,7 @@ export function createApi(bench: Workbench, charts: HTMLElement): WorkbenchApi {
     columnWidth: (text: string) => bench.width(column(text)),
     setColumnWidth: (text: string, px: number) => bench.setColumnWidth(column(text), px),
     lastWriteTiming: () => (bench.lastWrite ? { ...bench.lastWrite } : undefined),
+    firstRenderMs: () => bench.firstRenderMs,
   };
   return api;
 }

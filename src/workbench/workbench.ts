@@ -6,6 +6,7 @@
  */
 import { SHEET_LIMITS, isCellError, type CellInput, type SpanWorkbook } from "../engine";
 import { cellText, rangeText, type CellRef } from "./addresses";
+import { numberTexts } from "./format";
 import { anchorKey, paintCell, type PaintContext } from "./grid/cells";
 import { clipboardText, parseTsv, toTsv } from "./grid/clipboard";
 import { ColumnWidths, ROW_HEADER_WIDTH, TextMeasure } from "./grid/columns";
@@ -80,6 +81,7 @@ export class Workbench {
     private current: SpanWorkbook,
     private el: WorkbenchElements,
   ) {
+    const started = performance.now();
     this.selection = { sheet: current.sheetNames()[0], anchor: { row: 0, col: 0 }, focus: { row: 0, col: 0 } };
     this.nameBoxInput = el.nameBox instanceof HTMLInputElement ? el.nameBox : undefined;
     // The row buttons of workbench.html, when the caller did not pass them.
@@ -89,7 +91,11 @@ export class Workbench {
     this.renderSheet();
     this.bindEvents();
     this.showSelection();
+    this.firstRenderMs = performance.now() - started;
   }
+
+  /** How long the grid took to build and show its first sheet (the workbook was evaluated before). */
+  readonly firstRenderMs: number;
 
   /** The workbook the grid shows (replaced by replaceBook). */
   get book(): SpanWorkbook {
@@ -538,7 +544,7 @@ export class Workbench {
       let widest = 0;
       for (let r = 0; r < Math.min(rows, 200); r++) {
         const value = this.book.getValue(id, r, c);
-        if (typeof value === "number") widest = Math.max(widest, this.measure.width(String(value.toPrecision(6)).replace(/\.?0+(e|$)/, "$1")));
+        if (typeof value === "number") widest = Math.max(widest, this.measure.width(numberTexts(value)[0]));
       }
       if (widest + 14 > this.columns.width(sheet, c)) this.columns.set(sheet, c, Math.min(160, widest + 14));
     }
