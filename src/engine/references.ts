@@ -5,6 +5,11 @@
  * names that look like a cell (`LOG10(`), nor names with a dot (`SPAN.X1`). A reference moved
  * off the sheet becomes `#REF!`, as spreadsheets write it. Whole-column and whole-row ranges
  * (`A:A`, `3:5`) are left as they are.
+ *
+ * Why not the engine's own copy/paste or moveCells: they move the engine's formula text, in
+ * which `A1#` has already been replaced by the range the spill covers now (and saved forms
+ * normalized), so a filled `=SUM(H12#)` would become a fixed range; the workbook keeps the
+ * typed text, and this rewrites that.
  */
 import { columnLetters, columnNumber, mapCode } from "./formulaText";
 
