@@ -400,12 +400,12 @@ export class Workbench {
     const started = performance.now();
     const changed = this.book.setCellsReporting(id, top, left, square);
     const computed = performance.now();
-    if (id === this.sheetId()) {
-      const keys = new Set<string>();
-      for (const a of changed) if (a.sheet === id) keys.add(anchorKey(a.row, a.col));
-      for (let r = 0; r < rows; r++) if (this.rendered.has(top + r)) for (let c = 0; c < cols; c++) keys.add(anchorKey(top + r, left + c));
-      this.repaint(keys);
-    }
+    // The shown sheet's changed cells, whichever sheet was written (formulas refer across sheets).
+    const shown = this.sheetId();
+    const keys = new Set<string>();
+    for (const a of changed) if (a.sheet === shown) keys.add(anchorKey(a.row, a.col));
+    if (id === shown) for (let r = 0; r < rows; r++) if (this.rendered.has(top + r)) for (let c = 0; c < cols; c++) keys.add(anchorKey(top + r, left + c));
+    if (keys.size > 0 || id === shown) this.repaint(keys);
     this.showSelection();
     this.lastWrite = { cells: rows * cols, changed: changed.length, engineMs: computed - started, paintMs: performance.now() - computed };
     this.changed();

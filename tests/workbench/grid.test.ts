@@ -261,6 +261,15 @@ describe("virtual rows", () => {
     expect(top).toBe(24 + 1999 * 22);
   });
 
+  it("repaints the shown sheet when a write to another sheet changes its values", async () => {
+    await page.click(".tabs button:has-text('Checks')");
+    await api("api.setFormula('Checks!H3', '=Study!E4*2')");
+    expect(await page.textContent('td[data-address="H3"]')).toBe("720");
+    await api("api.setValues('Study!E4', [[250]])");
+    expect(await page.textContent('td[data-address="H3"]')).toBe("500");
+    await api("api.setValues('Study!E4', [[360]])");
+  });
+
   it("grows the sheet to show a cell past its last row, when asked to reveal or select it", async () => {
     await page.click(".tabs button:has-text('Checks')");
     expect(await page.$('td[data-address="C300"]')).toBeNull();
