@@ -243,6 +243,20 @@ describe("rows", () => {
   });
 });
 
+describe("delete", () => {
+  it("empties a selected range with Delete, one undo step", async () => {
+    await page.click(".tabs button:has-text('Study')");
+    const before = await api<unknown[][]>("return api.getValues('Study!A6:F8')");
+    await page.fill("#name-box", "A6:F8");
+    await page.press("#name-box", "Enter");
+    await page.keyboard.press("Delete");
+    expect(await api("return api.getValues('Study!A6:F8').flat().every((v) => v === null)")).toBe(true);
+    expect(await page.textContent('td[data-address="B7"]')).toBe("");
+    await page.keyboard.press("Control+z");
+    expect(await api("return api.getValues('Study!A6:F8')")).toEqual(before);
+  });
+});
+
 describe("virtual rows", () => {
   it("keeps only the rows in view in the DOM, on a 2,000-row sheet", async () => {
     await page.click(".tabs button:has-text('Arrangements')");
