@@ -871,6 +871,7 @@ export class Workbench {
         y: () => this.redo(),
         d: () => this.fillDown(),
         r: () => this.fillRight(),
+        Home: () => this.select({ row: 0, col: 0 }),
         a: () => this.select({ row: 0, col: 0 }, { row: Math.max(0, this.book.dimensions(this.sheetId()).rows - 1), col: Math.max(0, this.book.dimensions(this.sheetId()).cols - 1) }),
         "+": () => this.insertRows(),
         "=": () => event.shiftKey && this.insertRows(),
@@ -883,7 +884,26 @@ export class Workbench {
       }
       return;
     }
-    const moves: Record<string, CellRef> = { ArrowUp: { row: -1, col: 0 }, ArrowDown: { row: 1, col: 0 }, ArrowLeft: { row: 0, col: -1 }, ArrowRight: { row: 0, col: 1 } };
+    const page = Math.max(1, Math.floor((this.el.sheet.clientHeight - HEADER_HEIGHT) / ROW_HEIGHT) - 1);
+    const moves: Record<string, CellRef> = {
+      ArrowUp: { row: -1, col: 0 },
+      ArrowDown: { row: 1, col: 0 },
+      ArrowLeft: { row: 0, col: -1 },
+      ArrowRight: { row: 0, col: 1 },
+      PageUp: { row: -page, col: 0 },
+      PageDown: { row: page, col: 0 },
+    };
+    const onGrid = document.activeElement === document.body || document.activeElement === null || this.el.sheet.contains(document.activeElement);
+    if (event.key === "Tab" && onGrid) {
+      event.preventDefault();
+      this.select({ row: this.selection.anchor.row, col: Math.max(0, this.selection.anchor.col + (event.shiftKey ? -1 : 1)) });
+      return;
+    }
+    if (event.key === "Home") {
+      event.preventDefault();
+      this.select({ row: this.selection.anchor.row, col: 0 });
+      return;
+    }
     const move = moves[event.key];
     const { anchor, focus } = this.selection;
     if (move) {
