@@ -73,6 +73,11 @@ describe("SpanWorkbook rows and reported changes", () => {
     expect(book.getValue(0, 3, 1)).toMatchObject({ error: "#REF!" });
   });
 
+  it("takes a leading apostrophe as text, kept in the input (what the grid's typed '5 relies on)", () => {
+    const book = new SpanWorkbook([{ name: "S", cells: [["'5", "'=A1"]] }]);
+    expect([book.getValue(0, 0, 0), book.getValue(0, 0, 1), book.getInput(0, 0, 0), book.getInput(0, 0, 1)]).toEqual(["5", "=A1", "'5", "'=A1"]);
+  });
+
   it("reports the cells a change reaches: the cell, its dependents and the spill anchor", () => {
     const book = new SpanWorkbook([{ name: "S", cells: [[3], ["=SEQUENCE(A1)"], [], [], [], ["=A1*2"]] }]);
     const changed = book.setCellsReporting(0, 0, 0, [[2]]).map((a) => `${a.row},${a.col}`);

@@ -52,6 +52,10 @@ describe("inputOf", () => {
     ["1,5", "1,5"],
     ["12 m", "12 m"],
     ["6 8 6", "6 8 6"],
+    ["1,234.5", "1,234.5"],
+    ["12%", "12%"],
+    ["'5", "'5"], // the engine shows the text 5 (tests/engine: apostrophe)
+    ["'=A1", "'=A1"],
   ];
   it.each(cases)("%p is %p", (text, input) => expect(inputOf(text)).toEqual(input));
 });
@@ -98,6 +102,10 @@ describe("viewport, widths, name box, history, hints", () => {
     expect(parseNameBox("'My sheet'!A1")).toMatchObject({ sheet: "My sheet" });
     expect(parseNameBox("B2:")).toMatch(/is not a cell or range/);
     expect(parseNameBox("")).toMatch(/type a cell/);
+    expect(parseNameBox("A0")).toMatch(/outside the sheet/);
+    expect(parseNameBox("XFE1")).toMatch(/outside the sheet/);
+    expect(parseNameBox("XFD1048576")).toMatchObject({ from: { row: 1048575, col: 16383 } });
+    expect(parseNameBox("A1048577")).toMatch(/outside the sheet/);
   });
 
   it("undoes and redoes in order, a new step clears the redo list, at most 100 kept", () => {

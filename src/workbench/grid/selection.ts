@@ -1,4 +1,5 @@
 /** Selected ranges: an anchor (the active cell) and a focus, on one sheet. */
+import { SHEET_LIMITS, columnLetters } from "../../engine";
 import { parseRange, type CellRef, type RangeRef } from "../addresses";
 
 export interface Selection {
@@ -42,9 +43,15 @@ export const MAX_BLOCK_CELLS = 1_000_000;
 export function parseNameBox(text: string): RangeRef | string {
   const trimmed = text.trim();
   if (trimmed === "") return "type a cell (B2) or a range (B2:D9), optionally with a sheet (Member!A1)";
+  let range: RangeRef;
   try {
-    return parseRange(trimmed);
+    range = parseRange(trimmed);
   } catch {
     return `"${trimmed}" is not a cell or range: type e.g. B2 or B2:D9`;
   }
+  const { from, to } = range;
+  if (from.row < 0 || to.row >= SHEET_LIMITS.rows || from.col < 0 || to.col >= SHEET_LIMITS.cols) {
+    return `"${trimmed}" is outside the sheet (rows 1 to ${SHEET_LIMITS.rows}, columns A to ${columnLetters(SHEET_LIMITS.cols - 1)})`;
+  }
+  return range;
 }
