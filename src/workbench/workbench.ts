@@ -76,6 +76,8 @@ export class Workbench {
   private copied: Copied | undefined;
   private drag: { kind: "select" | "fill"; target?: Block } | undefined;
   private nameBoxInput: HTMLInputElement | undefined;
+  /** The selected cell's input as the formula bar last showed it (an edit differs from it). */
+  private shownInput = "";
 
   constructor(
     private current: SpanWorkbook,
@@ -701,7 +703,8 @@ export class Workbench {
     const input = this.book.getInput(id, anchor.row, anchor.col);
     const spilledFrom = this.book.spillAnchorOf(id, anchor.row, anchor.col);
     const anchorFormula = spilledFrom ? this.book.getFormula(id, spilledFrom.row, spilledFrom.col) : undefined;
-    this.el.formulaBar.value = input === undefined || input === null ? "" : String(input);
+    this.shownInput = input === undefined || input === null ? "" : String(input);
+    this.el.formulaBar.value = this.shownInput;
     this.el.formulaBar.placeholder = spilledFrom ? `spilled from ${cellText(spilledFrom)}: ${anchorFormula ?? ""}` : "";
     const value = this.book.getValue(id, anchor.row, anchor.col);
     const here = cellText(anchor);
@@ -764,6 +767,11 @@ export class Workbench {
       }
       const ref = this.cellOf(target);
       if (!ref) return;
+      // An edit in progress in the formula bar is kept (committed in place) when another cell is clicked.
+      if (document.activeElement === this.el.formulaBar && this.el.formulaBar.value !== this.shownInput) {
+        const { anchor } = this.selection;
+        this.setBlock(this.activeSheet(), anchor, [[inputOf(this.el.formulaBar.value)]]);
+      }
       if (document.activeElement instanceof HTMLElement && this.editing()) document.activeElement.blur();
       if (event.shiftKey) this.select(this.selection.anchor, ref);
       else this.select(ref);

@@ -243,6 +243,18 @@ describe("rows", () => {
   });
 });
 
+describe("editing", () => {
+  it("keeps a formula-bar edit when another cell is clicked, as a spreadsheet commits it", async () => {
+    await page.click(".tabs button:has-text('Study')");
+    await click("H30");
+    await page.keyboard.type("42");
+    expect(await page.inputValue("#formula-bar")).toBe("42");
+    await click("H31");
+    expect(await api("return api.getValues('Study!H30:H31')")).toEqual([[42], [null]]);
+    expect(await api("return api.getSelection().activeCell")).toBe("H31");
+  });
+});
+
 describe("delete", () => {
   it("empties a selected range with Delete, one undo step", async () => {
     await page.click(".tabs button:has-text('Study')");
