@@ -1,9 +1,10 @@
 /**
  * Number display of the grid: up to 6 significant figures, never fewer integer digits than
  * the number has, E notation outside 1e-4 to 1e11, rounded to fit a narrow cell and ###
- * when nothing fits (the General-format behaviour of spreadsheets, Microsoft support,
- * "Available number formats in Excel": General rounds decimals to fit and uses scientific
- * notation for large numbers). Expected texts worked by hand.
+ * when nothing fits. Source for rounding to the column: Apache OpenOffice Wiki, "Calc/Features/
+ * Automatic decimal place adjustment" (cells in General format "use as many decimal places as
+ * the column width allows"); the 6-figure cap and the E thresholds are this project's choice.
+ * Expected texts worked by hand.
  */
 import { displayText, numberTexts } from "../../src/workbench/format";
 

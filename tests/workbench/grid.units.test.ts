@@ -1,8 +1,9 @@
 /**
  * The grid's pure parts: tab-separated clipboard text (the plain-text form spreadsheets put on
  * the clipboard: tabs between cells, CRLF between rows, cells with tabs, line breaks or quotes
- * in double quotes with quotes doubled, as in RFC 4180's quoting), typed input, fill tiling,
- * the row window, the history and the table hints.
+ * in double quotes with quotes doubled: DevExpress documentation, "SpreadsheetClipboardOptions.
+ * UnquoteTabDelimitedText": pasted tab-delimited `"A""B"` is the cell A"B), typed input, fill
+ * tiling, the row window, the history and the table hints.
  */
 import { SHEET_LIMITS } from "../../src/engine";
 import { parseTsv, toTsv } from "../../src/workbench/grid/clipboard";
@@ -25,6 +26,8 @@ describe("parseTsv", () => {
     ["a quote inside a cell is a character", 'a"b\tc', [['a"b', "c"]]],
     ["an unclosed quote is a character", '"abc', [['"abc']]],
     ["blank line in the middle", "1\r\n\r\n2", [["1"], [""], ["2"]]],
+    ["the documented doubled quote", '"A""B"\t123', [['A"B', "123"]]],
+    ["an odd quote still splits at the tab", '"A"B"\t123', [['"A"B"', "123"]]],
   ];
   it.each(cases)("%s", (_, text, rows) => expect(parseTsv(text)).toEqual(rows));
 
