@@ -24,6 +24,12 @@ const MIN_ROWS = 40;
 const MIN_COLS = 12;
 const EXTRA_ROWS = 10;
 const EXTRA_COLS = 3;
+/**
+ * The most columns the grid shows (A to SR): rows are virtual, columns are not, so a selection
+ * or block reaching column XFD does not put 16,384 cells a row into the page. Cells further
+ * right still compute and are read and written through formulas and the API.
+ */
+export const MAX_SHOWN_COLS = 512;
 const GRID_FONT = "13px system-ui, sans-serif";
 
 export interface WorkbenchElements {
@@ -170,8 +176,9 @@ export class Workbench {
     const view = this.el.sheet;
     const top = scrollFor(ref.row, view.scrollTop, view.clientHeight);
     if (top !== undefined) view.scrollTop = top;
-    const left = ROW_HEADER_WIDTH + this.columnLeft(ref.col);
-    const right = left + this.width(ref.col);
+    const col = Math.min(ref.col, this.totalCols - 1);
+    const left = ROW_HEADER_WIDTH + this.columnLeft(col);
+    const right = left + this.width(col);
     if (left - ROW_HEADER_WIDTH < view.scrollLeft) view.scrollLeft = left - ROW_HEADER_WIDTH;
     else if (right > view.scrollLeft + view.clientWidth) view.scrollLeft = right - view.clientWidth;
     this.renderWindow();
@@ -516,6 +523,7 @@ export class Workbench {
   }
 
   private ensureSize(rows: number, cols: number): void {
+    cols = Math.min(cols, MAX_SHOWN_COLS);
     if (rows > this.totalRows || cols > this.totalCols) {
       const grewCols = cols > this.totalCols;
       this.totalRows = Math.max(this.totalRows, rows);
@@ -531,7 +539,7 @@ export class Workbench {
     const used = this.book.dimensions(id);
     const { anchor, focus } = this.selection;
     this.totalRows = Math.max(MIN_ROWS, used.rows + EXTRA_ROWS, anchor.row + 1, focus.row + 1);
-    this.totalCols = Math.max(MIN_COLS, used.cols + EXTRA_COLS, anchor.col + 1, focus.col + 1);
+    this.totalCols = Math.min(MAX_SHOWN_COLS, Math.max(MIN_COLS, used.cols + EXTRA_COLS, anchor.col + 1, focus.col + 1));
     if (!this.columns.has(this.activeSheet())) this.guessWidths(used.rows, used.cols);
     this.layoutColumns();
     this.renderWindow(true);
@@ -542,7 +550,7 @@ export class Workbench {
     const sheet = this.activeSheet();
     const id = this.sheetId();
     this.columns.touch(sheet);
-    for (let c = 0; c < cols; c++) {
+    for (let c = 0; c < Math.min(cols, MAX_SHOWN_COLS); c++) {
       let widest = 0;
       for (let r = 0; r < Math.min(rows, 200); r++) {
         const value = this.book.getValue(id, r, c);
@@ -634,7 +642,7 @@ export class Workbench {
   /** Paints again the rendered cells with these keys, and the rendered cells of spills anchored at them. */
   private repaint(keys: Set<string>): void {
     const used = this.book.dimensions(this.sheetId());
-    if (used.rows + EXTRA_ROWS > this.totalRows || used.cols + EXTRA_COLS > this.totalCols) {
+    if (used.rows + EXTRA_ROWS > this.totalRows || Math.min(MAX_SHOWN_COLS, used.cols + EXTRA_COLS) > this.totalCols) {
       this.ensureSize(used.rows + EXTRA_ROWS, used.cols + EXTRA_COLS);
     }
     const context = this.paintContext();

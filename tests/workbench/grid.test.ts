@@ -319,5 +319,11 @@ describe("virtual rows", () => {
     await page.fill("#name-box", "D900");
     await page.press("#name-box", "Enter");
     expect(await page.getAttribute('td[data-address="D900"]', "class")).toContain("selected");
+    // The whole sheet selected: rows stay virtual, columns stop at 512 (no 16,384 cells a row).
+    await page.fill("#name-box", "A1:XFD1048576");
+    await page.press("#name-box", "Enter");
+    expect(await page.$$eval("#sheet thead th.col", (th) => th.length)).toBe(512);
+    expect(await page.$$eval("#sheet tbody tr:not(.spacer)", (rows) => rows.length)).toBeLessThan(70);
+    expect(await page.$('td[data-address="A1048576"]')).not.toBeNull();
   });
 });
