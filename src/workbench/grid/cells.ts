@@ -54,7 +54,7 @@ export function paintCell(td: HTMLTableCellElement, context: PaintContext, row: 
   if (anchor) className += " anchor";
   if (isCellError(value)) className += " error";
   // Text runs on over an empty neighbour, as in a spreadsheet (numbers never do: they fit or show ###).
-  if (typeof value === "string" && value !== "" && isBlank(book, sheet, row, col + 1)) className += " overflow";
+  if (typeof value === "string" && value !== "" && context.textWidth(value) > room && isBlank(book, sheet, row, col + 1)) className += " overflow";
   td.className = className.trim();
   if (spilledFrom) td.dataset.anchor = anchorKey(spilledFrom.row, spilledFrom.col);
   else if (anchor) td.dataset.anchor = anchorKey(row, col);
