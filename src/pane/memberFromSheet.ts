@@ -116,6 +116,17 @@ function unitsOf(arg: unknown): Units {
   }
 }
 
+/**
+ * One argument's values as a worksheet function would receive them: a range, spill or name is
+ * read through the host, a literal or array constant taken as written, a skipped one is null.
+ * Rejects for an expression the pane cannot work out, a missing name or a range that does not spill.
+ */
+export async function argumentValue(host: SheetHost, source: ArgSource | undefined, sheet: string): Promise<{ value: unknown; range?: string }> {
+  if (source === undefined) return { value: null };
+  const range = await rangeOf(host, source, sheet);
+  return range !== undefined ? { value: await host.getValues(range), range } : { value: literalValue(source) };
+}
+
 /** Reads every member argument's values through the host and builds the resolved member. */
 export async function resolveSources(host: SheetHost, sheet: string, cell: string, sources: MemberSources, call?: SpanCall): Promise<Lookup> {
   const ranges: Partial<Record<MemberArgument, string>> = {};

@@ -30,7 +30,7 @@ export type ExcelRun = <T>(batch: (context: Excel.RequestContext) => Promise<T>)
 /** The parts of `Office` the host uses (typed from office.js so the requirement-set check sees them). */
 export interface OfficeLike {
   context: {
-    document: Pick<Office.Document, "addHandlerAsync" | "removeHandlerAsync">;
+    document: Pick<Office.Document, "addHandlerAsync" | "removeHandlerAsync"> & { settings?: Pick<Office.Settings, "get" | "set" | "saveAsync"> };
     officeTheme?: Pick<Office.OfficeTheme, "bodyBackgroundColor">;
     requirements?: Pick<Office.RequirementSetSupport, "isSetSupported">;
   };
@@ -376,6 +376,33 @@ export class OfficeHost implements SheetHost {
     };
     this.office.context.document.addHandlerAsync(type, handler);
     return () => this.office.context.document.removeHandlerAsync(type, { handler });
+  }
+
+  /** A document setting of this add-in (Office.Settings.get: the in-memory copy loaded with the document). */
+  async readSetting(name: string): Promise<unknown> {
+    this.need(OPTIONAL.settings);
+    const settings = this.office.context.document.settings;
+    if (!settings) throw new SheetHostError(missingSetMessage(OPTIONAL.settings), "RequirementNotMet");
+    const value: unknown = settings.get(name);
+    return value === null ? undefined : value;
+  }
+
+  /**
+   * Sets a document setting and saves it into the workbook: `set` changes only the in-memory
+   * copy, and "the developer is responsible for calling the saveAsync method"
+   * (https://learn.microsoft.com/javascript/api/office/office.settings). A failed save rejects.
+   */
+  async writeSetting(name: string, value: unknown): Promise<void> {
+    this.need(OPTIONAL.settings);
+    const settings = this.office.context.document.settings;
+    if (!settings) throw new SheetHostError(missingSetMessage(OPTIONAL.settings), "RequirementNotMet");
+    settings.set(name, value);
+    await new Promise<void>((resolve, reject) => {
+      settings.saveAsync((result) => {
+        if (String(result.status) === "succeeded") resolve();
+        else reject(new SheetHostError(`Excel did not save the setting in the workbook: ${result.error?.message ?? "no reason given"}`, "SaveFailed"));
+      });
+    });
   }
 
   theme(): "light" | "dark" | undefined {

@@ -20,7 +20,9 @@ import { chartRequests, diagramRows, planTable, tableInPlace, writeTable } from 
 import { DEFAULT_POINTS, describeError } from "../sheet";
 import { NO_UNITS, type Units } from "./units";
 
-export const CAUTION = "Results are an aid to a qualified engineer, who checks them; local codes and licensed practice govern.";
+import { CAUTION } from "./caution";
+
+export { CAUTION };
 
 export interface PaneElements {
   root: HTMLElement;

@@ -26,6 +26,12 @@ export class WorkbenchHost implements SheetHost {
   readonly kind = "workbench";
   /** True while this host writes into the workbench (see onSelectionChange). */
   private writing = false;
+  /**
+   * The workbench's equivalent of the document settings: kept beside its in-page workbook for
+   * as long as the page holds it (the workbench has no add-in settings of its own). Values are
+   * stored as JSON text, so what is read back is a copy, as a host's settings would be.
+   */
+  private readonly settings = new Map<string, string>();
   constructor(private readonly api: WorkbenchLike) {}
 
   private write(address: string, block: CellInput[][]): void {
@@ -141,5 +147,14 @@ export class WorkbenchHost implements SheetHost {
 
   theme(): "light" | "dark" | undefined {
     return undefined;
+  }
+
+  async readSetting(name: string): Promise<unknown> {
+    const text = this.settings.get(name);
+    return text === undefined ? undefined : JSON.parse(text);
+  }
+
+  async writeSetting(name: string, value: unknown): Promise<void> {
+    this.settings.set(name, JSON.stringify(value));
   }
 }
