@@ -146,11 +146,16 @@ function addinConfig(env, argv) {
 function paneConfig(env, argv) {
   const hosting = hostingOf(env);
   const base = common(env, argv, "es2017");
+  // ES modules in the pane, so that `import()` of the PDF writer stays a chunk of its own
+  // (report-pdf.js, with pdf-lib), loaded only when a PDF report is made.
+  base.module.rules[0].use.options.compilerOptions.module = "es2020";
   return {
     ...base,
     name: "pane",
     entry: { taskpane: "./src/pane/taskpane.ts" },
-    output: { ...base.output, filename: "[name].js" },
+    output: { ...base.output, filename: "[name].js", chunkFilename: "[name].js" },
+    // One entry: no shared chunks to split out; the PDF writer and pdf-lib stay one file.
+    optimization: { splitChunks: false },
     plugins: [new HtmlWebpackPlugin({ filename: "taskpane.html", template: "./src/pane/taskpane.html", chunks: ["taskpane"] }), new HostingPlugin(hosting)],
   };
 }

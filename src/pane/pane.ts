@@ -19,6 +19,7 @@ import { cellMessage } from "./cellMessage";
 import { chartRequests, diagramRows, planTable, tableInPlace, writeTable } from "./writeBack";
 import { DEFAULT_POINTS, describeError } from "../sheet";
 import { NO_UNITS, type Units } from "./units";
+import { REPORT_HTML, ReportPanel } from "./reportPanel";
 
 import { CAUTION } from "./caution";
 
@@ -60,6 +61,7 @@ export const PANE_HTML = `
   <button type="button" class="export-svg">Export SVG</button>
   <button type="button" class="export-png">Export PNG</button>
 </div>
+<div class="report-area" hidden>${REPORT_HTML}</div>
 <div class="confirm" role="alertdialog" hidden><p></p><button type="button" class="confirm-yes">Write anyway</button> <button type="button" class="confirm-no">Cancel</button></div>
 `;
 
@@ -77,6 +79,9 @@ export class Pane {
   private unsubscribe: (() => void) | undefined;
   /** Milliseconds the last redraw took (solve, diagram, SVG, into the page). */
   lastDrawMs = 0;
+  /** The formula text of the drawn cell (for its report). */
+  private formulaText = "";
+  readonly report: ReportPanel;
 
   constructor(
     private readonly host: SheetHost,
@@ -86,6 +91,13 @@ export class Pane {
     root.classList.add("spanwise-pane");
     root.innerHTML = PANE_HTML;
     el(root, ".host-kind").textContent = `(${host.kind})`;
+    this.report = new ReportPanel(
+      host,
+      root,
+      () => (this.resolved ? { member: this.resolved, formula: this.resolved.call ? this.formulaText : "(input ranges picked in the pane)" } : undefined),
+      (text, kind) => this.outcome(text, kind),
+      download,
+    );
     this.bind();
   }
 
@@ -154,6 +166,7 @@ export class Pane {
         if (lookup.reason === "unresolved") this.showPick(lookup.call.args as Partial<MemberSources>, lookup.unresolved);
         return;
       }
+      this.formulaText = selection.formula;
       this.use(lookup.member);
       const why = await cellMessage(this.host, selection);
       if (generation !== this.generation) return;
@@ -176,6 +189,7 @@ export class Pane {
       : "no units argument: values in the member's own consistent units";
     this.fillCombos(member);
     el(this.root, ".controls").hidden = false;
+    el(this.root, ".report-area").hidden = false;
     this.redraw();
   }
 
