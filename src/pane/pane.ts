@@ -8,6 +8,7 @@ import { debounce } from "./debounce";
 import { drawDiagrams, type Drawing } from "./draw/diagramSvg";
 import { escapeXml, formatValue } from "./draw/format";
 import { drawEnvelope, drawInfluence, drawMoving, type Figure } from "./draw/studySvg";
+import { drawModes } from "./draw/modeSvg";
 import { computeStudy, envelopeAt, influenceAt, type Study } from "./study";
 import type { Theme } from "./draw/palette";
 import { readoutAt, readoutText, xAtPixel } from "./draw/readout";
@@ -294,6 +295,9 @@ export class Pane {
       this.drawing = drawInfluence({ member: study.member, effect: study.effect, xs: study.xs, values: study.values, theme, width, subtitle: `${name}: ${study.effect}` });
     } else if (study.kind === "moving") {
       this.drawing = drawMoving({ member: study.member, effect: study.effect, placements: study.placements, line: study.line, theme, width, subtitle: `${name}: the train's extremes of ${study.effect}` });
+    } else if (study.kind === "vibration") {
+      const more = study.listed > study.modes.length ? `, first ${study.modes.length} of ${study.listed} modes` : "";
+      this.drawing = drawModes({ member: study.member, modes: study.modes, theme, width, subtitle: `${name}: natural modes${more}; vibration acceptance is the governing guide's and the engineer's call` });
     } else return performance.now() - started;
     figure.innerHTML = this.drawing.svg;
     el(this.root, ".actions").hidden = false;

@@ -158,3 +158,28 @@ describe("the member report from the pane, on the workbench", () => {
     expect(downloads).toBe(0);
   });
 });
+
+describe("mode shapes and rotational springs in the pane, on the workbench", () => {
+  it("draws a FREQUENCIES cell's modes, each panel titled with the frequency the cell lists", async () => {
+    await workbench("api.setFormula('Member!M70', '=SPAN.FREQUENCIES(B3:C3,B5,0.5,3,B4:D4)')");
+    const listed = await workbench<number[][]>("return api.getValues('Member!M70:O72')");
+    await clickCell("Member", "M70");
+    await page.waitForSelector(".figure svg[data-kind='modes']");
+    const panels = await page.$$eval(".figure svg g.panel[data-mode]", (g) => g.map((n) => [Number(n.getAttribute("data-mode")), Number(n.getAttribute("data-hz"))]));
+    expect(panels).toEqual(listed.map((row) => [row[0], row[1]]));
+    expect(await page.$$eval(".figure svg path.curve.mode", (p) => p.length)).toBe(3);
+    expect(await page.textContent("#pane .figure svg .subtitle")).toMatch(/natural modes/);
+  });
+
+  it("draws each rotational spring's coil and its moment on the moment diagram", async () => {
+    await workbench("api.setValues('Member!M80:O80', [['pin+rot 8000', 'pin', 'spring 900 rot 3000']])");
+    await workbench("api.setFormula('Member!M82', '=SPAN.REACTIONS(B3:C3,A10:F14,M80:O80,B5,B6)')");
+    const moments = await workbench<number[][]>("return api.getValues('Member!O82:O84')");
+    await clickCell("Member", "M82");
+    await page.waitForSelector(".figure svg g.support.rotational");
+    expect(await page.$$eval(".figure svg g.support.rotational", (g) => g.map((n) => Number(n.getAttribute("data-k"))))).toEqual([8000, 3000]);
+    const marks = await page.$$eval(".figure svg g.spring-moment", (g) => g.map((n) => [Number(n.getAttribute("data-node")), Number(n.getAttribute("data-moment"))]));
+    expect(marks).toEqual([[1, moments[0][0]], [3, moments[2][0]]]);
+    await (await page.$("#pane"))?.screenshot({ path: path.join(ARTIFACTS, "pane-rotational-springs.png") });
+  });
+});
