@@ -142,6 +142,14 @@ function addinConfig(env, argv) {
   };
 }
 
+/** Packages bundled into the pane's PDF chunk besides pdf-lib, with their licence files. */
+const pdfLicences = [
+  ["@pdf-lib/standard-fonts", "@pdf-lib/standard-fonts/LICENSE.md"],
+  ["@pdf-lib/upng", "@pdf-lib/upng/LICENSE"],
+  ["pako", "pako/LICENSE"],
+  ["tslib", "pdf-lib/node_modules/tslib/LICENSE.txt"],
+];
+
 /** The diagram pane, the page the manifest's DefaultSettings names. */
 function paneConfig(env, argv) {
   const hosting = hostingOf(env);
@@ -156,7 +164,23 @@ function paneConfig(env, argv) {
     output: { ...base.output, filename: "[name].js", chunkFilename: "[name].js" },
     // One entry: no shared chunks to split out; the PDF writer and pdf-lib stay one file.
     optimization: { splitChunks: false },
-    plugins: [new HtmlWebpackPlugin({ filename: "taskpane.html", template: "./src/pane/taskpane.html", chunks: ["taskpane"] }), new HostingPlugin(hosting)],
+    plugins: [
+      new HtmlWebpackPlugin({ filename: "taskpane.html", template: "./src/pane/taskpane.html", chunks: ["taskpane"] }),
+      // report-pdf.js bundles pdf-lib and what it brings: their licence notices ship beside it.
+      new CopyWebpackPlugin({
+        patterns: [
+          {
+            from: path.join(root, "node_modules", "pdf-lib", "LICENSE.md"),
+            to: "report-pdf.js.LICENSE.txt",
+            transform: (content) =>
+              [["pdf-lib", content.toString()], ...pdfLicences.map(([name, file]) => [name, fs.readFileSync(path.join(root, "node_modules", file), "utf8")])]
+                .map(([name, text]) => `${name}\n\n${text.trim()}\n`)
+                .join("\n----\n\n"),
+          },
+        ],
+      }),
+      new HostingPlugin(hosting),
+    ],
   };
 }
 
