@@ -82,6 +82,7 @@ describe("the member report from the pane, on the workbench", () => {
     await page.fill("#pane .title-block input[name='job']", "J-2026-17");
     await page.fill("#pane .title-block input[name='mark']", "B-211");
     await page.fill("#pane .title-block input[name='by']", "AE");
+    await (await page.$("#pane"))?.screenshot({ path: path.join(ARTIFACTS, "pane-report.png") });
     await page.click("#pane .title-keep");
     await page.waitForFunction(() => document.querySelector("#pane .outcome")?.textContent === "Title block kept in the workbook.");
     await page.click("#pane .edit-title");
