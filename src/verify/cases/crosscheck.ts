@@ -13,7 +13,7 @@
  * as the exact audit judges. The members are the named ones below and a seeded set
  * (SEEDED_COUNT members from SEED, a fixed generator here, so the list never changes unseen).
  */
-import { checkStability, validateMember, type Load, type Member, type Quantity, type Support } from "../../core";
+import { checkStability, maxOf, validateMember, type Load, type Member, type Quantity, type Support } from "../../core";
 import { beam, couple, linear, nodesOf, point, scalesOf, udl, type SupportWord } from "../members";
 import { exactForceMethodSolve, type ExactSolution } from "../reference/exactForceMethod";
 import type { Check } from "../compare";
@@ -120,9 +120,9 @@ function checksOf(m: Member, ref: ExactSolution, index: number): Check[] {
   const physical = scalesOf(m);
   const xs = stations(m, index);
   const values = new Map(QUANTITIES.map((q) => [q, xs.map((x) => ref.at(q, x))]));
-  const own = (q: Quantity): number => Math.max(FLOOR * physical[q], ...values.get(q)!.map(Math.abs));
-  const force = Math.max(FLOOR * physical.force, ...ref.reactions.map((r) => Math.abs(r.force)));
-  const moment = Math.max(FLOOR * physical.moment, ...ref.reactions.map((r) => Math.abs(r.moment)));
+  const own = (q: Quantity): number => maxOf(values.get(q)!.map(Math.abs), FLOOR * physical[q]);
+  const force = maxOf(ref.reactions.map((r) => Math.abs(r.force)), FLOOR * physical.force);
+  const moment = maxOf(ref.reactions.map((r) => Math.abs(r.moment)), FLOOR * physical.moment);
   const checks: Check[] = ref.reactions.map((r, i) => ({ reaction: i, force: r.force, moment: r.moment, scale: { force, moment } }));
   for (const q of QUANTITIES) {
     if (q !== "shear" && q !== "moment" && m.stiffness === null) continue;
