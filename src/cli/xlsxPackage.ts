@@ -36,6 +36,8 @@ export interface DefinedName {
 
 export class PackageError extends Error {}
 
+const ZIP_OPTIONS = { compression: "DEFLATE", compressionOptions: { level: 6 } } as const;
+
 /** Each tag of an XML part, in order (start tags with their text, end tags flagged). */
 function* tags(xml: string): Generator<{ tag: string; at: number; close: number }> {
   let i = 0;
@@ -83,7 +85,8 @@ export class XlsxPackage {
     readonly workbookRels: Relationship[],
   ) {}
 
-  static async open(bytes: Buffer): Promise<XlsxPackage> {
+  /** Opens a package from its bytes (a Buffer in Node, any Uint8Array in a browser). */
+  static async open(bytes: Uint8Array): Promise<XlsxPackage> {
     let zip: JSZip;
     try {
       zip = await JSZip.loadAsync(bytes, { checkCRC32: true });
@@ -231,6 +234,11 @@ export class XlsxPackage {
   }
 
   async write(): Promise<Buffer> {
-    return this.zip.generateAsync({ type: "nodebuffer", compression: "DEFLATE", compressionOptions: { level: 6 } });
+    return this.zip.generateAsync({ type: "nodebuffer", ...ZIP_OPTIONS });
+  }
+
+  /** The package's bytes where there is no Buffer (a browser), compressed as write() does. */
+  async bytes(): Promise<Uint8Array> {
+    return this.zip.generateAsync({ type: "uint8array", ...ZIP_OPTIONS });
   }
 }
