@@ -99,6 +99,12 @@ describe("autosave", () => {
   });
   const snapshot = (n: number) => ({ name: `v${n}` }) as unknown as StoredWork;
 
+  it("saves nothing when nothing changed (leaving the page stores no stale state over newer work)", async () => {
+    stored.length = 0;
+    await new Autosave(store(), () => snapshot(1), () => undefined).flush();
+    expect(stored).toEqual([]);
+  });
+
   it("saves once after a burst of changes, the last state", async () => {
     stored.length = 0;
     const states: SaveState["kind"][] = [];
@@ -116,6 +122,7 @@ describe("autosave", () => {
     const quota = Object.assign(new Error("The quota has been exceeded."), { name: "QuotaExceededError" });
     const states: SaveState[] = [];
     const autosave = new Autosave(store(() => quota), () => snapshot(1), (s) => states.push(s), undefined, 1);
+    autosave.changed();
     await autosave.flush();
     const last = states[states.length - 1];
     expect(last.kind).toBe("failed");
@@ -125,7 +132,9 @@ describe("autosave", () => {
 
   it("says why when there is no storage at all", async () => {
     const states: SaveState[] = [];
-    await new Autosave(undefined, () => snapshot(1), (s) => states.push(s), "no browser storage for this page (blocked)").flush();
-    expect(states).toEqual([{ kind: "failed", reason: "no browser storage for this page (blocked)" }]);
+    const autosave = new Autosave(undefined, () => snapshot(1), (s) => states.push(s), "no browser storage for this page (blocked)");
+    autosave.changed();
+    await autosave.flush();
+    expect(states).toEqual([{ kind: "pending" }, { kind: "failed", reason: "no browser storage for this page (blocked)" }]);
   });
 });

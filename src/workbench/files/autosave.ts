@@ -33,6 +33,8 @@ export class Autosave {
   private timer: ReturnType<typeof setTimeout> | undefined;
   private running: Promise<void> | undefined;
   private again = false;
+  /** A change not stored yet. */
+  private pending = false;
 
   constructor(
     private readonly store: WorkStore | undefined,
@@ -45,15 +47,17 @@ export class Autosave {
 
   /** Something changed: save a moment from now. */
   changed(): void {
+    this.pending = true;
     this.onState({ kind: "pending" });
     if (this.timer !== undefined) clearTimeout(this.timer);
     this.timer = setTimeout(() => void this.flush(), this.delay);
   }
 
-  /** Saves now (and waits for it); resolves when the last state is stored or has failed. */
+  /** Saves a pending change now (and waits for it); resolves when the last state is stored or has failed. */
   async flush(): Promise<void> {
     if (this.timer !== undefined) clearTimeout(this.timer);
     this.timer = undefined;
+    if (!this.pending && !this.running) return;
     if (this.running) {
       this.again = true;
       return this.running;
@@ -72,14 +76,17 @@ export class Autosave {
 
   private async run(): Promise<void> {
     if (!this.store) {
+      this.pending = false;
       this.onState({ kind: "failed", reason: this.noStore });
       return;
     }
+    this.pending = false;
     this.onState({ kind: "saving" });
     try {
       await this.store.save(this.snapshot());
       this.onState({ kind: "saved", at: new Date() });
     } catch (error) {
+      this.pending = true;
       this.onState({ kind: "failed", reason: storageProblem(error) });
     }
   }

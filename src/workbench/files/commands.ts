@@ -147,6 +147,7 @@ export class FilesCommands {
     this.show(doc);
     this.unsavedToFile = false;
     this.ui.message(note);
+    this.autosave.changed();
     await this.autosave.flush();
   }
 
@@ -194,6 +195,7 @@ export class FilesCommands {
       this.ui.download(name, bytes);
       this.unsavedToFile = false;
       this.ui.message(`Saved ${name} (${Math.ceil(bytes.byteLength / 1024)} KB) to your downloads.`);
+      this.autosave.changed();
       await this.autosave.flush();
     } catch (error) {
       this.ui.message(`Cannot save: ${reasonOf(error)}`, "error");
