@@ -4,6 +4,7 @@
  * damage is refused with a message naming the field, never half-applied.
  */
 import { OPEN_LIMITS } from "../../src/workbench/files/limits";
+import { openStore, storageProblem } from "../../src/workbench/files/store";
 import { decodeWork, encodeWorkText, fromBase64, StoredDataError, toBase64, type StoredWork } from "../../src/workbench/files/storedWork";
 
 function work(overrides: Partial<StoredWork> = {}): StoredWork {
@@ -73,5 +74,43 @@ describe("stored work", () => {
     expect(() => decodeWork(many)).toThrow(/not a list/);
     const long = { ...work(), changes: new Array(OPEN_LIMITS.cells + 1).fill([0, 0, 0, 1]) };
     expect(() => decodeWork(long)).toThrow(/at most 300000 cells/);
+  });
+});
+
+describe("the localStorage store (where IndexedDB is unavailable)", () => {
+  class FakeStorage {
+    readonly items = new Map<string, string>();
+    constructor(private readonly quota = Infinity) {}
+    getItem(key: string): string | null {
+      return this.items.get(key) ?? null;
+    }
+    setItem(key: string, value: string): void {
+      if (value.length > this.quota) throw Object.assign(new Error("Setting the value exceeded the quota."), { name: "QuotaExceededError" });
+      this.items.set(key, value);
+    }
+    removeItem(key: string): void {
+      this.items.delete(key);
+    }
+  }
+
+  it("keeps the record as text that decodes to the same work, sets unreadable records aside and clears", async () => {
+    const storage = new FakeStorage();
+    const store = await openStore({ localStorage: storage as unknown as Storage });
+    expect(store.kind).toBe("localStorage");
+    expect(await store.load()).toBeUndefined();
+    const record = work({ origin: { kind: "file", bytes: new Uint8Array([80, 75, 3, 4, 1, 2, 3]) } });
+    await store.save(record);
+    expect(decodeWork(await store.load())).toEqual(record);
+    await store.setAside("garbage");
+    expect(storage.getItem("spanwise-workbench:unreadable")).toBe("garbage");
+    await store.clear();
+    expect(await store.load()).toBeUndefined();
+  });
+
+  it("reports a full quota as a sentence, and no storage at all as a failure to open", async () => {
+    const store = await openStore({ localStorage: new FakeStorage(10) as unknown as Storage });
+    const error = await store.save(work()).catch((e: unknown) => e);
+    expect(storageProblem(error)).toBe("the browser's storage for this page is full (free space, or save the workbook as a file)");
+    await expect(openStore({})).rejects.toThrow(/no browser storage for this page/);
   });
 });
