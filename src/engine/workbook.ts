@@ -347,6 +347,12 @@ export class SpanWorkbook {
   }
 }
 
+function plain(value: unknown): CellResult {
+  if (value instanceof DetailedCellError) return { error: value.value, message: value.message ?? "" };
+  if (value === undefined) return null;
+  return value as CellResult;
+}
+
 /** A sheet name as formulas write it: bare when it is a plain name, else quoted ('it''s'). */
 export function quoteSheetName(name: string): string {
   return /^[A-Za-z_][\w.]*$/.test(name) ? name : `'${name.replace(/'/g, "''")}'`;
@@ -364,10 +370,4 @@ export function renameSheetReferences(formula: string, from: string, to: string)
       return name.toLowerCase() === wanted ? `${before}${quoteSheetName(to)}!` : whole;
     }),
   );
-}
-
-function plain(value: unknown): CellResult {
-  if (value instanceof DetailedCellError) return { error: value.value, message: value.message ?? "" };
-  if (value === undefined) return null;
-  return value as CellResult;
 }
