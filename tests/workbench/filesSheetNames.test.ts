@@ -6,6 +6,8 @@
  * "Worksheet.Name" (third-party documentation); "History": third-party pages, not the host's
  * documentation.
  */
+import { SpanWorkbook } from "../../src/engine";
+import { renameSheetReferences } from "../../src/engine/workbook";
 import { MAX_SHEET_NAME, nextSheetName, sheetNameProblem } from "../../src/workbench/files/sheetNames";
 
 const EXISTING = ["Schedule", "Member", "Level 2"];
@@ -56,5 +58,38 @@ describe("sheet names", () => {
     expect(nextSheetName(["Sheet1"])).toBe("Sheet2");
     expect(nextSheetName(["A", "sheet3"])).toBe("Sheet4");
     for (const names of [[], ["Sheet1"], ["A", "sheet3"], EXISTING]) expect(sheetNameProblem(nextSheetName(names), names)).toBeUndefined();
+  });
+});
+
+describe("references that follow a renamed sheet", () => {
+  it.each([
+    ["=Beam!A1+1", "Beam", "Level 2", "='Level 2'!A1+1"],
+    ["=beam!A1+BEAM!B2", "Beam", "Girder", "=Girder!A1+Girder!B2"],
+    ["='Level 2'!A1*2", "level 2", "L2", "=L2!A1*2"],
+    ["='it''s'!A1", "it's", "ok", "=ok!A1"],
+    ["=Beams!A1+XBeam!A1+Beam.2!A1", "Beam", "New", "=Beams!A1+XBeam!A1+Beam.2!A1"],
+    ['=Beam!A1&"Beam!A1"', "Beam", "B 2", '=\'B 2\'!A1&"Beam!A1"'],
+    ["=SUM(Beam!A1:A3,Other!B1)", "Beam", "it's", "=SUM('it''s'!A1:A3,Other!B1)"],
+    ["Beam!$C$1", "Beam", "Level 2 beam", "'Level 2 beam'!$C$1"],
+  ])("%s, %s -> %s: %s", (formula, from, to, expected) => {
+    expect(renameSheetReferences(formula, from, to)).toBe(expected);
+  });
+
+  it("rewrites formulas the engine keeps as typed (a spill reference) when their sheet is renamed", () => {
+    const book = new SpanWorkbook([
+      { name: "Source", cells: [["=SEQUENCE(3)"]] },
+      { name: "Use", cells: [["=SUM(Source!A1#)"]] },
+    ]);
+    expect(book.getValue(1, 0, 0)).toBe(6);
+    book.renameSheet(0, "New source");
+    expect(book.getFormula(1, 0, 0)).toBe("=SUM('New source'!A1#)");
+    book.setCell(0, 0, 0, "=SEQUENCE(4)");
+    expect(book.getValue(1, 0, 0)).toBe(10);
+    expect(book.sheetInputs(1)).toEqual([["=SUM('New source'!A1#)"]]);
+    expect(book.sheetInputs(0)).toEqual([["=SEQUENCE(4)"], [], [], []]);
+    expect(() => book.renameSheet(1, "new SOURCE")).toThrow(/cannot be renamed/);
+    expect(book.addSheet("Third")).toBe(2);
+    expect(() => book.addSheet("third")).toThrow(/cannot be added/);
+    book.destroy();
   });
 });

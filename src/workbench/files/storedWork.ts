@@ -107,10 +107,18 @@ function checkOrigin(value: unknown): Origin {
   return fail(`the origin kind ${JSON.stringify(value.kind)} is not "file" or "sheets"`);
 }
 
+/**
+ * Stored sheet names: distinct (in any case), not blank, at most 255 characters. Looser than
+ * the rename rules (sheetNames.ts): a file written elsewhere may hold names the host's own
+ * rename dialog would refuse, and its work must restore all the same.
+ */
 function checkNames(names: readonly string[], what: string): void {
+  const seen = new Set<string>();
   names.forEach((name, i) => {
-    const problem = sheetNameProblem(name, names.slice(0, i));
-    if (problem) fail(`${what} sheet ${i + 1} ("${name.slice(0, 40)}"): ${problem}`);
+    const where = `${what} sheet ${i + 1} ("${name.slice(0, 40)}")`;
+    if (name.trim() === "" || name.length > 255) fail(`${where}: a stored sheet name is 1 to 255 characters, not blank`);
+    if (seen.has(name.toLowerCase())) fail(`${where}: ${sheetNameProblem(name, names.slice(0, i)) ?? "the name is taken"}`);
+    seen.add(name.toLowerCase());
   });
 }
 
