@@ -6,7 +6,8 @@
  * reported in the save state, never silently.
  */
 import { Autosave, saveStateText, type SaveState } from "../../src/workbench/files/autosave";
-import { WorkbenchDocument } from "../../src/workbench/files/document";
+import JSZip from "jszip";
+import { declaredUnpackedSize, WorkbenchDocument } from "../../src/workbench/files/document";
 import { LimitError, OPEN_LIMITS } from "../../src/workbench/files/limits";
 import { storageProblem, type WorkStore } from "../../src/workbench/files/store";
 import { decodeWork, encodeWorkText, type StoredWork } from "../../src/workbench/files/storedWork";
@@ -78,6 +79,15 @@ describe("the workbench document", () => {
     const row = new Array(1000).fill(1);
     const cells = Array.from({ length: OPEN_LIMITS.cells / 1000 + 1 }, () => row);
     expect(() => WorkbenchDocument.fromSheets("many.xlsx", [{ name: "A", cells }])).toThrow(/301,000 non-empty cells; the workbench opens at most 300,000/);
+  });
+
+  it("reads the unpacked size the zip declares (what the unpacked-size limit is checked against)", async () => {
+    const bytes = await smallBook();
+    const zip = await JSZip.loadAsync(bytes);
+    let total = 0;
+    for (const file of Object.values(zip.files)) if (!file.dir) total += (await file.async("uint8array")).byteLength;
+    expect(total).toBeGreaterThan(1000);
+    expect(await declaredUnpackedSize(bytes)).toBe(total);
   });
 
   it("refuses a file that is not a workbook with the reader's reason", async () => {

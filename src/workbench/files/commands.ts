@@ -47,6 +47,8 @@ export class FilesCommands {
   private doc!: WorkbenchDocument;
   private unsavedToFile = false;
   private replacing = false;
+  /** A file being read or written: another open or save waits for it. */
+  private working = false;
   private readonly autosave: Autosave;
 
   constructor(
@@ -152,11 +154,13 @@ export class FilesCommands {
   }
 
   async newBook(): Promise<void> {
+    if (this.refuseWhileWorking()) return;
     if (!this.mayReplace("A new workbook")) return;
     await this.replaceWith(WorkbenchDocument.fromSheets("workbook.xlsx", [{ name: "Sheet1", cells: [] }]), "A new blank workbook.");
   }
 
   async discard(): Promise<void> {
+    if (this.refuseWhileWorking()) return;
     if (!this.ui.confirm("Discard the work kept in this browser and show the demo again? This cannot be undone (save as a file first to keep it).")) return;
     try {
       await this.store?.clear();
@@ -172,7 +176,9 @@ export class FilesCommands {
       this.ui.message(`${fileName} is not an .xlsx workbook: the workbench opens .xlsx files (save other formats as .xlsx first).`, "error");
       return;
     }
+    if (this.refuseWhileWorking()) return;
     if (!this.mayReplace(`Opening ${fileName}`)) return;
+    this.working = true;
     this.ui.busy(true);
     this.ui.message(`Opening ${fileName}…`);
     await nextFrame();
@@ -182,11 +188,14 @@ export class FilesCommands {
     } catch (error) {
       this.ui.message(`Cannot open ${fileName}: ${reasonOf(error)}`, "error");
     } finally {
+      this.working = false;
       this.ui.busy(false);
     }
   }
 
   async save(): Promise<void> {
+    if (this.refuseWhileWorking()) return;
+    this.working = true;
     this.ui.busy(true);
     await nextFrame();
     try {
@@ -200,8 +209,14 @@ export class FilesCommands {
     } catch (error) {
       this.ui.message(`Cannot save: ${reasonOf(error)}`, "error");
     } finally {
+      this.working = false;
       this.ui.busy(false);
     }
+  }
+
+  private refuseWhileWorking(): boolean {
+    if (this.working) this.ui.message("A file is being read or written: wait for it to finish, then try again.", "error");
+    return this.working;
   }
 
   addSheet(): string {

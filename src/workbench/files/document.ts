@@ -39,7 +39,7 @@ function snapshot(book: SpanWorkbook, sheet: number): Map<string, CellInput> {
 }
 
 /** The zip's declared unpacked size (jszip keeps it from the central directory; undefined where it does not). */
-async function declaredUnpackedSize(bytes: Uint8Array): Promise<number | undefined> {
+export async function declaredUnpackedSize(bytes: Uint8Array): Promise<number | undefined> {
   const zip = await JSZip.loadAsync(bytes);
   let total = 0;
   let known = false;
