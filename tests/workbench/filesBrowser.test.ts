@@ -98,7 +98,7 @@ describe("workbench files", () => {
     page = await context.newPage();
     page.on("pageerror", (error) => problems.push(error.message));
     page.on("dialog", (dialog) => {
-      dialogs.push(dialog.message());
+      dialogs.push(dialog.type() === "beforeunload" ? "beforeunload" : dialog.message());
       void (answer === "accept" ? dialog.accept() : dialog.dismiss());
     });
     await load();
@@ -200,6 +200,17 @@ describe("workbench files", () => {
     const after = direct(() => reactions([["5 5"]], [[LOADS]]));
     expect(await values(block("'Level 2 beam'", "B", 3, after.length, after[0].length))).toEqual(after);
     expect(await values("Sheet3!A1")).toEqual([[3]]);
+  });
+
+  it("asks before the page is left with a change not stored yet, then stores it", async () => {
+    dialogs.length = 0;
+    await page.click("#formula-bar"); // the browser asks only after the user has interacted with the page
+    await page.evaluate(() => window.spanwiseWorkbench.setValues("Sheet3!C3", [[7]]));
+    expect(await page.evaluate(() => window.spanwiseFiles.safeToLeave())).toBe(false);
+    await load();
+    expect(dialogs).toEqual(["beforeunload"]);
+    await saved();
+    expect(await page.evaluate(() => window.spanwiseFiles.safeToLeave())).toBe(true);
   });
 
   it("asks before replacing a book with changes not saved to a file, and keeps it when told no", async () => {

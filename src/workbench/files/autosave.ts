@@ -45,6 +45,11 @@ export class Autosave {
     private readonly delay = AUTOSAVE_DELAY_MS,
   ) {}
 
+  /** Whether the last change is stored (nothing waiting, running or failed). */
+  stored(): boolean {
+    return !this.pending && !this.running && this.timer === undefined;
+  }
+
   /** Something changed: save a moment from now. */
   changed(): void {
     this.pending = true;

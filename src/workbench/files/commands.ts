@@ -246,6 +246,11 @@ export class FilesCommands {
     this.autosave.changed();
   }
 
+  /** Whether leaving the page now loses nothing: the work is stored in the browser, or saved as a file. */
+  safeToLeave(): boolean {
+    return this.autosave.stored() || !this.unsavedToFile;
+  }
+
   /** Waits for the pending autosave (tests, and before the page is left). */
   flush(): Promise<void> {
     return this.autosave.flush();

@@ -131,5 +131,12 @@ export function bindToolbar(commands: FilesCommands, host: BookHost, ui: FilesUi
     const tab = tabOf(host.activeSheet());
     if (tab) rename(tab);
   });
-  window.addEventListener("beforeunload", () => void commands.flush());
+  // Leaving with changes neither stored in the browser nor saved as a file: the browser asks first
+  // (the HTML standard's beforeunload prompt: preventDefault, and returnValue for older engines).
+  window.addEventListener("beforeunload", (event) => {
+    if (commands.safeToLeave()) return;
+    void commands.flush();
+    event.preventDefault();
+    event.returnValue = "";
+  });
 }
