@@ -108,6 +108,17 @@ describe("saving the workbench's book", () => {
     doc.destroy();
   });
 
+  it("refuses a cell beyond the host's limits (32,767 characters of text, 8,192 of formula) with its address", async () => {
+    const doc = WorkbenchDocument.fromSheets("new.xlsx", [{ name: "Sheet1", cells: [["x".repeat(32_767)]] }]);
+    await expect(saveXlsx(doc)).resolves.toBeInstanceOf(Uint8Array);
+    doc.book.setCell(0, 1, 0, "x".repeat(32_768));
+    await expect(saveXlsx(doc)).rejects.toThrow("Sheet1!A2: its text is 32768 characters; a cell of the spreadsheet host holds at most 32767");
+    doc.book.setCell(0, 1, 0, null);
+    doc.book.setCell(0, 2, 0, `=LEN("${"y".repeat(8_190)}")`);
+    await expect(saveXlsx(doc)).rejects.toThrow(/Sheet1!A3: its formula is 8198 characters as saved; the spreadsheet host takes at most 8192/);
+    doc.destroy();
+  });
+
   it("renames sheets in the workbook, its defined names and the formulas that name them; adds sheets with new formulas", async () => {
     const doc = await WorkbenchDocument.fromFile("book.xlsx", await smallBook({ metadata: false }));
     doc.renameSheet("Beam", "Level 2 beam");

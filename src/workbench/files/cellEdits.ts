@@ -46,6 +46,15 @@ interface ArrayArea {
   anchor: XmlCell;
 }
 
+/**
+ * The spreadsheet host's limits: "Total number of characters that a cell can contain: 32,767"
+ * and "Length of formula contents: 8,192 characters" (Microsoft support, "Excel specifications
+ * and limits"). A cell beyond them is refused with its address rather than written for the host
+ * to cut.
+ */
+export const MAX_TEXT = 32_767;
+export const MAX_FORMULA = 8_192;
+
 const LEGACY = /^=ARRAY_CONSTRAIN\(([\s\S]*),(\d+),(\d+)\)$/;
 
 function numberText(n: number): string {
@@ -166,13 +175,17 @@ export async function writeChanges(xml: string, changes: readonly CellChange[], 
     const ref = a1(row, col);
     const style = styleOf(existing);
     if (typeof input === "string" && input.startsWith("=")) {
+      const length = savedText(input).length + 1;
+      if (length > MAX_FORMULA) throw new SaveError(`${context.sheet}!${ref}: its formula is ${length} characters as saved; the spreadsheet host takes at most ${MAX_FORMULA}`);
       // A single-cell formula whose text changed (a sheet renamed in it) stays one while its result is one cell.
       const f = existing?.formula;
       if (f && f.type === undefined && !context.spills(row, col)) return `<c r="${ref}"${style}><f>${encodeXml(savedText(input))}</f></c>`;
       return `<c r="${ref}"${style} cm="${cm}"><f t="array" ref="${ref}">${encodeXml(savedText(input))}</f></c>`;
     }
     if (input === null || input === undefined || input === "") return bareCell(ref, existing);
-    return valueCell(ref, style, context.valueAt(row, col));
+    const value = context.valueAt(row, col);
+    if (typeof value === "string" && value.length > MAX_TEXT) throw new SaveError(`${context.sheet}!${ref}: its text is ${value.length} characters; a cell of the spreadsheet host holds at most ${MAX_TEXT}`);
+    return valueCell(ref, style, value);
   };
 
   for (const [key, cell] of cells) {
