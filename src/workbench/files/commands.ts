@@ -70,7 +70,7 @@ export class FilesCommands {
     return this.doc;
   }
 
-  /** The first book: the stored work if there is one that can be restored, else the demo. Returns the book shown. */
+  /** The first book: the stored work if there is one that can be restored, else `initial` (the demo, shown already). */
   async start(initial: WorkbenchDocument): Promise<void> {
     this.doc = initial;
     this.ui.fileName(initial.name);
@@ -91,6 +91,8 @@ export class FilesCommands {
     }
     try {
       const work = decodeWork(stored);
+      this.ui.message(`Restoring ${work.name}…`);
+      await nextFrame();
       const doc = await this.restore(work);
       this.unsavedToFile = work.unsavedToFile;
       this.show(doc);
