@@ -36,8 +36,6 @@ export interface DefinedName {
 
 export class PackageError extends Error {}
 
-const ZIP_OPTIONS = { compression: "DEFLATE", compressionOptions: { level: 6 } } as const;
-
 /** Each tag of an XML part, in order (start tags with their text, end tags flagged). */
 function* tags(xml: string): Generator<{ tag: string; at: number; close: number }> {
   let i = 0;
@@ -234,11 +232,16 @@ export class XlsxPackage {
   }
 
   async write(): Promise<Buffer> {
-    return this.zip.generateAsync({ type: "nodebuffer", ...ZIP_OPTIONS });
+    return this.generate("nodebuffer");
   }
 
-  /** The package's bytes where there is no Buffer (a browser), compressed as write() does. */
+  /** The package's bytes where there is no Buffer (a browser): the same zip as write(). */
   async bytes(): Promise<Uint8Array> {
-    return this.zip.generateAsync({ type: "uint8array", ...ZIP_OPTIONS });
+    return this.generate("uint8array");
+  }
+
+  /** The zip of every part: the one way write() and bytes() produce it. */
+  private generate<T extends "nodebuffer" | "uint8array">(type: T): Promise<T extends "nodebuffer" ? Buffer : Uint8Array> {
+    return this.zip.generateAsync({ type, compression: "DEFLATE", compressionOptions: { level: 6 } }) as never;
   }
 }
