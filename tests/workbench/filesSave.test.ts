@@ -129,6 +129,9 @@ describe("saving the workbench's book", () => {
     expect(parts["xl/workbook.xml"]).toContain('<sheet name="Level 2 beam" sheetId="1" r:id="rId1"/>');
     expect(parts["xl/workbook.xml"]).toContain("<definedName name=\"Factor\">'Level 2 beam'!$C$1</definedName>");
     expect(parts["xl/worksheets/sheet2.xml"]).toContain("<c r=\"A1\"><f>'Level 2 beam'!C1*3</f><v>6</v></c>");
+    // The legacy array naming the renamed sheet keeps its fixed range.
+    expect(parts["xl/worksheets/sheet2.xml"]).toContain("<c r=\"C1\"><f t=\"array\" ref=\"C1:C2\">'Level 2 beam'!A8:A9*2</f><v>2</v></c>");
+    expect(parts["xl/worksheets/sheet2.xml"]).toContain('<c r="C2"><v>4</v></c>');
     expect(parts["xl/metadata.xml"]).toContain('fDynamic="1"');
     expect(parts["[Content_Types].xml"]).toContain('PartName="/xl/worksheets/sheet3.xml"');
     expect(parts["xl/worksheets/sheet3.xml"]).toContain("_xldudf_SPAN_REACTIONS(A1,B1)");

@@ -142,12 +142,13 @@ export async function writeChanges(xml: string, changes: readonly CellChange[], 
       const legacy = area.legacy && typeof input === "string" ? LEGACY.exec(input) : null;
       const rows = area.rect.bottom - area.rect.top + 1;
       const cols = area.rect.right - area.rect.left + 1;
-      if (legacy && Number(legacy[2]) === rows && Number(legacy[3]) === cols) {
-        keptLegacy.add(anchorKey);
-        const ref = rectText(area.rect);
-        replace.set(anchorKey, `<c r="${a1(area.anchor.row, area.anchor.col)}"${styleOf(area.anchor)}><f t="array" ref="${ref}">${encodeXml(savedText(`=${legacy[1]}`))}</f></c>`);
-      } else clear.push(area.rect);
-      continue;
+      if (!legacy || Number(legacy[2]) !== rows || Number(legacy[3]) !== cols) {
+        clear.push(area.rect);
+        continue;
+      }
+      keptLegacy.add(anchorKey);
+      const ref = rectText(area.rect);
+      replace.set(anchorKey, `<c r="${a1(area.anchor.row, area.anchor.col)}"${styleOf(area.anchor)}><f t="array" ref="${ref}">${encodeXml(savedText(`=${legacy[1]}`))}</f></c>`);
     }
     let hit: [number, number] | undefined;
     for (let row = area.rect.top; row <= area.rect.bottom && !hit; row++) {

@@ -15,7 +15,7 @@ const HEAD = '<?xml version="1.0" encoding="UTF-8" standalone="yes"?>\n';
  * Sheet "Beam": A1 spans, A2 loads (shared strings), C1 factor 2 (styled), B3 the reactions
  * as a dynamic array (stale cached values), A8:A10 1..3, B8 =A8*$C$1 shared down to B10,
  * D8:D9 a legacy array {=A8:A9*10}. Sheet "Other sheet": A1 =Beam!C1*3, with the defined name
- * Factor = Beam!$C$1.
+ * Factor = Beam!$C$1, and C1:C2 the legacy array {=Beam!A8:A9*2}.
  */
 export async function smallBook(options: { metadata?: boolean } = {}): Promise<Uint8Array> {
   const metadata = options.metadata ?? true;
@@ -61,7 +61,10 @@ export async function smallBook(options: { metadata?: boolean } = {}): Promise<U
       '<row r="10"><c r="A10"><v>3</v></c><c r="B10" s="1"><f t="shared" si="0"/><v>0</v></c></row>' +
       "</sheetData></worksheet>",
   );
-  put("xl/worksheets/sheet2.xml", `${HEAD}<worksheet ${NS}><sheetData><row r="1"><c r="A1"><f>Beam!C1*3</f><v>0</v></c><c r="B1"><f>Factor+1</f><v>0</v></c></row></sheetData></worksheet>`);
+  put(
+    "xl/worksheets/sheet2.xml",
+    `${HEAD}<worksheet ${NS}><sheetData><row r="1"><c r="A1"><f>Beam!C1*3</f><v>0</v></c><c r="B1"><f>Factor+1</f><v>0</v></c><c r="C1"><f t="array" ref="C1:C2">Beam!A8:A9*2</f><v>0</v></c></row><row r="2"><c r="C2"><v>0</v></c></row></sheetData></worksheet>`,
+  );
   return zip.generateAsync({ type: "uint8array", compression: "DEFLATE" });
 }
 
