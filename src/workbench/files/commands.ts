@@ -99,8 +99,11 @@ export class FilesCommands {
       this.ui.message(`Restored ${work.name} as you left it (${new Date(work.savedAt).toLocaleString("en-GB")}).`);
       this.ui.saveState(saveStateText({ kind: "saved", at: new Date(work.savedAt) }, this.store.kind), "saved");
     } catch (error) {
-      await this.store.setAside(stored).catch(() => undefined);
-      this.ui.message(`The work kept in this browser could not be restored (${reasonOf(error)}); it was set aside and the demo is shown.`, "error");
+      const aside = await this.store.setAside(stored).then(
+        () => "it was set aside",
+        (failure: unknown) => `it could not be set aside either (${reasonOf(failure)}): your next change replaces it`,
+      );
+      this.ui.message(`The work kept in this browser could not be restored (${reasonOf(error)}); ${aside} and the demo is shown.`, "error");
     }
   }
 
