@@ -34,14 +34,45 @@ export class Workbench {
   private cells: HTMLTableCellElement[][] = [];
 
   constructor(
-    readonly book: SpanWorkbook,
+    private current: SpanWorkbook,
     private readonly el: WorkbenchElements,
   ) {
+    const book = current;
     this.active = 0;
     this.selection = { sheet: book.sheetNames()[0], anchor: { row: 0, col: 0 }, focus: { row: 0, col: 0 } };
     this.renderTabs();
     this.renderGrid();
     this.bindEvents();
+    this.showSelection();
+  }
+
+  /** The workbook the grid shows (replaced by replaceBook). */
+  get book(): SpanWorkbook {
+    return this.current;
+  }
+
+  /**
+   * Shows another workbook (a file opened, a new blank book): the grid, tabs and selection
+   * start over on `sheet` (default the first sheet). The previous book is not destroyed here:
+   * the caller owns it. Change listeners are told, as after an edit.
+   */
+  replaceBook(book: SpanWorkbook, sheet?: string): void {
+    this.current = book;
+    const names = book.sheetNames();
+    const index = sheet === undefined ? 0 : names.indexOf(sheet);
+    if (index < 0) throw new Error(`no sheet named "${sheet}"`);
+    this.active = index;
+    this.selection = { sheet: names[index], anchor: { row: 0, col: 0 }, focus: { row: 0, col: 0 } };
+    this.refresh();
+    for (const listener of this.changeListeners) listener();
+  }
+
+  /** Draws tabs and grid again from the book (after sheets were added or renamed in it). */
+  refresh(): void {
+    if (this.active >= this.book.sheetNames().length) this.active = 0;
+    this.selection = { ...this.selection, sheet: this.activeSheet() };
+    this.renderTabs();
+    this.renderGrid();
     this.showSelection();
   }
 
