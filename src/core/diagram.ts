@@ -3,7 +3,6 @@ import type { DiagramRow, Piece, Quantity, Solution } from "./model";
 import { coefficients, derivative, pieceValue } from "./polynomial";
 import { rootsBetween } from "./roots";
 import { cleanZero, POSITION_TOLERANCE, RELATIVE_ZERO } from "./tolerance";
-import { pieceIndexAt } from "./evaluate";
 
 function rowOf(solution: Solution, piece: Piece, x: number, s: number): DiagramRow {
   const { scales } = solution;
@@ -107,8 +106,10 @@ export function diagram(solution: Solution, points: number): DiagramRow[] {
   const momentScale = solution.scales.moment;
   const jumpTol = 1e3 * RELATIVE_ZERO;
   const rows: DiagramRow[] = [];
+  // The stations ascend, so the piece of each (the last whose x0 <= x, as pieceIndexAt finds it) only moves right.
+  let index = 0;
   for (const x of stations) {
-    const index = pieceIndexAt(pieces, x);
+    while (index + 1 < pieces.length && pieces[index + 1].x0 <= x) index++;
     const piece = pieces[index];
     if (x >= length) {
       rows.push(rowOf(solution, piece, length, piece.x1 - piece.x0));
