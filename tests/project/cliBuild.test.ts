@@ -54,7 +54,7 @@ describe("the built command", () => {
     const scripts = (JSON.parse(fs.readFileSync(path.join(ROOT, "package.json"), "utf8")) as { scripts: Record<string, string> }).scripts;
     expect(scripts.prepare).toMatch(/(^|&& )node build\/cli\.js( |$)/);
     expect(scripts["build:cli"]).toBe("node build/cli.js");
-    expect(fs.readFileSync(path.join(ROOT, ".gitignore"), "utf8").split("\n")).toContain("lib/");
+    expect(fs.readFileSync(path.join(ROOT, ".gitignore"), "utf8").split("\n")).toContain("/lib/");
   });
 
   it("holds each module as the on-the-fly compiler would compile its current source", () => {
