@@ -141,7 +141,6 @@ function scenarios(): Scenario[] {
     ["SHEARSTRESS", (f, s, l) => f.SHEARSTRESS(s, l, [[0.015, 2.8e-5, 2.8e-4, 0.1]], null, EI, "1.2D+1.6L", null)],
     ["DEFLECTIONCHECK", (f, s, l) => f.DEFLECTIONCHECK(s, l, "L/360", null, EI, "D+L", null)],
     ["SPANPEAKS", (f, s, l) => f.SPANPEAKS(s, l, null, EI, "1.2D+1.6L", null, null)],
-    ["CASEREACTIONS", (f, s, l) => f.CASEREACTIONS(s, l, null, EI, "1.2D+1.6L+0.5S", null, null, null)],
   ];
   for (const [fn, call] of memberFns) {
     out.push({ fn, what: `${MAX_SPANS} spans, ${MAX_LOADS} loads`, make: () => withMember(call, ...memberAtLimits()) });
