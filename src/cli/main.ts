@@ -5,7 +5,6 @@
  */
 import { optionText, parseArgs } from "./args";
 import { calc, EXIT } from "./calc";
-import { DEMO_WORKBOOK, writeDemoWorkbook } from "./demoWorkbook";
 import { UsageError, type Io } from "./io";
 
 export const CALC_USAGE = `usage:
@@ -21,10 +20,17 @@ export const CALC_USAGE = `usage:
   written (it exists without --force, or it is the input); 5 an unexpected failure.
 `;
 
-export const DEMO_USAGE = `usage:
+/**
+ * The demo command's usage. It names demoWorkbook.ts's default path, and that module loads
+ * exceljs (half a second), so it is read only when this text is shown or the command runs.
+ */
+export async function demoUsage(): Promise<string> {
+  const { DEMO_WORKBOOK } = await import("./demoWorkbook");
+  return `usage:
   spanwise demo [--out <file.xlsx>] [--force]
       writes the demo workbook (default ${DEMO_WORKBOOK}), its spills stored as dynamic arrays.
 `;
+}
 
 export const START_USAGE = `usage:
   spanwise start [--port <n>]
@@ -44,7 +50,10 @@ export const REPORT_USAGE = `usage:
       writes the member calculation report of a SPAN cell (one per SPAN cell of a range).
 `;
 
-export const USAGE = [CALC_USAGE, DEMO_USAGE, VERIFY_USAGE, REPORT_USAGE, START_USAGE].map((u, i) => (i === 0 ? u : u.replace("usage:\n", ""))).join("");
+/** Every command's usage, for `spanwise help` and an unknown command. */
+export async function usage(): Promise<string> {
+  return [CALC_USAGE, await demoUsage(), VERIFY_USAGE, REPORT_USAGE, START_USAGE].map((u, i) => (i === 0 ? u : u.replace("usage:\n", ""))).join("");
+}
 
 const defaultIo: Io = { stdout: process.stdout, stderr: process.stderr };
 
@@ -71,9 +80,11 @@ export async function main(argv: readonly string[], io: Io = defaultIo): Promise
         );
       }
       case "demo": {
-        if (wantsHelp(rest)) return help(io, DEMO_USAGE);
-        const args = parseArgs(rest, ["out"], ["force"], DEMO_USAGE);
-        if (args.positional.length > 0) throw new UsageError(`demo takes no workbook (${args.positional[0]}): use --out`, 2, DEMO_USAGE);
+        const demoText = await demoUsage();
+        if (wantsHelp(rest)) return help(io, demoText);
+        const args = parseArgs(rest, ["out"], ["force"], demoText);
+        if (args.positional.length > 0) throw new UsageError(`demo takes no workbook (${args.positional[0]}): use --out`, 2, demoText);
+        const { DEMO_WORKBOOK, writeDemoWorkbook } = await import("./demoWorkbook");
         return await writeDemoWorkbook(optionText(args, "out") ?? DEMO_WORKBOOK, args.options.has("force"), io);
       }
       case "verify": {
@@ -105,7 +116,7 @@ export async function main(argv: readonly string[], io: Io = defaultIo): Promise
       case "help":
       case "--help":
       case "-h":
-        io.stdout.write(USAGE);
+        io.stdout.write(await usage());
         return command === undefined ? 2 : 0;
       default:
         throw new UsageError(`unknown command "${command}"`);
@@ -113,7 +124,7 @@ export async function main(argv: readonly string[], io: Io = defaultIo): Promise
   } catch (error) {
     if (error instanceof UsageError) {
       io.stderr.write(`spanwise: ${error.message}\n`);
-      if (error.exitCode === 2) io.stderr.write(error.usage ?? USAGE);
+      if (error.exitCode === 2) io.stderr.write(error.usage ?? (await usage()));
       return error.exitCode;
     }
     io.stderr.write(`spanwise: unexpected failure: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}\n`);

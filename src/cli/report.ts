@@ -10,14 +10,15 @@
  */
 import * as fs from "fs";
 import * as path from "path";
-import { SpanWorkbook, normalizeFormula } from "../engine";
+import { SpanWorkbook, normalizeFormula, type SheetInput } from "../engine";
 import { parseBlock, blockText } from "../pane/addresses";
 import { qualify, splitAddress } from "../pane/host";
-import { cellKindOf, findMember, solveMember } from "../pane/memberFromSheet";
+import { cellKindOf, findMember } from "../pane/memberFromSheet";
+import { memberReport } from "../pane/report";
+import { MAX_CANDIDATES, checksFor, type FormulaCell } from "../pane/reportChecks";
 import { parseSpanFormula } from "../pane/formulaRefs";
 import type { Block, PrintDocument } from "../report/document";
 import { renderHtml } from "../report/html";
-import { memberDocument } from "../report/memberDocument";
 import type { BuildInfo } from "../report/meta";
 import { renderPdf } from "../report/pdf";
 import { EMPTY_TITLE, TITLE_ROWS, TITLE_SHEET, titleFromRows, type TitleBlock } from "../report/titleBlock";
@@ -84,6 +85,7 @@ export async function report(options: ReportOptions, io: Io): Promise<number> {
       throw new UsageError(`${error instanceof Error ? error.message : String(error)}`, 1);
     }
     const title = await titleOf(host);
+    const candidates = spanFormulaCells(loaded.inputs, MAX_CANDIDATES + 1);
     const info = options.info ?? buildInfo();
     const docs: PrintDocument[] = [];
     const problems: string[] = [];
@@ -106,23 +108,15 @@ export async function report(options: ReportOptions, io: Io): Promise<number> {
           problems.push(`${at}: ${found.message.replace(/^[A-Z]+\d+: /, "")}`);
           continue;
         }
-        if (found.member.kind !== "member") {
-          problems.push(`${at}: the report covers member cells (REACTIONS, SHEAR, MOMENT, ..., DIAGRAM, the checks); this cell computes ${found.member.kind === "peaks" ? "an envelope of peaks" : `a ${found.member.kind} study`}`);
-          continue;
-        }
-        const plain = solveMember(found.member, "");
-        const factored = solveMember(found.member);
-        if ("error" in plain || "error" in factored) {
-          problems.push(`${at}: ${"error" in factored ? factored.error : (plain as { error: string }).error}`);
-          continue;
-        }
         const mark = options.range !== undefined ? [title.mark, at].filter(Boolean).join(" ") : title.mark;
-        docs.push(
-          memberDocument(
-            { title: { ...title, mark }, cell: at, formula: formula === undefined ? "" : normalizeFormula(formula), units: found.member.units, member: plain.member, combo: factored.comboText, factored: { member: factored.member, solution: factored.solution } },
-            info,
-          ),
-        );
+        const checks = found.member.kind === "member" ? await checksFor(host, found.member, candidates) : undefined;
+        for (const p of checks?.problems ?? []) if (!problems.includes(p)) problems.push(p);
+        const doc = memberReport({ member: found.member, formula: formula === undefined ? "" : normalizeFormula(formula), title: { ...title, mark }, checks }, info);
+        if ("error" in doc) {
+          problems.push(doc.error);
+          continue;
+        }
+        docs.push(doc);
       }
     }
     for (const p of problems) io.stderr.write(`spanwise: ${p}\n`);
@@ -146,6 +140,23 @@ async function titleOf(host: BookHost): Promise<TitleBlock> {
   } catch {
     return { ...EMPTY_TITLE };
   }
+}
+
+/** The SPAN formula cells of the workbook as saved, sheet by sheet and row by row, at most `limit`. */
+function spanFormulaCells(inputs: readonly SheetInput[], limit: number): FormulaCell[] {
+  const out: FormulaCell[] = [];
+  for (const sheet of inputs) {
+    for (let r = 0; r < sheet.cells.length; r++) {
+      const row = sheet.cells[r] ?? [];
+      for (let c = 0; c < row.length; c++) {
+        const input = row[c];
+        if (typeof input !== "string" || !input.startsWith("=") || !/SPAN/i.test(input)) continue;
+        out.push({ sheet: sheet.name, cell: blockText({ from: { row: r, col: c }, to: { row: r, col: c } }), formula: input });
+        if (out.length >= limit) return out;
+      }
+    }
+  }
+  return out;
 }
 
 function combine(docs: PrintDocument[]): PrintDocument {

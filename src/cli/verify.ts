@@ -1,6 +1,7 @@
 /**
  * `spanwise verify [--out verification.pdf|.html] [--paper A4|letter] [--force]`: runs the
- * handbook cases (src/verify/cases, the list the test suite runs) and writes the verification
+ * handbook and independent-reference cases (src/verify/cases, the lists the test suite runs:
+ * tests/core/handbook.test.ts and tests/verify/crosscheck.test.ts) and writes the verification
  * document. Exit code 0 when every case agrees with its source, 1 when any fails (the document is
  * still written, showing what failed), 2 for a usage error.
  */
@@ -12,7 +13,7 @@ import { renderHtml } from "../report/html";
 import type { BuildInfo } from "../report/meta";
 import { renderPdf } from "../report/pdf";
 import { verificationDocument } from "../report/verificationDocument";
-import { handbookCases, type HandbookCase } from "../verify/cases";
+import { handbookCases, verificationCases, type HandbookCase } from "../verify/cases";
 import { runVerification } from "../verify/run";
 import { buildInfo } from "./buildInfo";
 import { UsageError, type Io } from "./io";
@@ -59,12 +60,14 @@ export async function verify(options: VerifyOptions, io: Io): Promise<number> {
   const out = options.out ?? "verification.pdf";
   const format = formatOf(out);
   const paper = paperOf(options.paper);
-  const result = runVerification(options.cases ?? handbookCases, options.solver);
+  const cases = options.cases ?? verificationCases();
+  const result = runVerification(cases, options.solver);
   const info = options.info ?? buildInfo();
   const doc = verificationDocument(result, info);
   writeOutput(out, format === "pdf" ? await renderPdf(doc, paper) : renderHtml(doc, paper), options.force);
   const failed = result.cases.filter((c) => !c.pass);
-  io.stdout.write(`${result.cases.length} handbook cases, ${failed.length} failed; wrote ${out}\n`);
+  const handbook = cases.filter((c) => handbookCases.includes(c)).length;
+  io.stdout.write(`${result.cases.length} cases (${handbook} handbook, ${result.cases.length - handbook} independent-reference), ${failed.length} failed; wrote ${out}\n`);
   for (const c of failed) io.stderr.write(`spanwise: verification failed: ${c.name}${c.error ? ` (${c.error})` : ""}\n`);
   return result.pass ? 0 : 1;
 }

@@ -206,7 +206,7 @@ function textInput(text: string): string {
 }
 
 /** Reads a package; throws BookError (or PackageError) saying why it cannot be used. */
-export async function readBook(bytes: Buffer): Promise<LoadedBook> {
+export async function readBook(bytes: Uint8Array): Promise<LoadedBook> {
   const pkg = await XlsxPackage.open(bytes);
   const parts = pkg.sheets();
   if (parts.length === 0) throw new BookError("it holds no worksheets");

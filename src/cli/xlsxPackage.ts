@@ -83,7 +83,8 @@ export class XlsxPackage {
     readonly workbookRels: Relationship[],
   ) {}
 
-  static async open(bytes: Buffer): Promise<XlsxPackage> {
+  /** Opens a package from its bytes (a Buffer in Node, any Uint8Array in a browser). */
+  static async open(bytes: Uint8Array): Promise<XlsxPackage> {
     let zip: JSZip;
     try {
       zip = await JSZip.loadAsync(bytes, { checkCRC32: true });
@@ -231,6 +232,16 @@ export class XlsxPackage {
   }
 
   async write(): Promise<Buffer> {
-    return this.zip.generateAsync({ type: "nodebuffer", compression: "DEFLATE", compressionOptions: { level: 6 } });
+    return this.generate("nodebuffer");
+  }
+
+  /** The package's bytes where there is no Buffer (a browser): the same zip as write(). */
+  async bytes(): Promise<Uint8Array> {
+    return this.generate("uint8array");
+  }
+
+  /** The zip of every part: the one way write() and bytes() produce it. */
+  private generate<T extends "nodebuffer" | "uint8array">(type: T): Promise<T extends "nodebuffer" ? Buffer : Uint8Array> {
+    return this.zip.generateAsync({ type, compression: "DEFLATE", compressionOptions: { level: 6 } }) as never;
   }
 }

@@ -4,6 +4,7 @@
  * are the factored sum of these (a checked invariant in the tests).
  */
 import { invalid } from "./errors";
+import { checkWork } from "./limits";
 import type { Load, Member, Reaction } from "./model";
 import { solve } from "./solve";
 
@@ -30,13 +31,18 @@ export function caseOrder(loads: Load[]): string[] {
   return order;
 }
 
-/** Each case's reactions: the member with that case's loads only, at factor 1. */
-export function caseReactions(member: Member): CaseReactions {
+/**
+ * Each case's reactions: the member with that case's loads only, at factor 1. The call's size
+ * (limits.ts) counts these solves, and the combination's when `withCombination` (the caller
+ * solves it besides), before any of them.
+ */
+export function caseReactions(member: Member, withCombination = false): CaseReactions {
   const cases = caseOrder(member.loads);
   if (cases.length === 0) throw invalid("loads: the member carries no load, so there is no load case to report");
   if (cases.length > MAX_CASES) {
     throw invalid(`loads: ${cases.length} different case labels; at most ${MAX_CASES} can be reported side by side (combine cases that act together)`);
   }
+  checkWork("CASEREACTIONS", { spans: member.spans.length, loads: member.loads.length, cases: cases.length, pattern: "none", combinations: withCombination ? 1 : 0, positions: 0, axles: 0 });
   const reactions = cases.map((label) => solve({ ...member, loads: member.loads.filter((load) => load.loadCase === label) }).reactions);
   return { cases, reactions };
 }

@@ -1,20 +1,52 @@
 import { invalid } from "./errors";
-import { candidates } from "./extremes";
 import type { DiagramRow, Piece, Quantity, Solution } from "./model";
-import { pieceValue } from "./polynomial";
+import { coefficients, derivative, pieceValue } from "./polynomial";
+import { rootsBetween } from "./roots";
 import { cleanZero, POSITION_TOLERANCE, RELATIVE_ZERO } from "./tolerance";
-import { pieceIndexAt } from "./evaluate";
 
 function rowOf(solution: Solution, piece: Piece, x: number, s: number): DiagramRow {
+  const { scales } = solution;
   const stiff = solution.hasStiffness;
-  const value = (q: Quantity): number => cleanZero(pieceValue(piece, q, s), solution.scales[q]);
   return {
     x,
-    shear: value("shear"),
-    moment: value("moment"),
-    slope: stiff ? value("slope") : NaN,
-    deflection: stiff ? value("deflection") : NaN,
+    shear: cleanZero(pieceValue(piece, "shear", s), scales.shear),
+    moment: cleanZero(pieceValue(piece, "moment", s), scales.moment),
+    slope: stiff ? cleanZero(pieceValue(piece, "slope", s), scales.slope) : NaN,
+    deflection: stiff ? cleanZero(pieceValue(piece, "deflection", s), scales.deflection) : NaN,
   };
+}
+
+/** Station priorities where stations fall within rounding of each other (higher wins). */
+const PEAK = 0;
+const EVEN = 1;
+const BOUNDARY = 2;
+
+/**
+ * Every interior place a quantity can peak (the roots of its derivative on each piece, as
+ * extremes.ts finds them), plus a piece's right end where it is not the next piece's left end,
+ * sorted. Piece ends that are boundaries are not listed: the boundaries are stations of
+ * their own, with the higher priority.
+ */
+function peakStations(solution: Solution, quantities: readonly Quantity[]): Float64Array {
+  const { pieces } = solution;
+  let out = new Float64Array(Math.max(16, pieces.length * 2));
+  let n = 0;
+  const push = (x: number): void => {
+    if (n === out.length) {
+      const grown = new Float64Array(out.length * 2);
+      grown.set(out);
+      out = grown;
+    }
+    out[n++] = x;
+  };
+  for (let i = 0; i < pieces.length; i++) {
+    const piece = pieces[i];
+    const span = piece.x1 - piece.x0;
+    for (const q of quantities) for (const s of rootsBetween(derivative(coefficients(piece, q)), 0, span)) push(piece.x0 + s);
+    if (i + 1 === pieces.length || pieces[i + 1].x0 !== piece.x1) push(piece.x1);
+  }
+  // A typed array sorts numerically, without a comparator.
+  return out.subarray(0, n).sort();
 }
 
 /**
@@ -22,40 +54,62 @@ function rowOf(solution: Solution, piece: Piece, x: number, s: number): DiagramR
  * node, load position, piece boundary and peak location, in order of x. Where shear,
  * moment or slope (at a hinge) jumps, two rows share the x: the value just left, then just right. Slope and
  * deflection are NaN when the member was solved without EI.
+ *
+ * Stations within rounding of each other (POSITION_TOLERANCE of the length, measured from
+ * the last station kept) are one: a piece boundary (exact node or load position) first, then
+ * an evenly spaced station, then a peak location. The three lists are each in order, so they
+ * are merged rather than sorted together (a member at the limits has some 70,000 stations).
  */
 export function diagram(solution: Solution, points: number): DiagramRow[] {
   if (!Number.isInteger(points) || points < 2) throw invalid(`points must be a whole number of at least 2, got ${points}`);
   const { length, pieces } = solution;
   const tol = POSITION_TOLERANCE * length;
-  const boundaries = new Set(pieces.map((p) => p.x0));
-  // Priority where stations fall within rounding of each other: a piece boundary (exact
-  // node or load position) first, then an evenly spaced station, then a peak location.
-  const marked: Array<[number, number]> = [];
-  for (let i = 0; i < points; i++) marked.push([i === points - 1 ? length : (length * i) / (points - 1), 1]);
-  for (const p of pieces) marked.push([p.x0, 2]);
   const quantities: Quantity[] = solution.hasStiffness ? ["shear", "moment", "slope", "deflection"] : ["shear", "moment"];
-  for (const q of quantities) for (const c of candidates(solution, q)) marked.push([c.x, boundaries.has(c.x) ? 2 : 0]);
-  marked.sort((a, b) => a[0] - b[0]);
+  const peaks = peakStations(solution, quantities);
+  const even = (i: number): number => (i === points - 1 ? length : (length * i) / (points - 1));
+
   const stations: number[] = [];
   let lastPriority = -1;
-  for (const [x, priority] of marked) {
+  const mark = (x: number, priority: number): void => {
     const last = stations[stations.length - 1];
     if (stations.length > 0 && x - last <= tol) {
       if (priority > lastPriority) {
         stations[stations.length - 1] = x;
         lastPriority = priority;
       }
-      continue;
+      return;
     }
     stations.push(x);
     lastPriority = priority;
+  };
+  // Three-way merge by x; at equal x the order does not change the stations kept.
+  let e = 0;
+  let b = 0;
+  let p = 0;
+  let xe = even(0);
+  while (e < points || b < pieces.length || p < peaks.length) {
+    const xb = b < pieces.length ? pieces[b].x0 : Infinity;
+    const xp = p < peaks.length ? peaks[p] : Infinity;
+    if (e < points && xe <= xb && xe <= xp) {
+      mark(xe, EVEN);
+      if (++e < points) xe = even(e);
+    } else if (xb <= xp) {
+      mark(xb, BOUNDARY);
+      b++;
+    } else {
+      mark(xp, PEAK);
+      p++;
+    }
   }
+
   const shearScale = solution.scales.shear;
   const momentScale = solution.scales.moment;
   const jumpTol = 1e3 * RELATIVE_ZERO;
   const rows: DiagramRow[] = [];
+  // The stations ascend, so the piece of each (the last whose x0 <= x, as pieceIndexAt finds it) only moves right.
+  let index = 0;
   for (const x of stations) {
-    const index = pieceIndexAt(pieces, x);
+    while (index + 1 < pieces.length && pieces[index + 1].x0 <= x) index++;
     const piece = pieces[index];
     if (x >= length) {
       rows.push(rowOf(solution, piece, length, piece.x1 - piece.x0));

@@ -38,6 +38,6 @@ export { spanPeaks, spanSolution, signedPeak } from "./spanPeaks";
 export type { SpanPeak } from "./spanPeaks";
 export { caseReactions, caseOrder, MAX_CASES } from "./caseReactions";
 export type { CaseReactions } from "./caseReactions";
-export { naturalFrequencies, modeShape, modeValue, spanMasses, massesFromLoads, MAX_MODES, MAX_VIBRATION_WORK } from "./vibration";
+export { naturalFrequencies, modeShape, modeValue, spanMasses, massesFromLoads, MAX_MODES, MAX_VIBRATION_WORK, MAX_VIBRATION_ELEMENTS } from "./vibration";
 export type { Mass, VibrationModel, ModeShape, ModePiece } from "./vibration";
 export { dynamicEntries, clampedCount } from "./dynamicStiffness";

@@ -3,7 +3,7 @@ import type { PatternMode } from "./pattern";
 
 /**
  * The documented limits of the load-arrangement studies (ENVELOPE, PEAKS, INFLUENCE, MOVING,
- * COMBOS), one place for all of them. Each keeps a call at its limits quick (the benchmark
+ * COMBOS) and of CASEREACTIONS, one place for all of them. Each keeps a call at its limits quick (the benchmark
  * tests/bench/limits.bench.ts walks every function to them) and turns pasted garbage into a
  * #VALUE! that names the limit and the argument. The member's own limits (loads, spans) live
  * with its validation.
@@ -36,7 +36,7 @@ export const LIMITS = {
 export const WORK_LIMIT = 400_000;
 export const WORK_WEIGHTS = { solve: 10, scan: 12, station: 1 } as const;
 
-export type StudyKind = "ENVELOPE" | "PEAKS" | "INFLUENCE" | "MOVING";
+export type StudyKind = "ENVELOPE" | "PEAKS" | "INFLUENCE" | "MOVING" | "CASEREACTIONS";
 
 export interface StudyCounts {
   spans: number;
@@ -44,6 +44,7 @@ export interface StudyCounts {
   /** Distinct case labels of the loads. */
   cases: number;
   pattern: PatternMode;
+  /** ENVELOPE and PEAKS combinations; CASEREACTIONS: 1 when a combination is solved besides the cases. */
   combinations: number;
   /** ENVELOPE x cells, INFLUENCE positions. */
   positions: number;
@@ -66,7 +67,10 @@ function arrangementCost(pattern: PatternMode, spans: number): number {
  * - MOVING at a section, node or support: 40 (spans + 2) (spans + 1) + 2 (spans + 2) axles^2
  *   (four solves per interval of the influence line, then sums of the axles' cubics);
  * - MOVING absolute moment: 200 (spans + 2) axles (spans + axles): five solves per stretch
- *   between the positions where an axle meets a node, in both directions.
+ *   between the positions where an axle meets a node, in both directions;
+ * - CASEREACTIONS: 10 (cases spans + loads), a solve per case with that case's loads, plus
+ *   20 (spans + loads) when the combination is given: it is read and solved again as the member
+ *   functions do (about twice a case solve's cost, tests/bench/limits.bench.ts).
  */
 export function workOf(kind: StudyKind, c: StudyCounts): number {
   const { solve, scan, station } = WORK_WEIGHTS;
@@ -84,6 +88,8 @@ export function workOf(kind: StudyKind, c: StudyCounts): number {
       return c.absoluteMoment
         ? solve * 20 * (c.spans + 2) * c.axles * (c.spans + c.axles)
         : solve * 4 * (c.spans + 2) * (c.spans + 1) + 2 * (c.spans + 2) * c.axles * c.axles;
+    case "CASEREACTIONS":
+      return solve * (c.cases * c.spans + c.loads) + (c.combinations > 0 ? 2 * solve * size : 0);
   }
 }
 
@@ -95,6 +101,7 @@ export function checkWork(kind: StudyKind, c: StudyCounts): void {
   if (kind === "ENVELOPE" || kind === "PEAKS") counts.push(`${c.loads} loads`, `${c.cases} case labels`, `${c.combinations} combinations`, `pattern ${c.pattern}`);
   if (kind === "ENVELOPE" || kind === "INFLUENCE") counts.push(`${c.positions} positions`);
   if (kind === "MOVING") counts.push(`${c.axles} axles${c.absoluteMoment ? ", absolute moment" : ""}`);
+  if (kind === "CASEREACTIONS") counts.push(`${c.loads} loads`, `${c.cases} case labels`, c.combinations > 0 ? "and the combination" : "no combination");
   throw invalid(
     `${kind}: this call is too large (${counts.join(", ")}: size ${work}, at most ${WORK_LIMIT}); use fewer of them (the README's limits section gives the size of each function)`,
   );

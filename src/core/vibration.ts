@@ -28,6 +28,13 @@ export const MAX_MODES = 50;
  */
 export const MAX_VIBRATION_WORK = 10_000;
 
+/**
+ * Most elements one call may take, whatever the modes: the search grows faster than the
+ * elements (tests/bench/limits.bench.ts, one loaded run: 2,000 elements and 5 modes cost about
+ * what 200 elements and 50 modes do, 100 ms; 10,000 elements and 1 mode 480-680 ms).
+ */
+export const MAX_VIBRATION_ELEMENTS = 2_000;
+
 /** Bisection stops when the bracket is this fraction of the frequency (well inside 1e-12). */
 export const FREQUENCY_TOLERANCE = 2e-14;
 
@@ -287,10 +294,10 @@ function checkModeCount(count: number, name: string): void {
 
 function search(mesh: Mesh, count: number): number[] {
   const elements = mesh.elements.length;
-  if (elements * count > MAX_VIBRATION_WORK) {
+  if (elements > MAX_VIBRATION_ELEMENTS || elements * count > MAX_VIBRATION_WORK) {
     throw invalid(
-      `modes: ${count} modes of a member of ${elements} elements (spans cut at mass boundaries) is more than one call takes (elements x modes at most ${MAX_VIBRATION_WORK}); ${
-        elements > MAX_VIBRATION_WORK ? `no call takes more than ${MAX_VIBRATION_WORK} elements` : `ask for at most ${Math.floor(MAX_VIBRATION_WORK / elements)} modes`
+      `modes: ${count} modes of a member of ${elements} elements (spans cut at mass boundaries) is more than one call takes (at most ${MAX_VIBRATION_ELEMENTS} elements, and elements x modes at most ${MAX_VIBRATION_WORK}); ${
+        elements > MAX_VIBRATION_ELEMENTS ? `no call takes more than ${MAX_VIBRATION_ELEMENTS} elements` : `ask for at most ${Math.floor(MAX_VIBRATION_WORK / elements)} modes`
       }`,
     );
   }

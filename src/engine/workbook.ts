@@ -12,7 +12,7 @@
 import { DetailedCellError, HyperFormula } from "hyperformula";
 import type { SpanFunctions } from "./catalogue";
 import { cellKey, attachContext, buildingWith, type CellAddress, type EngineContext } from "./learnedSizes";
-import { columnLetters, expandSpillReferences, hasSpillReference, normalizeFormula } from "./formulaText";
+import { columnLetters, expandSpillReferences, hasSpillReference, mapCode, normalizeFormula } from "./formulaText";
 import type { BlockSize } from "./resultSize";
 import { formulaAfterRows } from "./references";
 import { registerSpanPlugin } from "./spanPlugin";
@@ -299,6 +299,57 @@ export class SpanWorkbook {
     return `${/^[A-Za-z_][\w.]*$/.test(name) ? name : `'${name.replace(/'/g, "''")}'`}!${cell}`;
   }
 
+  /**
+   * What every cell of a sheet holds as typed, as rows of inputs (formulas as typed, values,
+   * undefined for empty cells and for cells another formula spills into): `getInput` for the
+   * whole sheet at once, for saving and for telling what changed.
+   */
+  sheetInputs(sheet: number): CellInput[][] {
+    const raw = this.hf.getSheetSerialized(sheet) as unknown[][];
+    const out: CellInput[][] = [];
+    raw.forEach((line, row) => {
+      const cells: CellInput[] = [];
+      line.forEach((value, col) => {
+        if (value === null || value === undefined) return;
+        if (this.spillAnchorOf(sheet, row, col)) return;
+        cells[col] = typeof value === "object" ? String(value) : (value as CellInput);
+      });
+      out[row] = cells;
+    });
+    for (const { address, text } of this.typed.values()) if (address.sheet === sheet) (out[address.row] ??= [])[address.col] = text;
+    for (let row = 0; row < out.length; row++) out[row] ??= [];
+    return out;
+  }
+
+  /** Sets scattered cells (row, column, input) in one batch, then recalculates once. */
+  setScattered(sheet: number, cells: readonly (readonly [number, number, CellInput])[]): void {
+    if (cells.length === 0) return;
+    const prepared = cells.map(([row, col, input]) => [row, col, this.prepare({ sheet, row, col }, input)] as const);
+    this.hf.batch(() => prepared.forEach(([row, col, input]) => this.hf.setCellContents({ sheet, row, col }, [[input]] as never)));
+    this.settle();
+  }
+
+  /** Adds an empty sheet at the end; returns its id. The name must be free (sheet names are compared case-insensitively). */
+  addSheet(name: string): number {
+    if (!this.hf.isItPossibleToAddSheet(name)) throw new Error(`a sheet named "${name}" cannot be added`);
+    this.hf.addSheet(name);
+    return this.sheetId(name);
+  }
+
+  /**
+   * Renames a sheet. The engine rewrites the formulas that name it; formulas kept as typed
+   * (saved forms, `A1#`) are rewritten here the same way.
+   */
+  renameSheet(sheet: number, name: string): void {
+    const old = this.hf.getSheetName(sheet);
+    if (old === undefined) throw new Error(`no sheet ${sheet}`);
+    if (old === name) return;
+    if (!this.hf.isItPossibleToRenameSheet(sheet, name)) throw new Error(`sheet "${old}" cannot be renamed to "${name}"`);
+    this.hf.renameSheet(sheet, name);
+    for (const entry of this.typed.values()) entry.text = renameSheetReferences(entry.text, old, name);
+    this.settle();
+  }
+
   destroy(): void {
     this.hf.destroy();
   }
@@ -362,4 +413,23 @@ function plain(value: unknown): CellResult {
   if (value instanceof DetailedCellError) return { error: value.value, message: value.message ?? "" };
   if (value === undefined) return null;
   return value as CellResult;
+}
+
+/** A sheet name as formulas write it: bare when it is a plain name, else quoted ('it''s'). */
+export function quoteSheetName(name: string): string {
+  return /^[A-Za-z_][\w.]*$/.test(name) ? name : `'${name.replace(/'/g, "''")}'`;
+}
+
+/**
+ * Formula text with every reference to sheet `from` (`From!A1`, `'From sheet'!A1`, matched
+ * case-insensitively as sheet names are) naming sheet `to` instead; string literals untouched.
+ */
+export function renameSheetReferences(formula: string, from: string, to: string): string {
+  const wanted = from.toLowerCase();
+  return mapCode(formula, (code) =>
+    code.replace(/(^|[^\w.'])('(?:[^']|'')+'|[A-Za-z_][\w.]*)!/g, (whole, before: string, sheet: string) => {
+      const name = sheet.startsWith("'") ? sheet.slice(1, -1).replace(/''/g, "'") : sheet;
+      return name.toLowerCase() === wanted ? `${before}${quoteSheetName(to)}!` : whole;
+    }),
+  );
 }

@@ -39,6 +39,14 @@ export interface ChartRequest {
   yTitle: string;
 }
 
+/** A formula cell of the workbook. */
+export interface FormulaCell {
+  sheet: string;
+  /** The cell without sheet ("B7"). */
+  cell: string;
+  formula: string;
+}
+
 export interface SheetHost {
   /** "office" or "workbench": shown in the pane and used by nothing else. */
   readonly kind: string;
@@ -69,6 +77,21 @@ export interface SheetHost {
   onSelectionChange(listener: () => void): () => void;
   /** The host's theme when it tells one, otherwise undefined (the page then follows prefers-color-scheme). */
   theme(): "light" | "dark" | undefined;
+  /**
+   * A value the add-in keeps in the workbook under `name` (undefined when none is kept), and
+   * keeping one. In the spreadsheet host these are the document settings
+   * (`Office.context.document.settings`: saved per add-in and per document, persisted by
+   * `saveAsync`; https://learn.microsoft.com/javascript/api/office/office.settings); the
+   * workbench keeps them with its workbook. Optional; a host that has the call but not the
+   * requirement set rejects with a SheetHostError of code "RequirementNotMet".
+   */
+  readSetting?(name: string): Promise<unknown>;
+  /**
+   * The workbook's cells whose formula holds a SPAN call, sheet by sheet, row by row, at most
+   * `limit` of them (the report looks for checks of its member among them). Optional.
+   */
+  spanFormulas?(limit: number): Promise<FormulaCell[]>;
+  writeSetting?(name: string, value: unknown): Promise<void>;
 }
 
 /** "Sheet!A1" with the sheet name quoted when it needs it. */

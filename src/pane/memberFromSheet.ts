@@ -14,14 +14,15 @@ export type MemberSources = Record<MemberArgument, ArgSource>;
 /**
  * What the selected cell computes, as the pane draws it: one member under one combination
  * (REACTIONS, SHEAR, ..., DIAGRAM, the checks), an envelope over combinations (ENVELOPE,
- * PEAKS), an influence line (INFLUENCE) or a moving load (MOVING).
+ * PEAKS), an influence line (INFLUENCE), a moving load (MOVING), or natural modes
+ * (FREQUENCIES, MODESHAPE).
  */
-export type CellKind = "member" | "envelope" | "peaks" | "influence" | "moving";
+export type CellKind = "member" | "envelope" | "peaks" | "influence" | "moving" | "vibration";
 
-const KIND: Partial<Record<string, CellKind>> = { envelope: "envelope", peaks: "peaks", influence: "influence", moving: "moving" };
+const KIND: Partial<Record<string, CellKind>> = { envelope: "envelope", peaks: "peaks", influence: "influence", moving: "moving", frequencies: "vibration", modeShape: "vibration" };
 
 /** The arguments besides the member's that the pane needs to draw a study cell. */
-export const STUDY_ARGUMENTS = ["combos", "pattern", "psi0", "effect", "axles", "spacings", "quantity", "x", "positions"] as const;
+export const STUDY_ARGUMENTS = ["combos", "pattern", "psi0", "effect", "axles", "spacings", "quantity", "x", "positions", "mass", "modes", "mode", "g"] as const;
 /** Study arguments the drawing does not need: an expression there is skipped, not refused. */
 const OPTIONAL_FOR_DRAWING: readonly string[] = ["x", "positions"];
 export type StudyArgument = (typeof STUDY_ARGUMENTS)[number];
@@ -114,6 +115,17 @@ function unitsOf(arg: unknown): Units {
   } catch {
     return NO_UNITS;
   }
+}
+
+/**
+ * One argument's values as a worksheet function would receive them: a range, spill or name is
+ * read through the host, a literal or array constant taken as written, a skipped one is null.
+ * Rejects for an expression the pane cannot work out, a missing name or a range that does not spill.
+ */
+export async function argumentValue(host: SheetHost, source: ArgSource | undefined, sheet: string): Promise<{ value: unknown; range?: string }> {
+  if (source === undefined) return { value: null };
+  const range = await rangeOf(host, source, sheet);
+  return range !== undefined ? { value: await host.getValues(range), range } : { value: literalValue(source) };
 }
 
 /** Reads every member argument's values through the host and builds the resolved member. */

@@ -19,18 +19,21 @@
  * documented error codes (https://learn.microsoft.com/office/dev/add-ins/testing/application-specific-api-error-handling).
  * Optional requirement sets (requirements.ts) are checked before the API that needs them.
  */
-import { parseBlock } from "./addresses";
+import { cellText, parseBlock } from "./addresses";
 import { isDarkColour } from "./draw/palette";
-import { SheetHostError, qualify, splitAddress, type CellInput, type CellValue, type ChartRequest, type Selection, type SheetHost } from "./host";
+import { SheetHostError, qualify, splitAddress, type CellInput, type CellValue, type ChartRequest, type FormulaCell, type Selection, type SheetHost } from "./host";
 import { addressKey, nameKey, planReads, rangeOfNameFormula } from "./readAhead";
 import { BASELINE, OPTIONAL, missingSetMessage, officeRequirements, type Feature, type IsSetSupported } from "./requirements";
+
+/** Cells of one sheet's used range read for SPAN formulas, at most (a larger sheet is skipped). */
+export const FORMULA_SCAN_CELLS = 200_000;
 
 export type ExcelRun = <T>(batch: (context: Excel.RequestContext) => Promise<T>) => Promise<T>;
 
 /** The parts of `Office` the host uses (typed from office.js so the requirement-set check sees them). */
 export interface OfficeLike {
   context: {
-    document: Pick<Office.Document, "addHandlerAsync" | "removeHandlerAsync">;
+    document: Pick<Office.Document, "addHandlerAsync" | "removeHandlerAsync"> & { settings?: Pick<Office.Settings, "get" | "set" | "saveAsync"> };
     officeTheme?: Pick<Office.OfficeTheme, "bodyBackgroundColor">;
     requirements?: Pick<Office.RequirementSetSupport, "isSetSupported">;
   };
@@ -376,6 +379,70 @@ export class OfficeHost implements SheetHost {
     };
     this.office.context.document.addHandlerAsync(type, handler);
     return () => this.office.context.document.removeHandlerAsync(type, { handler });
+  }
+
+  /**
+   * The SPAN formula cells of the workbook, from each sheet's used range: sync 1 lists the
+   * sheets and the size of each used range (value cells only, so formatting alone does not
+   * count), sync 2 loads the formulas of those within FORMULA_SCAN_CELLS (a larger sheet is
+   * skipped, never read in part: a partial read could miss a check and say nothing).
+   */
+  async spanFormulas(limit: number): Promise<FormulaCell[]> {
+    try {
+      return await this.run(async (context) => {
+        const sheets = context.workbook.worksheets;
+        sheets.load("items/name");
+        await context.sync();
+        const used = sheets.items.map((sheet) => {
+          const range = sheet.getUsedRangeOrNullObject(true);
+          range.load("address, rowCount, columnCount");
+          return { name: sheet.name, range };
+        });
+        await context.sync();
+        const read = used.filter((u) => !u.range.isNullObject && u.range.rowCount * u.range.columnCount <= FORMULA_SCAN_CELLS);
+        for (const u of read) u.range.load("formulas");
+        await context.sync();
+        const out: FormulaCell[] = [];
+        for (const u of read) {
+          const from = parseBlock(splitAddress(u.range.address).address).from;
+          u.range.formulas.forEach((row, r) =>
+            row.forEach((formula, c) => {
+              if (out.length < limit && typeof formula === "string" && formula.startsWith("=") && /SPAN/i.test(formula)) out.push({ sheet: u.name, cell: cellText({ row: from.row + r, col: from.col + c }), formula });
+            }),
+          );
+        }
+        return out;
+      });
+    } catch (error) {
+      throw hostFailure(error, "The workbook's formulas could not be read");
+    }
+  }
+
+  /** A document setting of this add-in (Office.Settings.get: the in-memory copy loaded with the document). */
+  async readSetting(name: string): Promise<unknown> {
+    this.need(OPTIONAL.settings);
+    const settings = this.office.context.document.settings;
+    if (!settings) throw new SheetHostError(missingSetMessage(OPTIONAL.settings), "RequirementNotMet");
+    const value: unknown = settings.get(name);
+    return value === null ? undefined : value;
+  }
+
+  /**
+   * Sets a document setting and saves it into the workbook: `set` changes only the in-memory
+   * copy, and "the developer is responsible for calling the saveAsync method"
+   * (https://learn.microsoft.com/javascript/api/office/office.settings). A failed save rejects.
+   */
+  async writeSetting(name: string, value: unknown): Promise<void> {
+    this.need(OPTIONAL.settings);
+    const settings = this.office.context.document.settings;
+    if (!settings) throw new SheetHostError(missingSetMessage(OPTIONAL.settings), "RequirementNotMet");
+    settings.set(name, value);
+    await new Promise<void>((resolve, reject) => {
+      settings.saveAsync((result) => {
+        if (String(result.status) === "succeeded") resolve();
+        else reject(new SheetHostError(`Excel did not save the setting in the workbook: ${result.error?.message ?? "no reason given"}`, "SaveFailed"));
+      });
+    });
   }
 
   theme(): "light" | "dark" | undefined {

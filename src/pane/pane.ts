@@ -8,6 +8,7 @@ import { debounce } from "./debounce";
 import { drawDiagrams, type Drawing } from "./draw/diagramSvg";
 import { escapeXml, formatValue } from "./draw/format";
 import { drawEnvelope, drawInfluence, drawMoving, type Figure } from "./draw/studySvg";
+import { drawModes } from "./draw/modeSvg";
 import { computeStudy, envelopeAt, influenceAt, type Study } from "./study";
 import type { Theme } from "./draw/palette";
 import { readoutAt, readoutText, xAtPixel } from "./draw/readout";
@@ -19,8 +20,11 @@ import { cellMessage } from "./cellMessage";
 import { chartRequests, diagramRows, planTable, tableInPlace, writeTable } from "./writeBack";
 import { DEFAULT_POINTS, describeError } from "../sheet";
 import { NO_UNITS, type Units } from "./units";
+import { REPORT_HTML, ReportPanel } from "./reportPanel";
 
-export const CAUTION = "Results are an aid to a qualified engineer, who checks them; local codes and licensed practice govern.";
+import { CAUTION } from "./caution";
+
+export { CAUTION };
 
 export interface PaneElements {
   root: HTMLElement;
@@ -58,6 +62,7 @@ export const PANE_HTML = `
   <button type="button" class="export-svg">Export SVG</button>
   <button type="button" class="export-png">Export PNG</button>
 </div>
+<div class="report-area" hidden>${REPORT_HTML}</div>
 <div class="confirm" role="alertdialog" hidden><p></p><button type="button" class="confirm-yes">Write anyway</button> <button type="button" class="confirm-no">Cancel</button></div>
 `;
 
@@ -75,6 +80,9 @@ export class Pane {
   private unsubscribe: (() => void) | undefined;
   /** Milliseconds the last redraw took (solve, diagram, SVG, into the page). */
   lastDrawMs = 0;
+  /** The formula text of the drawn cell (for its report). */
+  private formulaText = "";
+  readonly report: ReportPanel;
 
   constructor(
     private readonly host: SheetHost,
@@ -84,6 +92,13 @@ export class Pane {
     root.classList.add("spanwise-pane");
     root.innerHTML = PANE_HTML;
     el(root, ".host-kind").textContent = `(${host.kind})`;
+    this.report = new ReportPanel(
+      host,
+      root,
+      () => (this.resolved ? { member: this.resolved, formula: this.resolved.call ? this.formulaText : "(input ranges picked in the pane)" } : undefined),
+      (text, kind) => this.outcome(text, kind),
+      download,
+    );
     this.bind();
   }
 
@@ -152,6 +167,7 @@ export class Pane {
         if (lookup.reason === "unresolved") this.showPick(lookup.call.args as Partial<MemberSources>, lookup.unresolved);
         return;
       }
+      this.formulaText = selection.formula;
       this.use(lookup.member);
       const why = await cellMessage(this.host, selection);
       if (generation !== this.generation) return;
@@ -174,6 +190,7 @@ export class Pane {
       : "no units argument: values in the member's own consistent units";
     this.fillCombos(member);
     el(this.root, ".controls").hidden = false;
+    el(this.root, ".report-area").hidden = false;
     this.redraw();
   }
 
@@ -278,6 +295,9 @@ export class Pane {
       this.drawing = drawInfluence({ member: study.member, effect: study.effect, xs: study.xs, values: study.values, theme, width, subtitle: `${name}: ${study.effect}` });
     } else if (study.kind === "moving") {
       this.drawing = drawMoving({ member: study.member, effect: study.effect, placements: study.placements, line: study.line, theme, width, subtitle: `${name}: the train's extremes of ${study.effect}` });
+    } else if (study.kind === "vibration") {
+      const more = study.listed > study.modes.length ? `, first ${study.modes.length} of ${study.listed} modes` : "";
+      this.drawing = drawModes({ member: study.member, modes: study.modes, theme, width, subtitle: `${name}: natural modes${more}; vibration acceptance is the governing guide's and the engineer's call` });
     } else return performance.now() - started;
     figure.innerHTML = this.drawing.svg;
     el(this.root, ".actions").hidden = false;

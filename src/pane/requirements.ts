@@ -40,6 +40,13 @@ export const OPTIONAL = {
   spill: { name: "ExcelApi", version: "1.12", feature: "reading a spilled range (A1#)" },
   /** Charts with x values and extra series: `ChartSeries.setXAxisValues`, `setValues`, `ChartSeriesCollection.add`. */
   chartSeries: { name: "ExcelApi", version: "1.7", feature: "inserting charts" },
+  /**
+   * Document settings (`Settings.get`, `set`, `saveAsync`): the Common API set "Settings",
+   * version 1.1 ("All of these API requirement sets are version 1.1, unless otherwise
+   * specified", https://learn.microsoft.com/javascript/api/requirement-sets/common/office-add-in-requirement-sets).
+   * Without it the report's title block is asked for each report and not kept in the workbook.
+   */
+  settings: { name: "Settings", version: "1.1", feature: "keeping the title block in the workbook" },
 } as const satisfies Record<string, Feature>;
 
 export type IsSetSupported = (name: string, version: string) => boolean;

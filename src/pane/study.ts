@@ -8,6 +8,7 @@
 import type { Load, Member, Quantity } from "../core";
 import { describeError, readEffect, readMember, readTrain, sheetEnvelope, sheetInfluence, sheetMoving, sheetPeaks } from "../sheet";
 import type { ResolvedMember } from "./memberFromSheet";
+import { computeVibration, type Vibration } from "./vibrationStudy";
 
 export type EnvelopeQuantity = "shear" | "moment" | "deflection";
 
@@ -45,6 +46,7 @@ export interface MovingPlacement {
 }
 
 export type Study =
+  | Vibration
   | { kind: "envelope" | "peaks"; member: Member; curves: EnvelopeCurve[]; peaks: PeakRow[] | undefined }
   | { kind: "influence"; member: Member; effect: string; xs: number[]; values: number[] }
   | { kind: "moving"; member: Member; effect: string; placements: MovingPlacement[]; line: { xs: number[]; values: number[] } | undefined };
@@ -196,6 +198,8 @@ export function computeStudy(resolved: ResolvedMember): Study | { error: string 
         const line = effect.kind === "absolute-moment" ? undefined : influenceLineOf(resolved, member, s.effect ?? null);
         return { kind: "moving", member, effect: text(s.effect), placements, line };
       }
+      case "vibration":
+        return computeVibration(resolved);
       default:
         return { error: "this cell computes one member: it is drawn as a member" };
     }

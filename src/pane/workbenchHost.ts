@@ -4,10 +4,11 @@
  */
 import type { WorkbenchApi } from "../workbench/api";
 import { blockText, parseBlock } from "./addresses";
-import { qualify, splitAddress, type CellInput, type CellValue, type ChartRequest, type Selection, type SheetHost } from "./host";
+import { qualify, splitAddress, type FormulaCell, type CellInput, type CellValue, type ChartRequest, type Selection, type SheetHost } from "./host";
 
 /** The parts of the workbench interface the pane uses; optional ones are used when present. */
 export type WorkbenchLike = Pick<WorkbenchApi, "getSelection" | "getFormula" | "getValues" | "setValues" | "onSelectionChange" | "addChart" | "spillAnchor"> & {
+  sheets?(): string[];
   spillRange?(address: string): string | undefined;
   resolveName?(name: string, scope?: string): string | undefined;
 };
@@ -18,6 +19,9 @@ function cellValue(value: unknown): CellValue {
   return value as CellValue;
 }
 
+/** The part of each workbench sheet searched for SPAN formulas: A1 to AZ1000. */
+export const FORMULA_SCAN = { rows: 1000, cols: 52 };
+
 function numbers(rows: CellValue[][]): number[] {
   return rows.map((row) => (typeof row[0] === "number" ? row[0] : Number.NaN));
 }
@@ -26,6 +30,12 @@ export class WorkbenchHost implements SheetHost {
   readonly kind = "workbench";
   /** True while this host writes into the workbench (see onSelectionChange). */
   private writing = false;
+  /**
+   * The workbench's equivalent of the document settings: kept beside its in-page workbook for
+   * as long as the page holds it (the workbench has no add-in settings of its own). Values are
+   * stored as JSON text, so what is read back is a copy, as a host's settings would be.
+   */
+  private readonly settings = new Map<string, string>();
   constructor(private readonly api: WorkbenchLike) {}
 
   private write(address: string, block: CellInput[][]): void {
@@ -141,5 +151,37 @@ export class WorkbenchHost implements SheetHost {
 
   theme(): "light" | "dark" | undefined {
     return undefined;
+  }
+
+  /**
+   * The SPAN formula cells of the workbench's sheets (FORMULA_SCAN of each), from its values:
+   * a formula cell always has a value, so only cells with one are asked for their formula.
+   */
+  async spanFormulas(limit: number): Promise<FormulaCell[]> {
+    const out: FormulaCell[] = [];
+    const last = blockText({ from: { row: FORMULA_SCAN.rows - 1, col: FORMULA_SCAN.cols - 1 }, to: { row: FORMULA_SCAN.rows - 1, col: FORMULA_SCAN.cols - 1 } });
+    for (const sheet of this.api.sheets?.() ?? [this.api.getSelection().sheet]) {
+      const values = this.api.getValues(qualify(sheet, `A1:${last}`));
+      for (let r = 0; r < values.length; r++) {
+        for (let c = 0; c < values[r].length; c++) {
+          if (values[r][c] === null || values[r][c] === undefined) continue;
+          const cell = blockText({ from: { row: r, col: c }, to: { row: r, col: c } });
+          const formula = this.api.getFormula(qualify(sheet, cell));
+          if (formula === undefined || !/SPAN/i.test(formula)) continue;
+          out.push({ sheet, cell, formula });
+          if (out.length >= limit) return out;
+        }
+      }
+    }
+    return out;
+  }
+
+  async readSetting(name: string): Promise<unknown> {
+    const text = this.settings.get(name);
+    return text === undefined ? undefined : JSON.parse(text);
+  }
+
+  async writeSetting(name: string, value: unknown): Promise<void> {
+    this.settings.set(name, JSON.stringify(value));
   }
 }

@@ -24,7 +24,10 @@ export function short(value: number, digits = 5): string {
 }
 
 export function supportText(s: Support): string {
-  return s.kind === "spring" ? `spring k = ${num(s.stiffness)}` : s.kind;
+  const base = s.kind === "spring" ? `spring k = ${num(s.stiffness)}` : s.kind;
+  const rotational = "rotational" in s && typeof s.rotational === "number" ? s.rotational : undefined;
+  if (rotational === undefined) return base;
+  return `${s.kind === "free" ? "" : `${base} + `}rotational spring k = ${num(rotational)} per radian`;
 }
 
 export function loadText(l: Load): string {

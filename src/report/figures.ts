@@ -51,6 +51,24 @@ function supportShapes(s: Support, x: number, y: number): Shape[] {
   }
 }
 
+/** A node's rotational spring (partial fixity): a small coil left of the node, tied to it, with k per radian. */
+function rotationalShapes(s: Support, x: number, y: number): Shape[] {
+  const k = "rotational" in s && typeof s.rotational === "number" ? s.rotational : undefined;
+  if (k === undefined) return [];
+  const [cx, cy] = [x - 11, y - 8];
+  const pts: [number, number][] = [];
+  for (let i = 0; i <= 30; i++) {
+    const t = (i / 30) * 3 * Math.PI;
+    const r = 1.5 + (3.5 * i) / 30;
+    pts.push([cx + r * Math.cos(t), cy + r * Math.sin(t)]);
+  }
+  return [
+    { kind: "line", x1: x, y1: y - 1, x2: cx + 5, y2: cy, width: 0.8 },
+    { kind: "polyline", points: pts, width: 0.8 },
+    { kind: "text", x: cx - 6, y: cy + 2, text: `k_rot=${short(k, 4)}`, size: 6.5, anchor: "end" },
+  ];
+}
+
 function loadShapes(l: Load, X: (x: number) => number, beamY: number, level: number): Shape[] {
   const top = beamY - 16 - level * 18;
   const label = `${l.loadCase ? l.loadCase + ": " : ""}`;
@@ -100,7 +118,7 @@ export function memberSketch(member: Member, lengthUnit: string): { height: numb
   const beamY = 24 + levels * 18;
   const shapes: Shape[] = [{ kind: "line", x1: X(0), y1: beamY, x2: X(L), y2: beamY, width: 2 }];
   member.loads.slice(0, 12).forEach((l, i) => shapes.push(...loadShapes(l, X, beamY, i)));
-  member.supports.forEach((s, i) => shapes.push(...supportShapes(s, X(xs[i]), beamY)));
+  member.supports.forEach((s, i) => shapes.push(...supportShapes(s, X(xs[i]), beamY), ...rotationalShapes(s, X(xs[i]), beamY)));
   const dimY = beamY + 34;
   const unit = lengthUnit ? ` ${lengthUnit}` : "";
   xs.forEach((x) => shapes.push({ kind: "line", x1: X(x), y1: dimY - 4, x2: X(x), y2: dimY + 4, width: 0.5 }));

@@ -24,6 +24,34 @@ export interface MemberReportInput {
   combo: string;
   /** The member and solution under that combination. */
   factored: { member: Member; solution: Solution };
+  /** Checks the workbook computes for this member, in sheet order; none when it computes none. */
+  checks?: ReportCheck[];
+  /** The section, when a check names one from SPAN.SECTION. */
+  section?: ReportSection;
+}
+
+/**
+ * A check the workbook computes for this member (SPAN.STRESS, SPAN.SHEARSTRESS,
+ * SPAN.DEFLECTIONCHECK, SPAN.UTILISATION), as that cell computes it with its own arguments.
+ */
+export interface ReportCheck {
+  /** Sheet-qualified cell of the check's formula, its function and its text. */
+  cell: string;
+  fn: string;
+  formula: string;
+  columns: string[];
+  rows: string[][];
+  /** Per row: true where the row fails (a "fail" verdict, a utilisation above 1). */
+  failing?: boolean[];
+  /** Set when the check's cell errors: its code and message (then rows is empty). */
+  error?: string;
+}
+
+/** The section a check uses when it is a SPAN.SECTION result: its cell, formula and rows (property, value, unit). */
+export interface ReportSection {
+  cell: string;
+  formula: string;
+  rows: string[][];
 }
 
 /** Stations of the printed diagrams (the peaks are added to them by the core's diagram). */
@@ -109,6 +137,8 @@ export function memberDocument(input: MemberReportInput, info: BuildInfo): Print
   });
   blocks.push({ kind: "text", tone: "muted", text: "Shear is the value of largest magnitude in the span; deflection is down-positive, the value of largest magnitude in the span. x is measured from the member's left end." });
 
+  blocks.push(...checkBlocks(input.checks ?? [], input.section));
+
   const rows = diagram(solution, REPORT_POINTS);
   const panels = [
     { title: `Shear V${unitText(force)}`, values: rows.map((r) => r.shear) },
@@ -120,6 +150,38 @@ export function memberDocument(input: MemberReportInput, info: BuildInfo): Print
   blocks.push({ kind: "heading", level: 2, text: `Diagrams, factored${input.combo ? ` (${input.combo})` : ""}: ${mark}` });
   blocks.push({ kind: "figure", width: FIGURE_WIDTH, height: figure.height, shapes: figure.shapes, caption: "Shared x axis; dashed lines mark the supports; each diagram's maximum and minimum are marked with value and x." });
   return { title: `Member calculation ${mark}`, footer: footerLines(info, CAUTION), blocks };
+}
+
+/** The section and the checks, as the workbook computes them; a sentence when there are none. */
+export function checkBlocks(checks: readonly ReportCheck[], section: ReportSection | undefined): Block[] {
+  const blocks: Block[] = [];
+  if (section) {
+    blocks.push({ kind: "heading", level: 2, text: "Section" });
+    blocks.push({ kind: "text", text: `From ${section.cell}: ${section.formula}` });
+    blocks.push({ kind: "table", columns: ["Property", "Value", "Unit"], widths: [2, 1.4, 1], align: ["left", "right", "left"], rows: section.rows });
+  }
+  blocks.push({ kind: "heading", level: 2, text: "Checks" });
+  if (checks.length === 0) {
+    blocks.push({ kind: "text", tone: "muted", text: "The workbook computes no stress, deflection-limit or utilisation check for this member (SPAN.STRESS, SPAN.SHEARSTRESS, SPAN.DEFLECTIONCHECK, SPAN.UTILISATION of its results)." });
+    return blocks;
+  }
+  for (const check of checks) {
+    blocks.push({ kind: "heading", level: 3, text: `${check.fn} at ${check.cell}` });
+    blocks.push({ kind: "text", text: check.formula });
+    if (check.error) {
+      blocks.push({ kind: "text", tone: "fail", text: `The cell errors: ${check.error}` });
+      continue;
+    }
+    blocks.push({
+      kind: "table",
+      columns: check.columns,
+      align: check.columns.map((_, i) => (check.rows.every((r) => /^[-+\d.e]*$/i.test(r[i] ?? "")) ? "right" : "left")),
+      rows: check.rows,
+      tones: check.rows.map((_, i) => (check.failing?.[i] ? "fail" : "normal")),
+    });
+  }
+  blocks.push({ kind: "text", tone: "muted", text: "Each check is computed with its own cell's arguments (its combination may differ from the member cell's). Allowable stresses, deflection limits and capacities are the engineer's, from the governing code." });
+  return blocks;
 }
 
 function pairs(items: string[][]): string[][] {

@@ -8,7 +8,7 @@ export interface BuildInfo {
   date: string;
 }
 
-export { CAUTION } from "../pane/pane";
+export { CAUTION } from "../pane/caution";
 
 /** The footer line of every page: the caution, then the version and the date. */
 export function footerLines(info: BuildInfo, caution: string): string[] {

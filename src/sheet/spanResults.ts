@@ -78,8 +78,8 @@ export function sheetCaseReactions(
     const given = readMemberUnits(args.units);
     const scale = outputScale(given);
     const member = readMember({ ...args, combo: null });
-    const { cases, reactions } = caseReactions(given === null ? member : memberInOwnUnits(member, given));
     const withCombo = readComboText(args.combo) !== "";
+    const { cases, reactions } = caseReactions(given === null ? member : memberInOwnUnits(member, given), withCombo);
     const combined = withCombo ? solvedMember(args, given).reactions : null;
     const unit = kind === "force" ? scale.force : scale.moment;
     const what = kind === "force" ? "a vertical reaction" : "a moment reaction";

@@ -7,9 +7,15 @@ import { isClose } from "./close";
 import { relDiff } from "../core/tolerance";
 import { lengthOf, scalesOf } from "./members";
 
+/**
+ * A compared value. `scale`, when given, is the quantity's own scale on the member (an
+ * independent reference's largest magnitude of it): the value then agrees when it is within
+ * the tolerance of that scale, as the exact audit judges (a value near zero between larger
+ * ones is not asked for relative accuracy it cannot have). Without it, relative agreement.
+ */
 export type Check =
-  | { reaction: number; force?: number; moment?: number }
-  | { quantity: Quantity; at: number; value: number }
+  | { reaction: number; force?: number; moment?: number; scale?: { force: number; moment: number } }
+  | { quantity: Quantity; at: number; value: number; scale?: number }
   | { peak: "max" | "min"; quantity: Quantity; value: number; x?: number };
 
 const scaleKey = { shear: "force", moment: "moment", slope: "slope", deflection: "deflection" } as const;
@@ -45,7 +51,12 @@ export function checkRows(member: Member, solution: Solution, checks: Check[]): 
   const L = lengthOf(member);
   const out: CheckRow[] = [];
   let fn = "";
-  const expect = (label: string, actual: number, expected: number, scale: number): void => {
+  const expect = (label: string, actual: number, expected: number, scale: number, own?: number): void => {
+    if (own !== undefined) {
+      const diff = Number.isFinite(actual) ? relDiff(actual, expected, own) : Infinity;
+      out.push({ label, fn, expected, computed: actual, relDiff: diff, pass: isClose(actual, expected, tolerance.HANDBOOK_TOLERANCE, own) });
+      return;
+    }
     const pass = agrees(actual, expected, scale);
     const diff = Number.isFinite(actual) ? (expected === 0 ? relDiff(actual, 0, scale) : relDiff(actual, expected)) : Infinity;
     out.push({ label, fn, expected, computed: actual, relDiff: diff, pass });
@@ -54,11 +65,11 @@ export function checkRows(member: Member, solution: Solution, checks: Check[]): 
     fn = functionOf(check);
     if ("reaction" in check) {
       const r = solution.reactions[check.reaction];
-      if (check.force !== undefined) expect(`reaction ${check.reaction} force`, r ? r.force : NaN, check.force, scales.force);
-      if (check.moment !== undefined) expect(`reaction ${check.reaction} moment`, r ? r.moment : NaN, check.moment, scales.moment);
+      if (check.force !== undefined) expect(`reaction ${check.reaction} force`, r ? r.force : NaN, check.force, scales.force, check.scale?.force);
+      if (check.moment !== undefined) expect(`reaction ${check.reaction} moment`, r ? r.moment : NaN, check.moment, scales.moment, check.scale?.moment);
     } else if ("at" in check) {
       const scale = scales[scaleKey[check.quantity]];
-      expect(`${check.quantity} at x = ${check.at}`, valueAt(solution, check.quantity, check.at), check.value, scale);
+      expect(`${check.quantity} at x = ${check.at}`, valueAt(solution, check.quantity, check.at), check.value, scale, check.scale);
     } else {
       const e = extremes(solution, check.quantity);
       const scale = scales[scaleKey[check.quantity]];

@@ -4,7 +4,7 @@
  * diagrams and formulas, two equal spans with uniform load — from memory). Invariant:
  * superposition — every combination's reactions equal the factored sum of the cases'.
  */
-import { applyCombination, caseReactions, MAX_CASES, parseCombination, solve } from "../../src/core";
+import { applyCombination, caseReactions, MAX_CASES, parseCombination, solve, WORK_LIMIT, workOf } from "../../src/core";
 import { beam, couple, point, udl } from "./kit/members";
 
 describe("reactions by case", () => {
@@ -43,5 +43,22 @@ describe("reactions by case", () => {
     expect(() => caseReactions(beam([5], ["pin", "pin"], []))).toThrow(/no load case/);
     const many = Array.from({ length: MAX_CASES + 1 }, (_, i) => point(1, 2, `C${i}`));
     expect(() => caseReactions(beam([5], ["pin", "pin"], many))).toThrow(/at most 50/);
+  });
+
+  test("the size limit counts a solve per case and the combination's, and refuses before solving", () => {
+    // 1,000 spans, one uniform load per case: size 10 (cases x 1000 + cases), plus 20 (1000 + cases) with the combination.
+    const spans = Array.from({ length: 1000 }, () => 2);
+    const supports = Array.from({ length: 1001 }, () => "pin" as const);
+    const withCases = (n: number) => beam(spans, supports, Array.from({ length: n }, (_, i) => udl(1 + i, 0, 2000, `C${i}`)), 1e4);
+    const counts = (n: number, combinations: number) => ({ spans: 1000, loads: n, cases: n, pattern: "none" as const, combinations, positions: 0, axles: 0 });
+    expect(workOf("CASEREACTIONS", counts(39, 0))).toBe(390390);
+    expect(workOf("CASEREACTIONS", counts(39, 1))).toBe(411170);
+    expect(workOf("CASEREACTIONS", counts(38, 1))).toBe(401140);
+    expect(workOf("CASEREACTIONS", counts(37, 1))).toBe(391110);
+    expect(workOf("CASEREACTIONS", counts(40, 0))).toBeGreaterThan(WORK_LIMIT);
+    expect(caseReactions(withCases(39)).cases).toHaveLength(39);
+    expect(caseReactions(withCases(37), true).cases).toHaveLength(37);
+    expect(() => caseReactions(withCases(38), true)).toThrow("CASEREACTIONS: this call is too large (1000 spans, 38 loads, 38 case labels, and the combination: size 401140, at most 400000)");
+    expect(() => caseReactions(withCases(40))).toThrow(/CASEREACTIONS: this call is too large \(1000 spans, 40 loads, 40 case labels, no combination: size 400400/);
   });
 });

@@ -4,6 +4,7 @@
  * counts, and every row against the independent force-method solution on random members.
  */
 import fc from "fast-check";
+import { candidates } from "../../src/core/extremes";
 import { diagram, extremes, solve, tolerance, valueAt, type DiagramRow, type Member, type Quantity } from "../../src/core";
 import { HANDBOOK_TOLERANCE } from "../../src/core/tolerance";
 import { thrown } from "./kit/errors";
@@ -117,6 +118,52 @@ describe("diagram against the independent reference on random members", () => {
 
   test("every row matches the reference on its side of any jump; the even stations are all there", () => {
     fc.assert(fc.property(loadedMember, fc.integer({ min: 2, max: 41 }), check), runs(120));
+  });
+});
+
+describe("diagram stations: the priority rule where stations fall within rounding", () => {
+  /**
+   * The rule written the plain way: every even station (priority 1), piece boundary (2) and
+   * peak candidate (a boundary's 2, else 0) sorted by x; a station within POSITION_TOLERANCE of
+   * the length from the last one kept joins it, taking its x when its priority is higher.
+   */
+  function referenceStations(m: Member, points: number): number[] {
+    const s = solve(m);
+    const tol = tolerance.POSITION_TOLERANCE * s.length;
+    const boundaries = new Set(s.pieces.map((p) => p.x0));
+    const marked: [number, number][] = [];
+    for (let i = 0; i < points; i++) marked.push([i === points - 1 ? s.length : (s.length * i) / (points - 1), 1]);
+    for (const p of s.pieces) marked.push([p.x0, 2]);
+    for (const q of s.hasStiffness ? QUANTITIES : QUANTITIES.slice(0, 2)) for (const c of candidates(s, q)) marked.push([c.x, boundaries.has(c.x) ? 2 : 0]);
+    marked.sort((a, b) => a[0] - b[0]);
+    const kept: number[] = [];
+    let priority = -1;
+    for (const [x, p] of marked) {
+      if (kept.length > 0 && x - kept[kept.length - 1] <= tol) {
+        if (p <= priority) continue;
+        kept[kept.length - 1] = x;
+      } else kept.push(x);
+      priority = p;
+    }
+    return kept;
+  }
+
+  test("the stations (distinct x of the rows) are the rule's, exactly, on random members", () => {
+    fc.assert(
+      fc.property(loadedMember, fc.integer({ min: 2, max: 300 }), (m, points) => {
+        const xs = diagram(solve(m), points).map((r) => r.x);
+        expect(xs.filter((x, i) => i === 0 || x !== xs[i - 1])).toEqual(referenceStations(m, points));
+      }),
+      runs(300),
+    );
+  });
+
+  test("a load a hair from an even station: the load position is kept, not the station", () => {
+    const m = member({ spans: [10], EI: 100, loads: [point(5, 5 + 1e-14), udl(1, 0, 10)] });
+    const xs = diagram(solve(m), 11).map((r) => r.x);
+    expect(xs).toContain(5 + 1e-14);
+    expect(xs).not.toContain(5);
+    expect(xs.filter((x, i) => i === 0 || x !== xs[i - 1])).toEqual(referenceStations(m, 11));
   });
 });
 

@@ -119,7 +119,7 @@ describe("production build", () => {
     expect(shipped.filter((f) => /^office-js\//.test(f))).toEqual([]);
     expect(shipped.filter((f) => /workbench/i.test(f))).toEqual([]);
     expect(shipped.filter((f) => f.endsWith(".png") && !/^assets\/icon-\d+\.png$/.test(f))).toEqual([]);
-    const allowed = /^(functions\.(js|json|html)|taskpane\.(js|html)|manifest\.xml|support\.html|help\/[a-z]+\.html|assets\/icon-\d+\.png|[a-z]+\.js\.LICENSE\.txt)$/;
+    const allowed = /^(functions\.(js|json|html)|taskpane\.(js|html)|report-pdf\.js|manifest\.xml|support\.html|help\/[a-z]+\.html|assets\/icon-\d+\.png|[a-z-]+\.js\.LICENSE\.txt)$/;
     expect(shipped.filter((f) => !allowed.test(f))).toEqual([]);
     expect(fs.readFileSync(path.join(out, "functions.js"), "utf8")).not.toMatch(/hyperformula/i);
     expect(fs.readFileSync(path.join(out, "taskpane.js"), "utf8")).not.toMatch(/hyperformula/i);

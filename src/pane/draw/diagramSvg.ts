@@ -3,7 +3,7 @@
  * moment and (with EI) deflection on a shared x axis, with peaks labelled. Pure: a string,
  * so the same text is drawn in the pane, exported as SVG, and tested in Node.
  */
-import { diagram, extremes, type DiagramRow, type Member, type Quantity, type Solution } from "../../core";
+import { diagram, extremes, valueAt, type DiagramRow, type Member, type Quantity, type Solution } from "../../core";
 import { quantityUnits, withUnit, type Units } from "../units";
 import { escapeXml, formatValue } from "./format";
 import { layoutFor, type DiagramQuantity, type Layout } from "./layout";
@@ -11,6 +11,7 @@ import { palette, type Palette, type Theme } from "./palette";
 import { panelSvg, type PanelResult } from "./panel";
 import type { PeakLabel } from "./peaks";
 import { sketchSvg } from "./sketch";
+import { springMomentMarks } from "./rotationalSpring";
 
 export interface DrawInput {
   member: Member;
@@ -74,6 +75,11 @@ export function drawDiagrams(input: DrawInput, rows = diagram(input.solution, dr
     const result = panelSvg({ box, xUnit: u.x, ...specs[box.quantity as DiagramQuantity] }, layout, rows, values, peak, c, tiny);
     panels.push({ quantity: box.quantity as DiagramQuantity, frame: result.frame, labels: result.labels });
     parts.push(result.svg);
+    if (q === "moment") {
+      // The moment at the node as valueAt reads it (just right of an inner node, just left of the right end).
+      const at = (x: number): number => valueAt(solution, "moment", x);
+      parts.push(springMomentMarks(member.supports, solution.nodeX, solution.reactions.map((r) => r.moment), (x) => at(x), result.frame, u.moment, c));
+    }
   }
   const x = layout.x;
   const nodeLines = solution.nodeX

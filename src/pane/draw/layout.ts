@@ -6,7 +6,7 @@ import { linearScale, type LinearScale } from "./scale";
 
 /** The member diagrams; an influence line has a panel of its own kind. */
 export type DiagramQuantity = "shear" | "moment" | "deflection";
-export type PanelQuantity = DiagramQuantity | "influence";
+export type PanelQuantity = DiagramQuantity | "influence" | "mode";
 
 export interface PanelBox {
   quantity: PanelQuantity;

@@ -6,6 +6,7 @@ import type { Load, Member, Support } from "../../core";
 import { escapeXml, formatValue } from "./format";
 import type { Layout } from "./layout";
 import type { Palette } from "./palette";
+import { rotationalSpringSvg } from "./rotationalSpring";
 
 export interface SketchUnits {
   force: string;
@@ -127,6 +128,7 @@ export function sketchSvg(member: Member, layout: Layout, units: SketchUnits, c:
   member.supports.forEach((support, i) => {
     const end = i === 0 ? "left" : i === member.supports.length - 1 ? "right" : "inner";
     parts.push(supportSvg(support, x(nodes[i]), y, end, c));
+    parts.push(rotationalSpringSvg(support, x(nodes[i]), y, units.moment, c, end));
   });
   return `<g class="sketch">${parts.join("")}</g>`;
 }

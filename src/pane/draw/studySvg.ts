@@ -42,7 +42,7 @@ function frameFor(box: PanelBox, layout: Layout, lo: number, hi: number): PanelF
   return panelFrame(spec, layout, { max: hi, xMax: 0, min: lo, xMin: 0 });
 }
 
-function ticksSvg(frame: PanelFrame, layout: Layout, c: Palette): string {
+export function ticksSvg(frame: PanelFrame, layout: Layout, c: Palette): string {
   const scale = linearScale([invert(frame, frame.bottom), invert(frame, frame.top)], [0, 1]);
   return scale
     .ticks(4)
@@ -54,19 +54,19 @@ function ticksSvg(frame: PanelFrame, layout: Layout, c: Palette): string {
     .join("");
 }
 
-function panelStart(box: PanelBox, layout: Layout, title: string, c: Palette): string {
+export function panelStart(box: PanelBox, layout: Layout, title: string, c: Palette): string {
   return `<g class="panel" data-quantity="${box.quantity}"><text class="panel-title" x="${layout.left}" y="${box.top + 6}" fill="${c.ink}" font-size="11" font-weight="600">${escapeXml(title)}</text>`;
 }
 
-function zeroSvg(frame: PanelFrame, layout: Layout, c: Palette): string {
+export function zeroSvg(frame: PanelFrame, layout: Layout, c: Palette): string {
   return `<line class="zero" x1="${layout.left}" x2="${layout.right}" y1="${r1(frame.zeroY)}" y2="${r1(frame.zeroY)}" stroke="${c.zero}" stroke-width="1"/>`;
 }
 
-function subtitleSvg(layout: Layout, text: string, c: Palette): string {
+export function subtitleSvg(layout: Layout, text: string, c: Palette): string {
   return `<text class="subtitle" x="${layout.left}" y="12" fill="${c.muted}" font-size="10">${escapeXml(text)}</text>`;
 }
 
-function svgDocument(layout: Layout, theme: Theme, c: Palette, kind: string, body: string): string {
+export function svgDocument(layout: Layout, theme: Theme, c: Palette, kind: string, body: string): string {
   return (
     `<svg xmlns="http://www.w3.org/2000/svg" class="spanwise-diagram" data-kind="${kind}" width="${layout.width}" height="${layout.height}" viewBox="0 0 ${layout.width} ${layout.height}" font-family="system-ui, sans-serif" data-theme="${theme}">` +
     `<rect width="100%" height="100%" fill="${c.background}"/>` +

@@ -6,7 +6,14 @@ import { cantileverCases } from "./cantilever";
 import type { HandbookCase } from "./case";
 import { indeterminateCases } from "./indeterminate";
 import { simpleCases } from "./simple";
+import { crosscheckCases } from "./crosscheck";
 
 export type { HandbookCase } from "./case";
+export { crosscheckCases } from "./crosscheck";
 
 export const handbookCases: readonly HandbookCase[] = [...simpleCases, ...cantileverCases, ...indeterminateCases];
+
+/** Every case `spanwise verify` runs: the handbook cases, then the independent-reference cases. */
+export function verificationCases(): readonly HandbookCase[] {
+  return [...handbookCases, ...crosscheckCases()];
+}

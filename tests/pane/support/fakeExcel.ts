@@ -170,10 +170,7 @@ class FakeContext {
   constructor(readonly book: FakeWorkbook) {
     this.workbook = {
       getSelectedRange: () => new RangeProxy(this, () => ({ sheet: book.find(book.selection.sheet), block: parseBlock(book.selection.range) })),
-      worksheets: {
-        getItem: (name: string) => new SheetProxy(this, () => book.find(name)),
-        getActiveWorksheet: () => new SheetProxy(this, () => book.find(book.selection.sheet)),
-      },
+      worksheets: new SheetsProxy(this),
       names: new NamesProxy(this, undefined),
     };
   }
@@ -247,11 +244,22 @@ class RangeProxy extends FakeProxy<RangeTarget> {
       }
       return rows;
     };
-    return {
+    const lazy: Record<string, unknown> = {
       address: qualify(sheet.name, blockText(block)),
-      values: grid((cell) => cell?.value ?? ""),
-      formulas: grid((cell) => cell?.formula ?? cell?.value ?? ""),
+      rowCount: block.to.row - block.from.row + 1,
+      columnCount: block.to.col - block.from.col + 1,
     };
+    // Values and formulas are built only when loaded (a used range may be large).
+    Object.defineProperty(lazy, "values", { enumerable: true, get: () => grid((cell) => cell?.value ?? "") });
+    Object.defineProperty(lazy, "formulas", { enumerable: true, get: () => grid((cell) => cell?.formula ?? cell?.value ?? "") });
+    return lazy;
+  }
+
+  get rowCount(): number {
+    return this.read("rowCount") as number;
+  }
+  get columnCount(): number {
+    return this.read("columnCount") as number;
   }
 
   get address(): string {
@@ -340,7 +348,56 @@ class RangeProxy extends FakeProxy<RangeTarget> {
   }
 }
 
+/** workbook.worksheets: getItem, getActiveWorksheet, and load("items/name") then items. */
+class SheetsProxy {
+  private listed: SheetProxy[] | undefined;
+  constructor(private readonly context: FakeContext) {}
+  getItem(name: string): SheetProxy {
+    return new SheetProxy(this.context, () => this.context.book.find(name));
+  }
+  getActiveWorksheet(): SheetProxy {
+    return new SheetProxy(this.context, () => this.context.book.find(this.context.book.selection.sheet));
+  }
+  load(spec: string): this {
+    if (spec !== "items/name") throw new FakeExcelError("InvalidArgument", `the fake loads only items/name, not ${spec}`);
+    this.context.enqueue(() => {
+      this.listed = [...this.context.book.sheets.values()].map((sheet) => new SheetProxy(this.context, () => sheet).primed({ name: sheet.name }));
+    });
+    return this;
+  }
+  get items(): SheetProxy[] {
+    if (!this.listed) throw new Error("PropertyNotLoaded: items was read before load and sync");
+    return this.listed;
+  }
+}
+
 class SheetProxy extends FakeProxy<FakeSheet> {
+  protected override props(sheet: FakeSheet): Record<string, unknown> {
+    return { name: sheet.name };
+  }
+
+  /** Marks properties as loaded (what a collection's load of items/... does for its items). */
+  primed(values: Record<string, unknown>): this {
+    for (const [k, v] of Object.entries(values)) this.loaded.set(k, v);
+    return this;
+  }
+
+  get name(): string {
+    return this.read("name") as string;
+  }
+
+  /** The block from the first to the last cell holding a value or formula, or a null object. */
+  getUsedRangeOrNullObject(_valuesOnly?: boolean): RangeProxy {
+    return new RangeProxy(this.context, () => {
+      const sheet = this.target();
+      if (!sheet || sheet.cells.size === 0) return null;
+      const at = [...sheet.cells.keys()].map((k) => parseBlock(k).from);
+      const from = { row: Math.min(...at.map((c) => c.row)), col: Math.min(...at.map((c) => c.col)) };
+      const to = { row: Math.max(...at.map((c) => c.row)), col: Math.max(...at.map((c) => c.col)) };
+      return { sheet, block: { from, to } };
+    });
+  }
+
   getRange(address: string): RangeProxy {
     return new RangeProxy(this.context, () => {
       const sheet = this.target();
