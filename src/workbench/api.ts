@@ -5,7 +5,7 @@
  * column widths) for tests and tools. Addresses are A1 text ("B3", "B3:D5", "Member!B3:D5");
  * without a sheet name, the active sheet.
  */
-import { SpanWorkbook, type CellInput, type CellResult, type SheetInput } from "../engine";
+import type { CellInput, CellResult } from "../engine";
 import { parseRange, rangeText, type RangeRef } from "./addresses";
 import { drawChart, type ChartSpec } from "./chart";
 import type { Workbench } from "./workbench";
@@ -59,8 +59,6 @@ export interface WorkbenchApi {
   lastWriteTiming(): { cells: number; changed: number; engineMs: number; paintMs: number } | undefined;
   /** Milliseconds the grid took to build and show its first sheet. */
   firstRenderMs(): number;
-  /** Replaces the whole workbook with these sheets (evaluated afresh; undo history cleared; change listeners told). */
-  loadSheets(sheets: SheetInput[]): void;
 }
 
 export function createApi(bench: Workbench, charts: HTMLElement): WorkbenchApi {
@@ -172,13 +170,6 @@ export function createApi(bench: Workbench, charts: HTMLElement): WorkbenchApi {
     setColumnWidth: (text: string, px: number) => bench.setColumnWidth(column(text), px),
     lastWriteTiming: () => (bench.lastWrite ? { ...bench.lastWrite } : undefined),
     firstRenderMs: () => bench.firstRenderMs,
-    loadSheets(sheets: SheetInput[]) {
-      // Array.from: sheets from another frame (see SpanWorkbook.setCells).
-      const book = new SpanWorkbook(Array.from(sheets, (sheet) => ({ name: String(sheet.name), cells: Array.from(sheet.cells, (row) => Array.from(row ?? [])) })));
-      const old = bench.book;
-      bench.replaceBook(book);
-      old.destroy();
-    },
   };
   return api;
 }

@@ -255,21 +255,6 @@ describe("editing", () => {
   });
 });
 
-describe("another workbook", () => {
-  it("replaces the whole book: new tabs, values, no undo into the old book, change listeners told", async () => {
-    const told = await api<number>(
-      "let n = 0; api.onChange(() => n++); api.loadSheets([{ name: 'Beam', cells: [[6, '=A1*2'], ['=SPAN.REACTIONS(A1,\"udl 1 D\")']] }, { name: 'Notes', cells: [['x']] }]); return n",
-    );
-    expect(told).toBe(1);
-    expect(await page.$$eval("#tabs button", (b) => b.map((x) => x.textContent))).toEqual(["Beam", "Notes"]);
-    expect(await page.textContent('td[data-address="B1"]')).toBe("12");
-    expect(await api("return api.getValues('Beam!A2:C3')")).toEqual(direct(() => reactions([[6]], [["udl 1 D"]])));
-    expect(await api("return api.undo()")).toBe(false);
-    await page.reload();
-    await page.waitForSelector("body[data-ready=true]");
-  });
-});
-
 describe("delete", () => {
   it("empties a selected range with Delete, one undo step", async () => {
     await page.click(".tabs button:has-text('Study')");
