@@ -82,6 +82,8 @@ export class Workbench {
   private copied: Copied | undefined;
   private drag: { kind: "select" | "fill"; target?: Block } | undefined;
   private nameBoxInput: HTMLInputElement | undefined;
+  /** The book's sheet names when the grid last drew its tabs (see refresh). */
+  private sheetNamesSeen = "";
   /** The selected cell's input as the formula bar last showed it (an edit differs from it). */
   private shownInput = "";
 
@@ -95,6 +97,7 @@ export class Workbench {
     // The row buttons of workbench.html, when the caller did not pass them.
     this.el = { ...el, insertRows: el.insertRows ?? document.getElementById("insert-rows") ?? undefined, deleteRows: el.deleteRows ?? document.getElementById("delete-rows") ?? undefined };
     this.buildGrid();
+    this.sheetNamesSeen = current.sheetNames().join("\u0000");
     this.renderTabs();
     this.renderSheet();
     this.bindEvents();
@@ -122,6 +125,7 @@ export class Workbench {
     this.current = book;
     this.active = index;
     this.history.clear();
+    this.sheetNamesSeen = names.join("\u0000");
     this.copied = undefined;
     this.selection = { sheet: names[index], anchor: { row: 0, col: 0 }, focus: { row: 0, col: 0 } };
     this.renderTabs();
@@ -132,6 +136,10 @@ export class Workbench {
 
   /** Draws tabs and grid again from the book (after sheets were added or renamed in it). */
   refresh(): void {
+    // Undo steps name their sheets: after sheets were renamed or removed they would write elsewhere.
+    const names = this.book.sheetNames().join("\u0000");
+    if (names !== this.sheetNamesSeen) this.history.clear();
+    this.sheetNamesSeen = names;
     if (this.active >= this.book.sheetNames().length) this.active = 0;
     this.selection = { ...this.selection, sheet: this.activeSheet() };
     this.renderTabs();
@@ -205,15 +213,25 @@ export class Workbench {
   undo(): boolean {
     const step = this.history.undo();
     if (!step) return false;
-    this.revert(step);
-    return true;
+    return this.guarded("undo", () => this.revert(step));
   }
 
   redo(): boolean {
     const step = this.history.redo();
     if (!step) return false;
-    this.apply(step, false);
-    return true;
+    return this.guarded("redo", () => this.apply(step, false));
+  }
+
+  /** An undo or redo that cannot be done (its sheet is gone) says so and forgets the history, never half-applies silently. */
+  private guarded(what: string, run: () => void): boolean {
+    try {
+      run();
+      return true;
+    } catch (error) {
+      this.history.clear();
+      this.say(`cannot ${what}: ${(error as Error).message}`, true);
+      return false;
+    }
   }
 
   /** Fills `target` from `source` (a block of the active sheet), formulas' relative references moved. */
