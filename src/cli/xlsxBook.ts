@@ -19,7 +19,8 @@
  *   message rather than guessed.
  */
 import { isCellError, normalizeFormula, SHEET_LIMITS, SpanWorkbook, type CellInput, type CellResult, type SheetInput } from "../engine";
-import { parseA1, rewriteSheetWith, scanSheet, type XmlCell } from "./sheetXml";
+import { ByteSink, utf8Of } from "./byteText";
+import { parseA1, rewriteSheetInto, scanSheet, type XmlCell } from "./sheetXml";
 import { shiftFormula } from "./sharedFormula";
 import { encodeXml } from "./xmlText";
 import { XlsxPackage, type DefinedName } from "./xlsxPackage";
@@ -218,7 +219,8 @@ export async function readBook(bytes: Buffer): Promise<LoadedBook> {
   let spanCallCount = 0;
   let legacyCells = 0;
   for (const part of parts) {
-    const xml = await pkg.part(part.path);
+    // Read as bytes: every text taken from it is a fresh string, so the part itself is let go after.
+    const xml = await pkg.partBinary(part.path);
     if (xml === undefined) throw new BookError(`sheet "${part.name}" is missing from the package (${part.path})`);
     const cells: CellInput[][] = [];
     const formulas: FormulaCell[] = [];
@@ -252,7 +254,7 @@ export async function readBook(bytes: Buffer): Promise<LoadedBook> {
         if (follows) followers.push({ row: cell.row, col: cell.col, si: f.si!, entry });
         spanCallCount += text.match(SPAN_CALL)?.length ?? 0;
         row[cell.col] = text === "" ? null : engineFormula(text, entry);
-      });
+      }, undefined, undefined, { bytes: true });
     } catch (error) {
       if (error instanceof BookError) throw error;
       throw new BookError(`sheet "${part.name}" cannot be read: ${error instanceof Error ? error.message : String(error)}`);
@@ -337,18 +339,19 @@ interface ValueXml {
   content: string;
 }
 
+/** The XML of a value, as the part's bytes (UTF-8; the sheet is written as a byte string). */
 function formulaValue(value: CellResult): ValueXml {
   if (value === null) return { content: "" };
-  if (isCellError(value)) return { type: "e", content: `<v>${encodeXml(value.error)}</v>` };
+  if (isCellError(value)) return { type: "e", content: `<v>${utf8Of(encodeXml(value.error))}</v>` };
   if (typeof value === "number") return { content: `<v>${numberText(value)}</v>` };
   if (typeof value === "boolean") return { type: "b", content: `<v>${value ? 1 : 0}</v>` };
-  return { type: "str", content: `<v>${encodeXml(value)}</v>` };
+  return { type: "str", content: `<v>${utf8Of(encodeXml(value))}</v>` };
 }
 
 function plainValue(value: CellResult): ValueXml {
   if (typeof value === "string") {
     const space = /^\s|\s$/.test(value) ? ' xml:space="preserve"' : "";
-    return { type: "inlineStr", content: `<is><t${space}>${encodeXml(value)}</t></is>` };
+    return { type: "inlineStr", content: `<is><t${space}>${utf8Of(encodeXml(value))}</t></is>` };
   }
   return formulaValue(value);
 }
@@ -424,7 +427,7 @@ export interface StoreResult {
 export async function storeResults(book: LoadedBook, evaluated: SpanWorkbook, onCell?: () => void): Promise<StoreResult> {
   const problems: CellProblem[] = [];
   for (const sheet of book.sheets) {
-    const sheetXml = (await book.pkg.part(sheet.path))!;
+    const sheetXml = (await book.pkg.partBinary(sheet.path))!;
     const id = evaluated.sheetId(sheet.name);
     const spills: Spill[] = [];
     const oldAreas: (Rect & { anchor: FormulaCell })[] = [];
@@ -462,7 +465,9 @@ export async function storeResults(book: LoadedBook, evaluated: SpanWorkbook, on
     const newSweep = new RowSweep(spills);
     const oldSweep = new RowSweep(oldAreas);
     let nextFormula = 0;
-    const xml = rewriteSheetWith(sheetXml, {
+    // Written into chunks of bytes as it goes: the new sheet is never one string.
+    const sink = new ByteSink();
+    rewriteSheetInto(sheetXml, {
       cell: (cell) => {
         const formula = sheet.formulas[nextFormula];
         if (cell.formula && formula && formula.row === cell.row && formula.col === cell.col) {
@@ -487,8 +492,8 @@ export async function storeResults(book: LoadedBook, evaluated: SpanWorkbook, on
         return adds;
       },
       nextRow: (row) => newSweep.nextRow(row),
-    });
-    book.pkg.setPart(sheet.path, xml);
+    }, (piece) => sink.push(piece), { bytes: true });
+    book.pkg.setPartBytes(sheet.path, sink.chunks());
     sheet.formulas = [];
   }
   return { problems };
