@@ -13,10 +13,10 @@
 const NodeBuffer: typeof Buffer | undefined = typeof Buffer === "function" ? Buffer : undefined;
 
 /** Not only ASCII (a byte or character above 0x7f). */
-const NON_ASCII = /[^\x00-\x7f]/;
+const NON_ASCII = /[\u0080-\uffff]/;
 
 /** A character that is no byte. */
-const WIDE = /[^\x00-\xff]/;
+const WIDE = /[\u0100-\uffff]/;
 
 /** Characters per String.fromCharCode call in the loop fallback. */
 const CHUNK = 0x2000;

@@ -23,7 +23,7 @@ export interface ScanOptions {
   bytes?: boolean;
 }
 
-const NON_ASCII = /[^\x00-\x7f]/;
+const NON_ASCII = /[\u0080-\uffff]/;
 
 /** A cell's start tag's attributes; in a byte string their values read as UTF-8 where they are not ASCII. */
 function cellAttributes(tag: string, bytes: boolean): Map<string, string> {
