@@ -25,11 +25,9 @@ export interface ScanOptions {
 
 const NON_ASCII = /[\u0080-\uffff]/;
 
-/** A cell's start tag's attributes; in a byte string their values read as UTF-8 where they are not ASCII. */
+/** A start tag's attributes; in a byte string a tag that is not ASCII is read as UTF-8 first (before its entities). */
 function cellAttributes(tag: string, bytes: boolean): Map<string, string> {
-  const attrs = attributes(tag);
-  if (bytes && NON_ASCII.test(tag)) for (const [name, value] of attrs) attrs.set(name, textOfUtf8(value));
-  return attrs;
+  return attributes(bytes && NON_ASCII.test(tag) ? textOfUtf8(tag) : tag);
 }
 
 export interface XmlFormula {

@@ -113,6 +113,14 @@ describe("sheet XML as a byte string", () => {
     );
   });
 
+  it("reads attribute values as UTF-8 before their character references", () => {
+    const text = '<worksheet><sheetData><row r="1"><c r="A1" x:note="Größe &#233;&amp;ü"><f t="shared" si="é&#252;">1</f></c></row></sheetData></worksheet>';
+    const cells: XmlCell[] = [];
+    scanSheet(utf8Of(text), (cell) => cells.push(cell), undefined, undefined, { bytes: true });
+    expect(cells[0].attrs.get("x:note")).toBe("Größe é&ü");
+    expect(cells[0].formula?.si).toBe("éü");
+  });
+
   it("a rewrite through a sink changes only the replaced cells' bytes", () => {
     fc.assert(
       fc.property(texts, fc.string({ unit: "grapheme", maxLength: 8 }).filter((t) => xmlSafe(t) && !/[<&]/.test(t)), (values, result) => {
