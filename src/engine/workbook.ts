@@ -93,7 +93,23 @@ export class SpanWorkbook {
         throw new RangeError(`sheet "${sheet.name}" is larger than a spreadsheet allows (${SHEET_LIMITS.rows} rows, ${SHEET_LIMITS.cols} columns)`);
       }
     }
-    this.context = {
+    this.context = this.newContext(options);
+    this.building = sheets;
+    // Built from all sheets at once: an empty engine filled in a batch exports every change
+    // when the batch ends, and the engine joins spilled changes by copying (quadratic).
+    this.hf = this.build(sheets, options);
+    attachContext(this.hf.dependencyGraph, this.context);
+    this.building = undefined;
+    this.settle();
+  }
+
+  /**
+   * The context the SPAN plugin reads, made outside the constructor: a closure made in the
+   * constructor would keep the constructor's variables (every sheet's cells) for the life of
+   * the workbook.
+   */
+  private newContext(options: WorkbookOptions): EngineContext {
+    return {
       functions: options.functions ?? SPAN_EXPORTS,
       learned: new Map(),
       mismatched: new Map(),
@@ -102,20 +118,16 @@ export class SpanWorkbook {
       onCall: options.onSpanCall,
       textAt: (address) => this.textAt(address),
     };
-    this.building = sheets;
+  }
+
+  /** The engine built from the sheets; the prepared copy of their cells is not kept. */
+  private build(sheets: readonly SheetInput[], options: WorkbookOptions): HyperFormula {
     const contents: Record<string, CellInput[][]> = {};
     sheets.forEach((sheet, id) => {
       if (Object.prototype.hasOwnProperty.call(contents, sheet.name)) throw new RangeError(`two sheets are named "${sheet.name}"`);
       contents[sheet.name] = sheet.cells.map((row, r) => this.preparedRow(id, r, row ?? []));
     });
-    // Built from all sheets at once: an empty engine filled in a batch exports every change
-    // when the batch ends, and the engine joins spilled changes by copying (quadratic).
-    this.hf = buildingWith(this.context, () =>
-      HyperFormula.buildFromSheets(contents as never, CONFIG, namedExpressions(options.names ?? [])),
-    );
-    attachContext(this.hf.dependencyGraph, this.context);
-    this.building = undefined;
-    this.settle();
+    return buildingWith(this.context, () => HyperFormula.buildFromSheets(contents as never, CONFIG, namedExpressions(options.names ?? [])));
   }
 
   /** A row as the engine takes it: the row itself when nothing in it changes (big sheets: no copy). */
