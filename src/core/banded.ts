@@ -71,8 +71,8 @@ export function solveFactored(a: Float64Array, n: number, hb: number, x: Float64
  */
 export function solveBanded(system: StiffnessSystem, stats?: PivotStats): Float64Array {
   const { size: n, halfBandwidth: hb } = system;
-  const a = Float64Array.from(system.band.subarray(0, n * (hb + 1)));
-  const x = Float64Array.from(system.rhs.subarray(0, n));
+  const a = system.band.slice(0, n * (hb + 1));
+  const x = system.rhs.slice(0, n);
   factorBanded(a, system.band, n, hb, stats);
   solveFactored(a, n, hb, x);
   return x;

@@ -37,17 +37,18 @@ function growScratch(nodes: number): void {
 }
 
 /**
- * The layout of a (validated) member. With `reuse` the DOF and EI arrays are views of scratch
- * buffers shared by every call (no allocation): valid only until the next such call, for the
- * solver's own use within one solve; nodeX is always a fresh array.
+ * The layout of a (validated) member. With `reuse` the DOF and EI arrays are scratch buffers
+ * shared by every call (no allocation; they may be longer than the member needs, so read
+ * them by node and span index only): valid only until the next such call, for the solver's own
+ * use within one solve; nodeX is always a fresh array.
  */
 export function buildLayout(member: Member, nodeX: number[] = nodePositions(member.spans), reuse = false): Layout {
   const { spans, supports } = member;
   const count = nodeX.length;
   if (reuse) growScratch(count);
-  const deflectionDof = reuse ? scratchDeflection.subarray(0, count) : new Int32Array(count);
-  const rotationLeftDof = reuse ? scratchLeft.subarray(0, count) : new Int32Array(count);
-  const rotationRightDof = reuse ? scratchRight.subarray(0, count) : new Int32Array(count);
+  const deflectionDof = reuse ? scratchDeflection : new Int32Array(count);
+  const rotationLeftDof = reuse ? scratchLeft : new Int32Array(count);
+  const rotationRightDof = reuse ? scratchRight : new Int32Array(count);
   let next = 0;
   for (let i = 0; i < count; i++) {
     const kind = supports[i].kind;
@@ -62,7 +63,7 @@ export function buildLayout(member: Member, nodeX: number[] = nodePositions(memb
     }
   }
   const given = member.stiffness;
-  const stiffness = reuse ? scratchStiffness.subarray(0, spans.length) : new Float64Array(spans.length);
+  const stiffness = reuse ? scratchStiffness : new Float64Array(spans.length);
   for (let i = 0; i < spans.length; i++) stiffness[i] = given === null ? 1 : given.length === 1 ? given[0] : given[i];
   return { length: nodeX[count - 1], nodeX, deflectionDof, rotationLeftDof, rotationRightDof, size: next, stiffness };
 }

@@ -77,8 +77,8 @@ let residual = new Float64Array(16);
 /**
  * Solves K d = f and refines d while the residual is above rounding and shrinks (a few steps;
  * O(n b^2) each). The band is factored once and the factors reused for each correction. The
- * result is a view of a scratch buffer: valid until the next call, so the caller copies what
- * it keeps.
+ * result is a scratch buffer (its first `size` entries; it may be longer): valid until the
+ * next call, so the caller copies what it keeps.
  */
 export function solveRefined(system: StiffnessSystem, stats?: PivotStats): Float64Array {
   const { size: n, halfBandwidth: hb } = system;
@@ -88,11 +88,11 @@ export function solveRefined(system: StiffnessSystem, stats?: PivotStats): Float
     solution = new Float64Array(Math.max(n, 2 * solution.length));
     residual = new Float64Array(solution.length);
   }
-  const a = factored.subarray(0, cells);
-  const d = solution.subarray(0, n);
-  const r = residual.subarray(0, n);
-  a.set(system.band.subarray(0, cells));
-  d.set(system.rhs.subarray(0, n));
+  const a = factored;
+  const d = solution;
+  const r = residual;
+  for (let i = 0; i < cells; i++) a[i] = system.band[i];
+  for (let i = 0; i < n; i++) d[i] = system.rhs[i];
   factorBanded(a, system.band, n, hb, stats);
   solveFactored(a, n, hb, d);
   let load = 0;

@@ -72,9 +72,9 @@ function scalesOf(pieces: Piece[], forceTerms: number, momentTerms: number): Rec
 }
 
 /** Numbers that overflowed (or underflowed into 0/0) must never reach the sheet. */
-function requireFinite(d: Float64Array, pieces: Piece[], reactions: Reaction[], scales: Record<Quantity, number>): void {
+function requireFinite(d: Float64Array, size: number, pieces: Piece[], reactions: Reaction[], scales: Record<Quantity, number>): void {
   let ok = Number.isFinite(scales.shear) && Number.isFinite(scales.moment) && Number.isFinite(scales.slope) && Number.isFinite(scales.deflection);
-  for (let i = 0; ok && i < d.length; i++) ok = Number.isFinite(d[i]);
+  for (let i = 0; ok && i < size; i++) ok = Number.isFinite(d[i]);
   for (let i = 0; ok && i < pieces.length; i++) {
     const p = pieces[i];
     ok = Number.isFinite(p.shear0) && Number.isFinite(p.moment0) && Number.isFinite(p.slope0) && Number.isFinite(p.deflection0) && Number.isFinite(p.flexibility);
@@ -111,8 +111,8 @@ const CANCELLATION_FOR_DOUBLE = 1e3;
 /**
  * The solved stiffness system: displacements and each span's end forces [force left, moment
  * left, force right, moment right] (K d - f, 4 from 4 e). One object, reused by every solve
- * (the solve is synchronous and never re-entered); its arrays may be scratch views, so what a
- * solution keeps is copied out of them.
+ * (the solve is synchronous and never re-entered); its arrays may be scratch buffers longer
+ * than the member needs, so what a solution keeps is copied out of them.
  */
 interface StiffnessAnswer {
   d: Float64Array;
@@ -247,7 +247,7 @@ export function solve(member: Member): Solution {
   const loadScale = loadScaleOf(member, layout.length);
   const reactions = reactionsOf(member, layout, d, loadScale);
   const scales = scalesOf(pieces, solved.forceTerms, solved.momentTerms);
-  requireFinite(d, pieces, reactions, scales);
+  requireFinite(d, layout.size, pieces, reactions, scales);
   requireEquilibrium(member, reactions, loadScale, layout.length);
   return {
     length: layout.length,
@@ -257,8 +257,15 @@ export function solve(member: Member): Solution {
     hasStiffness: member.stiffness !== null,
     loadScale,
     scales,
-    displacements: Array.from(d),
+    displacements: copyOf(d, layout.size),
   };
+}
+
+/** The first `size` entries of a (scratch) array, as a fresh list. */
+function copyOf(values: Float64Array, size: number): number[] {
+  const list = new Array<number>(size);
+  for (let i = 0; i < size; i++) list[i] = values[i];
+  return list;
 }
 
 let rawForce = new Float64Array(8);

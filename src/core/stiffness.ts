@@ -4,7 +4,8 @@ import type { Member } from "./model";
 
 /**
  * The reduced stiffness system K d = f over the free DOFs, stored as the upper band of the
- * symmetric K: entry (i, j), j >= i, sits at band[i * (halfBandwidth + 1) + (j - i)].
+ * symmetric K: entry (i, j), j >= i, sits at band[i * (halfBandwidth + 1) + (j - i)]. The
+ * arrays may be longer than `size` needs (the solver's scratch buffers): read them by index.
  */
 export interface StiffnessSystem {
   size: number;
@@ -87,8 +88,8 @@ function atLeast(buffer: Float64Array, length: number): Float64Array {
 /**
  * Builds the layout, the span loads and the banded system of a (validated) member. With
  * `reuse` the layout's DOF arrays, the band, the right-hand side, the element matrices and
- * the nodal loads are views of scratch buffers shared by every call (no allocation once
- * grown): valid only until the next such call, for the solver's own use within one solve.
+ * the nodal loads are scratch buffers shared by every call (no allocation once grown; possibly
+ * longer than needed): valid only until the next such call, for the solver's own use within one solve.
  */
 export function assembleMember(member: Member, nodeX?: number[], reuse = false): Assembly {
   const layout = buildLayout(member, nodeX, reuse);
@@ -105,10 +106,8 @@ export function assembleMember(member: Member, nodeX?: number[], reuse = false):
     rhs = scratchRhs = atLeast(scratchRhs, n);
     matrices = scratchMatrices = atLeast(scratchMatrices, 16 * spanCount);
     nodal = scratchNodal = atLeast(scratchNodal, 4 * spanCount);
-    band = band.subarray(0, n * stride);
-    rhs = rhs.subarray(0, n);
-    band.fill(0);
-    rhs.fill(0);
+    band.fill(0, 0, n * stride);
+    rhs.fill(0, 0, n);
   } else {
     band = new Float64Array(n * stride);
     rhs = new Float64Array(n);
