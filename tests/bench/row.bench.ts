@@ -25,7 +25,10 @@ import * as fs from "fs";
 import * as os from "os";
 import * as path from "path";
 import { PerformanceObserver, performance } from "perf_hooks";
+import { extremes, solve, type Member } from "../../src/core";
 import { sheetMaxMoment, sheetReactions, sheetValuesAt, solvedMembers } from "../../src/sheet";
+import { readMember } from "../../src/sheet/member";
+import { memberArgs } from "../../src/sheet/worksheet";
 import { yardstickMaxMoment, type YardstickBeam } from "./yardstick";
 
 const ROWS = 20000;
@@ -186,6 +189,39 @@ function perRow(functions: Record<string, Fn>): void {
 }
 
 /**
+ * Where the per-row time goes, for the floor: the same rows through the sources (compiled by
+ * the project's TypeScript hook, no name-keeping transform; not the bundle, which exposes only
+ * the worksheet functions), timed in parts against the yardstick in this process: reading the
+ * cells into a member (text parsing, checks, the combination), and the core alone (solve and
+ * the moment extremes of an already-read member).
+ */
+function floor(): void {
+  const passes = Array.from({ length: PASSES + 1 }, (_, p) => rows(2000 + p, ROWS));
+  const args = passes.map((list) => list.map((row) => memberArgs([[row.spansText]], [[row.loadsText]], null, null, null)));
+  const members: Member[][] = args.map((list) => list.map((a) => readMember(a)));
+  const out = { max: 0, x: 0 };
+  const time = (call: (p: number, i: number) => void, repeats = 1): number => {
+    const cpus: number[] = [];
+    for (let p = 0; p <= PASSES; p++) {
+      const cpu = cpuMs();
+      for (let k = 0; k < repeats; k++) for (let i = 0; i < ROWS; i++) call(p, i);
+      if (p > 0) cpus.push((1000 * (cpuMs() - cpu)) / (ROWS * repeats));
+    }
+    return median(cpus);
+  };
+  const yard = time((p, i) => yardstickMaxMoment(passes[p][i].beam, out), YARD_REPEATS);
+  let sink = 0;
+  const read = time((p, i) => {
+    sink += readMember(args[p][i]).loads.length;
+  });
+  const core = time((p, i) => {
+    sink += extremes(solve(members[p][i]), "moment").max;
+  });
+  if (!Number.isFinite(sink)) console.log("(non-finite sink)");
+  console.log(`  where it goes (sources, CPU time; yardstick here ${yard.toFixed(3)} us): reading the cells ${read.toFixed(2)} us (${(read / yard).toFixed(1)} x), core solve + moment extremes ${core.toFixed(2)} us (${(core / yard).toFixed(1)} x)`);
+}
+
+/**
  * The growth member as ranges: a column of spans and a load table. (As text cells it would not
  * fit: a cell holds at most 32,767 characters, Microsoft support "Excel specifications and
  * limits", support.microsoft.com/office/c13798fc-f1d5-4e73-998d-c02268bc65ae.)
@@ -270,6 +306,7 @@ export async function run(): Promise<void> {
   const functions = loadBundle();
   console.log(`node ${process.version}, ${os.cpus().length} cpus, load average ${os.loadavg().map((v) => v.toFixed(1)).join(" ")}`);
   perRow(functions);
+  floor();
   await growth(functions);
   scheduleRows();
   console.log(`load average after: ${os.loadavg().map((v) => v.toFixed(1)).join(" ")}`);
