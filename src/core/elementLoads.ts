@@ -55,43 +55,47 @@ const GAUSS_POINT = Math.sqrt(3 / 5);
 const GAUSS_NODES = [-GAUSS_POINT, 0, GAUSS_POINT];
 const GAUSS_WEIGHTS = [5 / 9, 8 / 9, 5 / 9];
 
-/** Adds the Hermite shape functions (and, for couples, their slopes) at t into `out`. */
-function addShape(out: number[], t: number, span: number, value: number): void {
+type Numbers = number[] | Float64Array;
+
+/** Adds the Hermite shape functions (and, for couples, their slopes) at t into `out` from index `at`. */
+function addShape(out: Numbers, at: number, t: number, span: number, value: number): void {
   const s = t / span;
   const s2 = s * s;
   const s3 = s2 * s;
-  out[0] += value * (1 - 3 * s2 + 2 * s3);
-  out[1] += value * span * (s - 2 * s2 + s3);
-  out[2] += value * (3 * s2 - 2 * s3);
-  out[3] += value * span * (s3 - s2);
+  out[at] += value * (1 - 3 * s2 + 2 * s3);
+  out[at + 1] += value * span * (s - 2 * s2 + s3);
+  out[at + 2] += value * (3 * s2 - 2 * s3);
+  out[at + 3] += value * span * (s3 - s2);
 }
 
-function addShapeSlope(out: number[], t: number, span: number, value: number): void {
+function addShapeSlope(out: Numbers, at: number, t: number, span: number, value: number): void {
   const s = t / span;
-  out[0] += (value * (6 * s * s - 6 * s)) / span;
-  out[1] += value * (1 - 4 * s + 3 * s * s);
-  out[2] += (value * (6 * s - 6 * s * s)) / span;
-  out[3] += value * (3 * s * s - 2 * s);
+  out[at] += (value * (6 * s * s - 6 * s)) / span;
+  out[at + 1] += value * (1 - 4 * s + 3 * s * s);
+  out[at + 2] += (value * (6 * s - 6 * s * s)) / span;
+  out[at + 3] += value * (3 * s * s - 2 * s);
 }
 
 /**
  * Work-equivalent nodal loads of one span's loads, [force left, moment left, force right,
  * moment right] (down and clockwise positive). For Euler–Bernoulli elements these are exact:
  * the load times the cubic shape functions is at most a quartic, which three-point
- * Gauss–Legendre integrates exactly.
+ * Gauss–Legendre integrates exactly. Written into `out` from index `at` (four entries, set,
+ * not added to) when given.
  */
-export function equivalentNodalLoads(loads: SpanLoad[], span: number): number[] {
-  const out = [0, 0, 0, 0];
-  for (const load of loads) {
-    if (load.kind === "force") addShape(out, load.at, span, load.value);
-    else if (load.kind === "couple") addShapeSlope(out, load.at, span, load.value);
+export function equivalentNodalLoads<T extends Numbers = number[]>(loads: SpanLoad[], span: number, out: T = [0, 0, 0, 0] as T, at = 0): T {
+  out[at] = out[at + 1] = out[at + 2] = out[at + 3] = 0;
+  for (let i = 0; i < loads.length; i++) {
+    const load = loads[i];
+    if (load.kind === "force") addShape(out, at, load.at, span, load.value);
+    else if (load.kind === "couple") addShapeSlope(out, at, load.at, span, load.value);
     else {
       const half = (load.to - load.from) / 2;
       const mid = (load.to + load.from) / 2;
       const rate = (load.q1 - load.q0) / (load.to - load.from);
       for (let g = 0; g < 3; g++) {
         const t = mid + half * GAUSS_NODES[g];
-        addShape(out, t, span, GAUSS_WEIGHTS[g] * half * (load.q0 + rate * (t - load.from)));
+        addShape(out, at, t, span, GAUSS_WEIGHTS[g] * half * (load.q0 + rate * (t - load.from)));
       }
     }
   }

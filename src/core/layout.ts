@@ -12,20 +12,43 @@ export { nodePositions };
 export interface Layout {
   length: number;
   nodeX: number[];
-  deflectionDof: number[];
-  rotationLeftDof: number[];
-  rotationRightDof: number[];
+  deflectionDof: Int32Array;
+  rotationLeftDof: Int32Array;
+  rotationRightDof: Int32Array;
   size: number;
-  stiffness: number[];
+  /** EI of each span (1 when the member has none). */
+  stiffness: Float64Array;
 }
 
-export function buildLayout(member: Member): Layout {
+/** Scratch DOF and EI arrays for the solver's own layout (see buildLayout's `reuse`). */
+let scratchNodes = 0;
+let scratchDeflection: Int32Array = new Int32Array(0);
+let scratchLeft: Int32Array = new Int32Array(0);
+let scratchRight: Int32Array = new Int32Array(0);
+let scratchStiffness: Float64Array = new Float64Array(0);
+
+function growScratch(nodes: number): void {
+  if (scratchNodes >= nodes) return;
+  scratchNodes = Math.max(nodes, 2 * scratchNodes, 8);
+  scratchDeflection = new Int32Array(scratchNodes);
+  scratchLeft = new Int32Array(scratchNodes);
+  scratchRight = new Int32Array(scratchNodes);
+  scratchStiffness = new Float64Array(scratchNodes);
+}
+
+/**
+ * The layout of a (validated) member. With `reuse` the DOF and EI arrays are scratch buffers
+ * shared by every call (no allocation; they may be longer than the member needs, so read
+ * them by node and span index only): valid only until the next such call, for the solver's own
+ * use within one solve; nodeX is always a fresh array.
+ */
+export function buildLayout(member: Member, nodeX: number[] = nodePositions(member.spans), reuse = false): Layout {
   const { spans, supports } = member;
-  const nodeX = nodePositions(spans);
   const count = nodeX.length;
-  const deflectionDof = new Array<number>(count);
-  const rotationLeftDof = new Array<number>(count);
-  const rotationRightDof = new Array<number>(count);
+  if (reuse) growScratch(count);
+  const deflectionDof = reuse ? scratchDeflection : new Int32Array(count);
+  const rotationLeftDof = reuse ? scratchLeft : new Int32Array(count);
+  const rotationRightDof = reuse ? scratchRight : new Int32Array(count);
   let next = 0;
   for (let i = 0; i < count; i++) {
     const kind = supports[i].kind;
@@ -40,16 +63,31 @@ export function buildLayout(member: Member): Layout {
     }
   }
   const given = member.stiffness;
-  const stiffness = spans.map((_, i) => (given === null ? 1 : given.length === 1 ? given[0] : given[i]));
+  const stiffness = reuse ? scratchStiffness : new Float64Array(spans.length);
+  for (let i = 0; i < spans.length; i++) stiffness[i] = given === null ? 1 : given.length === 1 ? given[0] : given[i];
   return { length: nodeX[count - 1], nodeX, deflectionDof, rotationLeftDof, rotationRightDof, size: next, stiffness };
 }
 
-/** The four DOF numbers of span e: [w left, rotation left, w right, rotation right]. */
 /** The rotational spring at a node (moment per radian), 0 when it has none. */
 export function rotationalSpring(support: Support): number {
   return "rotational" in support && support.rotational !== undefined ? support.rotational : 0;
 }
 
+/** The four DOF numbers of span e: [w left, rotation left, w right, rotation right]. */
 export function elementDofs(layout: Layout, e: number): [number, number, number, number] {
   return [layout.deflectionDof[e], layout.rotationRightDof[e], layout.deflectionDof[e + 1], layout.rotationLeftDof[e + 1]];
+}
+
+/** DOF r (0..3, in elementDofs order) of span e, without building the tuple. */
+export function elementDof(layout: Layout, e: number, r: number): number {
+  switch (r) {
+    case 0:
+      return layout.deflectionDof[e];
+    case 1:
+      return layout.rotationRightDof[e];
+    case 2:
+      return layout.deflectionDof[e + 1];
+    default:
+      return layout.rotationLeftDof[e + 1];
+  }
 }

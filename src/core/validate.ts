@@ -24,11 +24,17 @@ function show(value: unknown): string {
 
 function validateSpans(spans: number[]): void {
   if (!Array.isArray(spans) || spans.length === 0) throw invalid("spans: give at least one span length");
-  spans.forEach((span, i) => {
+  for (let i = 0; i < spans.length; i++) {
+    const span = spans[i];
     if (!isFiniteNumber(span) || span <= 0) {
       throw invalid(`span ${i + 1}: length must be a positive number, got ${show(span)}`);
     }
-  });
+  }
+}
+
+/** Names support i in a message: "support 2 (x = 6)" (only a message needs the node's position). */
+function supportPlace(spans: number[], i: number, length: number): string {
+  return `support ${i + 1} (x = ${shownLength(nodePositions(spans)[i] ?? length)})`;
 }
 
 function validateSupports(member: Member, length: number): void {
@@ -37,36 +43,35 @@ function validateSupports(member: Member, length: number): void {
     const count = Array.isArray(supports) ? supports.length : 0;
     throw invalid(`supports: need ${spans.length + 1} entries (one per node, spans + 1), got ${count}`);
   }
-  const nodeX = nodePositions(spans);
-  supports.forEach((support, i) => {
-    const where = (): string => `support ${i + 1} (x = ${shownLength(nodeX[i] ?? length)})`;
+  for (let i = 0; i < supports.length; i++) {
+    const support = supports[i];
     if (!support || !SUPPORT_KINDS.has(support.kind)) {
-      throw invalid(`${where()}: unknown support ${show(support && support.kind)}; use pin, fixed, free, hinge or a spring stiffness`);
+      throw invalid(`${supportPlace(spans, i, length)}: unknown support ${show(support && support.kind)}; use pin, fixed, free, hinge or a spring stiffness`);
     }
     if (support.kind === "spring") {
       if (!isFiniteNumber(support.stiffness) || support.stiffness <= 0) {
-        throw invalid(`${where()}: spring stiffness must be a positive number, got ${show(support.stiffness)}`);
+        throw invalid(`${supportPlace(spans, i, length)}: spring stiffness must be a positive number, got ${show(support.stiffness)}`);
       }
       if (member.stiffness === null) {
-        throw invalid(`${where()}: a spring support needs EI, since the result depends on EI relative to the spring`);
+        throw invalid(`${supportPlace(spans, i, length)}: a spring support needs EI, since the result depends on EI relative to the spring`);
       }
     }
     const rotational: unknown = (support as { rotational?: unknown }).rotational;
     if (rotational !== undefined) {
       if (support.kind === "fixed" || support.kind === "hinge") {
-        throw invalid(`${where()}: a rotational spring belongs with pin, free or a vertical spring, not with ${support.kind}`);
+        throw invalid(`${supportPlace(spans, i, length)}: a rotational spring belongs with pin, free or a vertical spring, not with ${support.kind}`);
       }
       if (!isFiniteNumber(rotational) || rotational < 0) {
-        throw invalid(`${where()}: rotational spring stiffness must be a positive number (moment per radian), got ${show(rotational)}`);
+        throw invalid(`${supportPlace(spans, i, length)}: rotational spring stiffness must be a positive number (moment per radian), got ${show(rotational)}`);
       }
       if (member.stiffness === null && rotational > 0) {
-        throw invalid(`${where()}: a rotational spring needs EI, since the result depends on EI relative to the spring`);
+        throw invalid(`${supportPlace(spans, i, length)}: a rotational spring needs EI, since the result depends on EI relative to the spring`);
       }
     }
     if (support.kind === "hinge" && (i === 0 || i === spans.length)) {
-      throw invalid(`${where()}: a hinge joins two spans, so it belongs at an interior node, not at a member end`);
+      throw invalid(`${supportPlace(spans, i, length)}: a hinge joins two spans, so it belongs at an interior node, not at a member end`);
     }
-  });
+  }
 }
 
 function validateStiffness(member: Member): void {
@@ -75,10 +80,11 @@ function validateStiffness(member: Member): void {
   if (!Array.isArray(stiffness) || (stiffness.length !== spans.length && stiffness.length !== 1)) {
     throw invalid(`EI: give one value for the member or one per span (${spans.length}), got ${Array.isArray(stiffness) ? stiffness.length : 0}`);
   }
-  stiffness.forEach((ei, i) => {
+  for (let i = 0; i < stiffness.length; i++) {
+    const ei = stiffness[i];
     if (!isFiniteNumber(ei) || ei <= 0) throw invalid(`EI of span ${i + 1}: must be a positive number, got ${show(ei)}`);
     if (!Number.isFinite(1 / ei)) throw invalid(`EI of span ${i + 1}: ${show(ei)} is too small to compute with; check its units`);
-  });
+  }
 }
 
 /** The common case, checked without building any message. */
@@ -112,7 +118,9 @@ function validateLoad(load: Load, length: number): void {
 
 /** A couple exactly at a hinge has no side to act on: the user must say which. */
 function rejectCouplesOnHinges(member: Member): void {
-  if (!member.supports.some((support) => support.kind === "hinge")) return;
+  let hinges = false;
+  for (let i = 0; i < member.supports.length; i++) hinges = hinges || member.supports[i].kind === "hinge";
+  if (!hinges) return;
   const nodeX = nodePositions(member.spans);
   for (const load of member.loads) {
     if (load.kind !== "moment") continue;
@@ -138,6 +146,6 @@ export function validateMember(member: Member): void {
   if (member.loads.length > MAX_LOADS) {
     throw invalid(`loads: ${member.loads.length} loads on one member; at most ${MAX_LOADS} are taken (combine loads that act together)`);
   }
-  for (const load of member.loads) validateLoad(load, length);
+  for (let i = 0; i < member.loads.length; i++) validateLoad(member.loads[i], length);
   rejectCouplesOnHinges(member);
 }

@@ -20,12 +20,14 @@ function isBlankRow(cells: unknown[]): boolean {
 }
 
 function readKind(cell: unknown, row: number): LoadKind {
-  const where = placeOf(row, false, "type");
-  if (isBlank(cell)) throw invalid(`${where}: the load type is blank; use point, moment, udl or linear`);
+  // The common spelling first, with no string built; messages only when throwing.
+  const plain = typeof cell === "string" ? KINDS.get(cell) : undefined;
+  if (plain !== undefined) return plain;
+  if (isBlank(cell)) throw invalid(`${placeOf(row, false, "type")}: the load type is blank; use point, moment, udl or linear`);
   const code = errorCodeOf(cell);
-  if (code !== null) throw invalid(`${where}: the cell holds the error ${code}`);
+  if (code !== null) throw invalid(`${placeOf(row, false, "type")}: the cell holds the error ${code}`);
   const kind = typeof cell === "string" ? KINDS.get(cell.trim().toLowerCase()) : undefined;
-  if (!kind) throw invalid(`${where}: ${show(cell)} is not a load type; use point, moment, udl or linear`);
+  if (!kind) throw invalid(`${placeOf(row, false, "type")}: ${show(cell)} is not a load type; use point, moment, udl or linear`);
   return kind;
 }
 
@@ -37,19 +39,26 @@ function requireBlank(cell: unknown, row: number, column: ColumnName, why: strin
 }
 
 function readCase(cell: unknown, row: number): string {
-  const where = placeOf(row, false, "case");
   if (isBlank(cell)) return "";
-  const label = readText(cell, () => where);
+  const where = (): string => placeOf(row, false, "case");
+  const label = readText(cell, where);
   if (!isCaseLabel(label)) {
-    throw invalid(`${where}: ${show(cell)} is not a case label; use letters and digits starting with a letter, such as D, L or Lr`);
+    throw invalid(`${where()}: ${show(cell)} is not a case label; use letters and digits starting with a letter, such as D, L or Lr`);
   }
   return label;
+}
+
+/** A number cell of a load row: a finite number as it is, anything else by readNumber (with its message). */
+function numberCell(cells: unknown[], column: number, row: number, blank: number): number {
+  const cell = cells[column];
+  if (typeof cell === "number" && Number.isFinite(cell)) return cell;
+  return readNumber(cell, () => placeOf(row, false, COLUMNS[column]), blank);
 }
 
 /** Reads one non-blank table row (cells beyond the sixth must be blank). */
 export function readLoadRow(cells: unknown[], row: number): LoadRow {
   const kind = readKind(cells[0], row);
-  const number = (column: number, blank: number) => readNumber(cells[column], () => placeOf(row, false, COLUMNS[column]), blank);
+  const number = (column: number, blank: number): number => numberCell(cells, column, row, blank);
   const magnitude = number(1, 0);
   const xStart = number(2, 0);
   let xEnd: number | null = null;

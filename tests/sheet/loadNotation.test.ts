@@ -109,3 +109,62 @@ describe("round trip (property)", () => {
     );
   });
 });
+
+/** The rows parsed, or the message of the error thrown. */
+function outcome(text: string): unknown {
+  try {
+    return parseLoadNotation(text);
+  } catch (error) {
+    return `error: ${(error as Error).message}`;
+  }
+}
+
+describe("the plain-ASCII reader (no strings built) gives what the general reader gives", () => {
+  // A piece of only a no-break space is skipped, but its non-ASCII character sends the whole
+  // text through the general reader (split, trim, the word tokens): the two must agree.
+  const general = (text: string): unknown => outcome(`${text};\u00a0`);
+  const word = fc.constantFrom(
+    "point", "POINT", "Moment", "udl", "UdL", "linear", "at", "AT", "to", "To", "from", "FROM", "D", "L", "Lr", "S2", "2S", "x", "-",
+    "0", "-0", "2.5", "10", "1e3", ".5", "5.", "1e", "3..2", "+4", "12345678901234567", "udl5", "at3",
+  );
+  const separator = fc.constantFrom(" ", "  ", "\t", " \n ");
+  const load = fc.array(fc.tuple(word, separator), { minLength: 0, maxLength: 9 }).map((parts) => parts.map(([w, s]) => w + s).join(""));
+  const text = fc.array(fc.tuple(load, fc.constantFrom(";", " ; ", ";;")), { minLength: 1, maxLength: 4 }).map((loads) => loads.map(([l, s]) => l + s).join(""));
+
+  test.each(["udl 2.5", "udl 2.5 from 1 to 4 L", "point 10 at 3 L", "linear 1 to 2 from 0 to 4 D", "udl 5 from", "udl 5 from D", "udl 5 to x", "point 1 at", "moment 2 at 3 D E", " ; udl 1 ;; "])(
+    "%p",
+    (t) => {
+      expect(outcome(t)).toEqual(general(t));
+    },
+  );
+
+  // Mostly rejections (compared by message); the next test covers the accepting paths.
+  test("random word sequences: the same rows or the same message", () => {
+    fc.assert(
+      fc.property(text, (t) => {
+        expect(outcome(t)).toEqual(general(t));
+      }),
+      { numRuns: 5000, seed: 15 },
+    );
+  });
+
+  test("well-formed loads of every kind and option: the same rows", () => {
+    const num = fc.constantFrom("0", "2.5", "-3", "1e3", ".5", "10");
+    const label = fc.constantFrom("", " D", " Lr");
+    const one = fc.oneof(
+      fc.tuple(fc.constantFrom("point", "Moment"), num, num, label).map(([k, m, x, c]) => `${k} ${m} at ${x}${c}`),
+      fc.tuple(fc.constantFrom("udl", "LINEAR"), num, num, fc.option(num), fc.option(num), label).map(
+        ([k, m, m2, a, b, c]) => `${k} ${m}${k === "LINEAR" ? ` to ${m2}` : ""}${a === null ? "" : ` from ${a}`}${b === null ? "" : ` to ${b}`}${c}`,
+      ),
+    );
+    fc.assert(
+      fc.property(fc.array(one, { minLength: 1, maxLength: 5 }), (loads) => {
+        const t = loads.join("; ");
+        const got = outcome(t);
+        expect(Array.isArray(got)).toBe(true);
+        expect(got).toEqual(general(t));
+      }),
+      { numRuns: 2000, seed: 16 },
+    );
+  });
+});
