@@ -1,5 +1,5 @@
 import { isCollapsedPivot, type PivotStats } from "./banded";
-import { elementDofs, rotationalSpring } from "./layout";
+import { elementDofs, prescribedDisplacement, rotationalSpring } from "./layout";
 import { solvePrecise, worstStiffnessRatio } from "./precise";
 import type { Member, Piece, Quantity, Reaction, Solution } from "./model";
 import { pieceValue } from "./polynomial";
@@ -16,11 +16,21 @@ function loadScaleOf(member: Member, length: number): number {
   for (const load of member.loads) {
     if (load.kind === "point") scale += Math.abs(load.magnitude);
     else if (load.kind === "moment") scale += Math.abs(load.magnitude) / length;
-    else {
+    else if (load.kind !== "settle") {
       const end = load.kind === "linear" ? load.magnitudeEnd : load.magnitude;
       scale += ((Math.abs(load.magnitude) + Math.abs(end)) / 2) * (load.xEnd - load.xStart);
     }
   }
+  return scale;
+}
+
+/**
+ * A settlement loads the member through its reactions alone (they balance each other): their
+ * size (sum of |force| plus |moment|/length) is the scale its forces are judged by.
+ */
+function settlementScale(reactions: Reaction[], length: number): number {
+  let scale = 0;
+  for (const r of reactions) scale += Math.abs(r.force) + Math.abs(r.moment) / length;
   return scale;
 }
 
@@ -38,7 +48,7 @@ function termsAtEnd(p: Piece, quantity: Quantity): number {
   if (quantity === "moment") return m + load * s;
   const bending = p.flexibility * s * (m + load * s);
   if (quantity === "slope") return Math.abs(p.slope0) + bending;
-  return Math.abs(p.deflection0) + Math.abs(p.slope0) * s + bending * s;
+  return Math.abs(p.deflection0) + Math.abs(p.slope0) * s + bending * s + p.shearFlexibility * s * load;
 }
 
 /**
@@ -141,8 +151,8 @@ function solveInDouble(member: Member, assembly: ReturnType<typeof assembleMembe
   let forces = 0;
   let moments = 0;
   for (let e = 0; e < member.spans.length; e++) {
-    const k = elementMatrix(layout.stiffness[e], member.spans[e]);
-    const local = elementDofs(layout, e).map((dof) => (dof >= 0 ? d[dof] : 0));
+    const k = elementMatrix(layout.stiffness[e], member.spans[e], layout.shearFlexibility[e]);
+    const local = elementDofs(layout, e).map((dof, r) => (dof >= 0 ? d[dof] : prescribedDisplacement(layout, e, r)));
     const end = [0, 0, 0, 0];
     for (let r = 0; r < 4; r++) {
       end[r] = endForce(k, r, local, nodalLoads[e][r]);
@@ -199,10 +209,11 @@ export function solve(member: Member): Solution {
     nodeMoment[e] += end[1];
     nodeForce[e + 1] += end[2];
     nodeMoment[e + 1] += end[3];
-    const start = { shear: -end[0], moment: end[1], slope: value(dofs[1]), deflection: value(dofs[0]) };
-    integrateSpan(start, spanLoads[e], span, layout.nodeX[e], layout.nodeX[e + 1], 1 / ei, pieces);
+    const deflection = dofs[0] >= 0 ? d[dofs[0]] : prescribedDisplacement(layout, e, 0);
+    const start = { shear: -end[0], moment: end[1], slope: value(dofs[1]), deflection };
+    integrateSpan(start, spanLoads[e], span, layout.nodeX[e], layout.nodeX[e + 1], 1 / ei, pieces, layout.shearFlexibility[e]);
   }
-  const loadScale = loadScaleOf(member, layout.length);
+  const settlement = layout.settlement;
   const raw: Reaction[] = member.supports.map((support, i) => {
     const x = layout.nodeX[i];
     // A rotational spring resists the clockwise rotation θ with a counter-clockwise moment kθ.
@@ -213,13 +224,14 @@ export function solve(member: Member): Solution {
       case "fixed":
         return { x, force: -nodeForce[i], moment: -nodeMoment[i] };
       case "spring":
-        return { x, force: support.stiffness * value(layout.deflectionDof[i]), moment };
+        return { x, force: support.stiffness * (value(layout.deflectionDof[i]) - (settlement === null ? 0 : settlement[i])), moment };
       case "free":
         return { x, force: 0, moment };
       default:
         return { x, force: 0, moment: 0 };
     }
   });
+  const loadScale = loadScaleOf(member, layout.length) + (settlement === null ? 0 : settlementScale(raw, layout.length));
   const reactions = cleanReactions(raw, loadScale, layout.length);
   const scales = scalesOf(pieces, answer);
   requireFinite(d, pieces, reactions, scales);
