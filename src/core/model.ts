@@ -95,7 +95,7 @@ export interface Solution {
   pieces: Piece[];
   /** false when the member was solved without EI (slope and deflection unavailable). */
   hasStiffness: boolean;
-  /** Largest load effect scale, used for tolerances (sum of |force| plus |couple|/length). */
+  /** Largest load effect scale, used for tolerances (sum of |force| plus |couple|/length, plus each settlement Δ times the stiffness meeting its node). */
   loadScale: number;
   /** Largest magnitude of each quantity at the piece ends: the scale that rounding is judged by. */
   scales: Record<Quantity, number>;

@@ -1,5 +1,5 @@
 import { isCollapsedPivot, type PivotStats } from "./banded";
-import { elementDofs, prescribedDisplacement, rotationalSpring } from "./layout";
+import { elementDofs, prescribedDisplacement, rotationalSpring, type Layout } from "./layout";
 import { solvePrecise, worstStiffnessRatio } from "./precise";
 import type { Member, Piece, Quantity, Reaction, Solution } from "./model";
 import { pieceValue } from "./polynomial";
@@ -25,12 +25,24 @@ function loadScaleOf(member: Member, length: number): number {
 }
 
 /**
- * A settlement loads the member through its reactions alone (they balance each other): their
- * size (sum of |force| plus |moment|/length) is the scale its forces are judged by.
+ * A settlement loads the member through its supports alone (the reactions it causes balance
+ * each other). The scale its forces are judged by is the largest they could be: Δ times the
+ * stiffness that meets the node (12EI/L³ of each span beside it, and a spring's k).
  */
-function settlementScale(reactions: Reaction[], length: number): number {
+function settlementScale(member: Member, layout: Layout): number {
+  const settlement = layout.settlement;
+  if (settlement === null) return 0;
   let scale = 0;
-  for (const r of reactions) scale += Math.abs(r.force) + Math.abs(r.moment) / length;
+  settlement.forEach((delta, node) => {
+    if (delta === 0) return;
+    let stiffness = 0;
+    for (const e of [node - 1, node]) {
+      if (e >= 0 && e < member.spans.length) stiffness += (12 * layout.stiffness[e]) / member.spans[e] ** 3;
+    }
+    const support = member.supports[node];
+    if (support.kind === "spring") stiffness += support.stiffness;
+    scale += Math.abs(delta) * stiffness;
+  });
   return scale;
 }
 
@@ -231,7 +243,7 @@ export function solve(member: Member): Solution {
         return { x, force: 0, moment: 0 };
     }
   });
-  const loadScale = loadScaleOf(member, layout.length) + (settlement === null ? 0 : settlementScale(raw, layout.length));
+  const loadScale = loadScaleOf(member, layout.length) + settlementScale(member, layout);
   const reactions = cleanReactions(raw, loadScale, layout.length);
   const scales = scalesOf(pieces, answer);
   requireFinite(d, pieces, reactions, scales);
