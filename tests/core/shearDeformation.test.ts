@@ -12,7 +12,7 @@
  * an independent force-method solve (tests/core/kit/forceMethod.ts with ml-matrix) on random
  * members.
  */
-import { extremes, solve, valueAt, type Load, type Member } from "../../src/core";
+import { applyCombination, extremes, governingPeaks, parseCombination, solve, valueAt, type Load, type Member } from "../../src/core";
 import { assembleMember } from "../../src/core/stiffness";
 import { solvePrecise } from "../../src/core/precise";
 import { thrown } from "./kit/errors";
@@ -193,5 +193,25 @@ describe("shear deformation: refusals", () => {
   ])("%s", (_name, member, message) => {
     const error = thrown(() => solve(member as Member));
     expect([error.code, error.message]).toEqual(["#VALUE!", message]);
+  });
+});
+
+describe("shear deformation and settlement in studies (superposition)", () => {
+  it("PEAKS of a combination equals the extremes of the combination solved directly, deflection included", () => {
+    const settle: Load = { kind: "settle", magnitude: 0.004, xStart: 4.5, xEnd: 4.5, magnitudeEnd: 0, loadCase: "SD", row: 3 };
+    const m: Member = {
+      ...beam([L, 3.2, 4], ["pin", "pin", "pin", "fixed"], [udl(w, 0, 11.7, "D"), point(P, 6, "L")], EI),
+      shear: [GA, null, 2 * GA],
+    };
+    const member: Member = { ...m, loads: [...m.loads, settle] };
+    const combination = parseCombination("1.2D+1.6L+1.2SD");
+    const [peaks] = [governingPeaks(member, [combination])];
+    const direct = solve({ ...member, loads: applyCombination(member.loads, combination) });
+    for (const row of peaks) {
+      const e = extremes(direct, row.quantity);
+      near(row.max.value, e.max, direct.scales[row.quantity]);
+      near(row.min.value, e.min, direct.scales[row.quantity]);
+    }
+    expect(peaks.map((r) => r.quantity)).toEqual(["shear", "moment", "slope", "deflection"]);
   });
 });
