@@ -172,8 +172,8 @@ export function memberInSI(member: Member, units: MemberUnits): Member {
 
 /**
  * The member in the user's own length and force units: only EI changes (to force x length^2
- * of those units; a settlement from the deflection unit to the length unit; G·A_v is in the
- * force unit already), so every result comes out in the units the member was written in, with
+ * of those units), and a settlement (from the deflection unit to the length unit; G·A_v is in
+ * the force unit already), so every result comes out in the units the member was written in, with
  * deflection in the length unit. Used where results are drawn rather than converted.
  */
 export function memberInOwnUnits(member: Member, units: MemberUnits): Member {
