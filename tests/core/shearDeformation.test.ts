@@ -264,3 +264,13 @@ describe("shear deformation and settlement on the double-double path", () => {
     }
   });
 });
+
+describe("shear deformation and stability", () => {
+  it("a shear stiffness adds no mechanism and removes none: the same refusal with and without it", () => {
+    const mechanism = beam([L, L], ["pin", "hinge", "pin"], [udl(w, 0, 2 * L)], EI);
+    const plain = thrown(() => solve(mechanism));
+    const withShear = thrown(() => solve(sheared(mechanism)));
+    expect([withShear.code, withShear.message]).toEqual([plain.code, plain.message]);
+    expect(() => solve(sheared(beam([L, L], ["fixed", "hinge", "pin"], [udl(w, 0, 2 * L)], EI)))).not.toThrow();
+  });
+});
