@@ -211,7 +211,7 @@ export function stiffnessArg(p: Plan, noisy = true): fc.Arbitrary<unknown> {
 }
 
 export function loadKind(noisy = true): fc.Arbitrary<unknown> {
-  return mix<unknown>(noisy, [{ weight: 8, arbitrary: fc.constantFrom<unknown>("point", "moment", "udl", "linear", "Point", "UDL", " linear ", "settle") }], [{ weight: 1, arbitrary: anyCell }]);
+  return mix<unknown>(noisy, [{ weight: 8, arbitrary: fc.constantFrom<unknown>("point", "moment", "udl", "linear", "Point", "UDL", " linear ") }], [{ weight: 1, arbitrary: anyCell }, { weight: 1, arbitrary: fc.constant<unknown>("settle") }]);
 }
 
 export function magnitude(noisy = true): fc.Arbitrary<unknown> {
