@@ -106,14 +106,15 @@ function addShearShapeRotation(out: number[], t: number, span: number, value: nu
  */
 export function equivalentNodalLoads(loads: SpanLoad[], span: number, phi = 0): number[] {
   const out = [0, 0, 0, 0];
-  const shear = [0, 0, 0, 0];
+  // Only a span with shear deformation allocates the shear parts.
+  const shear = phi > 0 ? [0, 0, 0, 0] : null;
   for (const load of loads) {
     if (load.kind === "force") {
       addShape(out, load.at, span, load.value);
-      if (phi > 0) addShearShape(shear, load.at, span, load.value);
+      if (shear !== null) addShearShape(shear, load.at, span, load.value);
     } else if (load.kind === "couple") {
       addShapeSlope(out, load.at, span, load.value);
-      if (phi > 0) addShearShapeRotation(shear, load.at, span, load.value);
+      if (shear !== null) addShearShapeRotation(shear, load.at, span, load.value);
     } else {
       const half = (load.to - load.from) / 2;
       const mid = (load.to + load.from) / 2;
@@ -122,10 +123,10 @@ export function equivalentNodalLoads(loads: SpanLoad[], span: number, phi = 0): 
         const t = mid + half * GAUSS_NODES[g];
         const w = GAUSS_WEIGHTS[g] * half * (load.q0 + rate * (t - load.from));
         addShape(out, t, span, w);
-        if (phi > 0) addShearShape(shear, t, span, w);
+        if (shear !== null) addShearShape(shear, t, span, w);
       }
     }
   }
-  if (phi > 0) for (let r = 0; r < 4; r++) out[r] = (out[r] + phi * shear[r]) / (1 + phi);
+  if (shear !== null) for (let r = 0; r < 4; r++) out[r] = (out[r] + phi * shear[r]) / (1 + phi);
   return out;
 }
