@@ -121,7 +121,8 @@ function indexOf(count: number, t: number): number {
  * Integrates one span exactly by the area method: from the values at its left node, V
  * falls by the area under the load and by each point force, M rises by the area under V and
  * by each clockwise couple, slope falls by the area under M/EI and deflection rises by the
- * area under the slope. Pieces start and end at the nodes' and loads' own x (xLeft, xRight:
+ * area under the slope plus, with shear deformation (`shearFlexibility` = 1/(G·A_v) > 0), the
+ * area under V/(G·A_v). Pieces start and end at the nodes' and loads' own x (xLeft, xRight:
  * the span's nodes). Appends the span's pieces to `out`. The loads are swept once in
  * order of position, so the cost grows as n log n in the number of loads.
  */
@@ -133,6 +134,7 @@ export function integrateSpan(
   xRight: number,
   flexibility: number,
   out: Piece[],
+  shearFlexibility = 0,
 ): void {
   const count = breakpoints(loads, span, xLeft, xRight);
   force.fill(0, 0, count);
@@ -185,6 +187,7 @@ export function integrateSpan(
       q0,
       q1,
       flexibility,
+      shearFlexibility,
     };
     out.push(piece);
     const s = t1 - t0;
@@ -194,8 +197,9 @@ export function integrateSpan(
     const nextShear = shear - q0 * s - (q1 * s2) / 2;
     const nextMoment = moment + shear * s - (q0 * s2) / 2 - (q1 * s3) / 6;
     const nextSlope = slope - flexibility * (moment * s + (shear * s2) / 2 - (q0 * s3) / 6 - (q1 * s4) / 24);
-    const nextDeflection =
+    let nextDeflection =
       deflection + slope * s - flexibility * ((moment * s2) / 2 + (shear * s3) / 6 - (q0 * s4) / 24 - (q1 * s4 * s) / 120);
+    if (shearFlexibility > 0) nextDeflection += shearFlexibility * (shear * s - (q0 * s2) / 2 - (q1 * s3) / 6);
     shear = nextShear;
     moment = nextMoment;
     slope = nextSlope;

@@ -112,7 +112,8 @@ export function solveRefined(system: StiffnessSystem, stats?: PivotStats): Float
 
 /**
  * Out-of-balance vertical force and moment about x = 0 of the reactions (up +, moments
- * counter-clockwise +) against the loads (down +, couples clockwise +).
+ * counter-clockwise +) against the loads (down +, couples clockwise +). A settlement is no
+ * force: the reactions it causes balance among themselves.
  */
 export function staticsResidual(loads: Load[], reactions: Reaction[]): { force: number; moment: number } {
   let force = 0;
@@ -127,7 +128,7 @@ export function staticsResidual(loads: Load[], reactions: Reaction[]): { force: 
       moment -= load.magnitude * load.xStart;
     } else if (load.kind === "moment") {
       moment -= load.magnitude;
-    } else {
+    } else if (load.kind !== "settle") {
       const a = load.xStart;
       const b = load.xEnd;
       const w1 = load.magnitude;

@@ -1,5 +1,5 @@
 import { isCollapsedPivot, type PivotStats } from "./banded";
-import { elementDof, nodePositions, rotationalSpring, type Layout } from "./layout";
+import { elementDof, nodePositions, prescribedDisplacement, rotationalSpring, type Layout } from "./layout";
 import { solvePrecise, worstStiffnessRatio } from "./precise";
 import type { Member, Piece, Quantity, Reaction, Solution } from "./model";
 import { pieceValue } from "./polynomial";
@@ -16,11 +16,33 @@ function loadScaleOf(member: Member, length: number): number {
   for (const load of member.loads) {
     if (load.kind === "point") scale += Math.abs(load.magnitude);
     else if (load.kind === "moment") scale += Math.abs(load.magnitude) / length;
-    else {
+    else if (load.kind !== "settle") {
       const end = load.kind === "linear" ? load.magnitudeEnd : load.magnitude;
       scale += ((Math.abs(load.magnitude) + Math.abs(end)) / 2) * (load.xEnd - load.xStart);
     }
   }
+  return scale;
+}
+
+/**
+ * A settlement loads the member through its supports alone (the reactions it causes balance
+ * each other). The scale its forces are judged by is the largest they could be: Δ times the
+ * stiffness that meets the node (12EI/L³ of each span beside it, and a spring's k).
+ */
+function settlementScale(member: Member, layout: Layout): number {
+  const settlement = layout.settlement;
+  if (settlement === null) return 0;
+  let scale = 0;
+  settlement.forEach((delta, node) => {
+    if (delta === 0) return;
+    let stiffness = 0;
+    for (const e of [node - 1, node]) {
+      if (e >= 0 && e < member.spans.length) stiffness += (12 * layout.stiffness[e]) / member.spans[e] ** 3;
+    }
+    const support = member.supports[node];
+    if (support.kind === "spring") stiffness += support.stiffness;
+    scale += Math.abs(delta) * stiffness;
+  });
   return scale;
 }
 
@@ -61,7 +83,10 @@ function scalesOf(pieces: Piece[], forceTerms: number, momentTerms: number): Rec
     shearTerms = Math.max(shearTerms, load);
     momentTermsOfPieces = Math.max(momentTermsOfPieces, m + load * span);
     slopeTerms = Math.max(slopeTerms, Math.abs(p.slope0) + bending);
-    deflectionTerms = Math.max(deflectionTerms, Math.abs(p.deflection0) + Math.abs(p.slope0) * span + bending * span);
+    let deflectionTerm = Math.abs(p.deflection0) + Math.abs(p.slope0) * span + bending * span;
+    // With shear deformation the deflection also sums V/(G·A_v) over the piece.
+    if (p.shearFlexibility > 0) deflectionTerm += p.shearFlexibility * span * load;
+    deflectionTerms = Math.max(deflectionTerms, deflectionTerm);
   }
   return {
     shear: Math.max(shear, 0.01 * Math.max(shearTerms, forceTerms)),
@@ -152,12 +177,14 @@ function solveInDouble(member: Member, assembly: Assembly): StiffnessAnswer | nu
   let momentTermsRaw = 0;
   let forces = 0;
   let moments = 0;
+  const { settlement } = layout;
   for (let e = 0; e < spanCount; e++) {
     const km = 16 * e;
     const span = member.spans[e];
     for (let c = 0; c < 4; c++) {
       const dof = elementDof(layout, e, c);
-      local[c] = dof >= 0 ? d[dof] : 0;
+      // A restrained DOF moves by its settlement (prescribed), else not at all.
+      local[c] = dof >= 0 ? d[dof] : settlement === null ? 0 : prescribedDisplacement(layout, e, c);
     }
     for (let r = 0; r < 4; r++) {
       const f = nodalLoads[4 * e + r];
@@ -230,6 +257,7 @@ export function solve(member: Member): Solution {
   nodeMoment.fill(0, 0, nodeCount);
   const pieces: Piece[] = [];
   const spanCount = member.spans.length;
+  const { settlement } = layout;
   for (let e = 0; e < spanCount; e++) {
     const at = 4 * e;
     nodeForce[e] += ends[at];
@@ -241,10 +269,10 @@ export function solve(member: Member): Solution {
     start.shear = -ends[at];
     start.moment = ends[at + 1];
     start.slope = slopeDof >= 0 ? d[slopeDof] : 0;
-    start.deflection = deflectionDof >= 0 ? d[deflectionDof] : 0;
-    integrateSpan(start, spanLoads[e], member.spans[e], nodeX[e], nodeX[e + 1], 1 / layout.stiffness[e], pieces);
+    start.deflection = deflectionDof >= 0 ? d[deflectionDof] : settlement === null ? 0 : prescribedDisplacement(layout, e, 0);
+    integrateSpan(start, spanLoads[e], member.spans[e], nodeX[e], nodeX[e + 1], 1 / layout.stiffness[e], pieces, layout.shearFlexibility[e]);
   }
-  const loadScale = loadScaleOf(member, layout.length);
+  const loadScale = loadScaleOf(member, layout.length) + settlementScale(member, layout);
   const reactions = reactionsOf(member, layout, d, loadScale);
   const scales = scalesOf(pieces, solved.forceTerms, solved.momentTerms);
   requireFinite(d, layout.size, pieces, reactions, scales);
@@ -277,6 +305,7 @@ let rawMoment = new Float64Array(8);
  */
 function reactionsOf(member: Member, layout: Layout, d: Float64Array, loadScale: number): Reaction[] {
   const { supports } = member;
+  const { settlement } = layout;
   const count = supports.length;
   if (rawForce.length < count) {
     rawForce = new Float64Array(Math.max(count, 2 * rawForce.length));
@@ -302,7 +331,9 @@ function reactionsOf(member: Member, layout: Layout, d: Float64Array, loadScale:
         break;
       case "spring": {
         const deflectionDof = layout.deflectionDof[i];
-        force = support.stiffness * (deflectionDof >= 0 ? d[deflectionDof] : 0);
+        const w = deflectionDof >= 0 ? d[deflectionDof] : 0;
+        // The spring pushes on k(w - Δ) when its base settles by Δ.
+        force = support.stiffness * (settlement === null ? w : w - settlement[i]);
         moment = spring;
         break;
       }

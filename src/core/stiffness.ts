@@ -1,5 +1,5 @@
 import { equivalentNodalLoads, loadsBySpan, type SpanLoad } from "./elementLoads";
-import { buildLayout, elementDof, rotationalSpring, type Layout } from "./layout";
+import { buildLayout, elementDof, prescribedDisplacement, rotationalSpring, type Layout } from "./layout";
 import type { Member } from "./model";
 
 /**
@@ -15,15 +15,31 @@ export interface StiffnessSystem {
 }
 
 /**
- * The 4x4 Euler–Bernoulli element matrix, row-major, DOFs [w1, θ1, w2, θ2], written into
- * `out` from index `at`: the one definition of the element's stiffness.
+ * The 4x4 element matrix, row-major, DOFs [w1, θ1, w2, θ2] (θ the rotation of the section),
+ * written into `out` from index `at`: the one definition of the element's stiffness.
+ * Euler–Bernoulli without a shear flexibility; with one (1/(G·A_v) > 0), the exact prismatic
+ * Timoshenko element, φ = 12EI/(G·A_v L²): EI/((1+φ)L³)·[12, 6L, -12, 6L; 6L, (4+φ)L²,
+ * -6L, (2-φ)L²; ...].
  */
-export function elementMatrixInto(out: number[] | Float64Array, at: number, ei: number, span: number): void {
-  const k = ei / (span * span * span);
-  const a = 12 * k;
-  const b = 6 * span * k;
-  const c = 4 * span * span * k;
-  const d = 2 * span * span * k;
+export function elementMatrixInto(out: number[] | Float64Array, at: number, ei: number, span: number, shearFlexibility = 0): void {
+  let a: number;
+  let b: number;
+  let c: number;
+  let d: number;
+  if (shearFlexibility > 0) {
+    const phi = shearPhi(ei, span, shearFlexibility);
+    const k = ei / (span * span * span * (1 + phi));
+    a = 12 * k;
+    b = 6 * span * k;
+    c = (4 + phi) * span * span * k;
+    d = (2 - phi) * span * span * k;
+  } else {
+    const k = ei / (span * span * span);
+    a = 12 * k;
+    b = 6 * span * k;
+    c = 4 * span * span * k;
+    d = 2 * span * span * k;
+  }
   out[at] = a;
   out[at + 1] = b;
   out[at + 2] = -a;
@@ -42,11 +58,16 @@ export function elementMatrixInto(out: number[] | Float64Array, at: number, ei: 
   out[at + 15] = c;
 }
 
-/** The 4x4 Euler–Bernoulli element matrix, row-major, DOFs [w1, θ1, w2, θ2]. */
-export function elementMatrix(ei: number, span: number): number[] {
+/** The 4x4 element matrix, row-major, DOFs [w1, θ1, w2, θ2] (Timoshenko with a shear flexibility > 0; see elementMatrixInto). */
+export function elementMatrix(ei: number, span: number, shearFlexibility = 0): number[] {
   const out = new Array<number>(16);
-  elementMatrixInto(out, 0, ei, span);
+  elementMatrixInto(out, 0, ei, span, shearFlexibility);
   return out;
+}
+
+/** φ = 12EI/(G·A_v L²) of a span (0 without shear deformation). */
+export function shearPhi(ei: number, span: number, shearFlexibility: number): number {
+  return shearFlexibility > 0 ? (12 * ei * shearFlexibility) / (span * span) : 0;
 }
 
 export interface Assembly {
@@ -115,16 +136,20 @@ export function assembleMember(member: Member, nodeX?: number[], reuse = false):
     nodal = new Float64Array(4 * spanCount);
   }
   const spanLoads = loadsBySpan(layout.nodeX, member.spans, member.loads);
+  const { settlement } = layout;
   for (let e = 0; e < spanCount; e++) {
     const span = member.spans[e];
     const km = 16 * e;
     const fm = 4 * e;
-    elementMatrixInto(matrices, km, layout.stiffness[e], span);
-    equivalentNodalLoads(spanLoads[e], span, nodal, fm);
+    const g = layout.shearFlexibility[e];
+    elementMatrixInto(matrices, km, layout.stiffness[e], span, g);
+    equivalentNodalLoads(spanLoads[e], span, nodal, fm, shearPhi(layout.stiffness[e], span, g));
     for (let r = 0; r < 4; r++) {
       const i = elementDof(layout, e, r);
       if (i < 0) continue;
       rhs[i] += nodal[fm + r];
+      // A settling restrained node moves K·Δ to the right-hand side.
+      if (settlement !== null) for (let c = 0; c < 4; c++) rhs[i] -= matrices[km + r * 4 + c] * prescribedDisplacement(layout, e, c);
       for (let c = 0; c < 4; c++) {
         const j = elementDof(layout, e, c);
         if (j < i) continue;
@@ -138,6 +163,8 @@ export function assembleMember(member: Member, nodeX?: number[], reuse = false):
     if (support.kind === "spring") {
       const i = layout.deflectionDof[node];
       band[i * stride] += support.stiffness;
+      // The spring's base settles: its force k(w - Δ) puts kΔ on the right-hand side.
+      if (settlement !== null) rhs[i] += support.stiffness * settlement[node];
     }
     const rotational = rotationalSpring(support);
     if (rotational > 0) band[layout.rotationRightDof[node] * stride] += rotational;

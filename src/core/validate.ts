@@ -11,7 +11,7 @@ export { memberLength };
  */
 export const MAX_LOADS = 10000;
 
-const LOAD_KINDS = new Set(["point", "moment", "udl", "linear"]);
+const LOAD_KINDS = new Set(["point", "moment", "udl", "linear", "settle"]);
 const SUPPORT_KINDS = new Set(["pin", "fixed", "free", "hinge", "spring"]);
 
 function isFiniteNumber(value: unknown): value is number {
@@ -92,6 +92,7 @@ function isPlainLoad(load: Load, length: number): boolean {
   if (!LOAD_KINDS.has(load.kind) || !isFiniteNumber(load.magnitude) || !isFiniteNumber(load.xStart)) return false;
   if (!isOnMember(load.xStart, length)) return false;
   if (load.kind === "point" || load.kind === "moment") return true;
+  if (load.kind === "settle") return false;
   if (!isFiniteNumber(load.xEnd) || !isOnMember(load.xEnd, length) || load.xEnd <= load.xStart) return false;
   return load.kind !== "linear" || isFiniteNumber(load.magnitudeEnd);
 }
@@ -101,19 +102,57 @@ function validateLoad(load: Load, length: number): void {
   const where = `load row ${load.row}`;
   const tol = positionTolerance(length);
   if (!LOAD_KINDS.has(load.kind)) {
-    throw invalid(`${where}: unknown load type ${show(load.kind)}; use point, moment, udl or linear`);
+    throw invalid(`${where}: unknown load type ${show(load.kind)}; use point, moment, udl, linear or settle`);
   }
   if (!isFiniteNumber(load.magnitude)) throw invalid(`${where}: magnitude must be a finite number, got ${show(load.magnitude)}`);
   if (!isFiniteNumber(load.xStart)) throw invalid(`${where}: x start must be a finite number, got ${show(load.xStart)}`);
   if (load.xStart < -tol) throw invalid(`${where}: x start ${load.xStart} is before the member start 0`);
   if (load.xStart > length + tol) throw invalid(`${where}: x start ${load.xStart} is beyond the member end ${shownLength(length)}`);
-  if (load.kind === "point" || load.kind === "moment") return;
+  if (load.kind === "point" || load.kind === "moment" || load.kind === "settle") return;
   if (!isFiniteNumber(load.xEnd)) throw invalid(`${where}: x end must be a finite number, got ${show(load.xEnd)}`);
   if (load.xEnd > length + tol) throw invalid(`${where}: x end ${load.xEnd} is beyond the member end ${shownLength(length)}`);
   if (load.xEnd <= load.xStart) throw invalid(`${where}: x end ${load.xEnd} is not beyond x start ${load.xStart}`);
   if (load.kind === "linear" && !isFiniteNumber(load.magnitudeEnd)) {
     throw invalid(`${where}: magnitude at end must be a finite number, got ${show(load.magnitudeEnd)}`);
   }
+}
+
+/**
+ * A settlement is the prescribed deflection of a node that is restrained vertically (pin,
+ * fixed, or a spring, whose base settles), and its forces depend on the real EI.
+ */
+function validateSettlements(member: Member): void {
+  const nodeX = nodePositions(member.spans);
+  for (const load of member.loads) {
+    if (load.kind !== "settle") continue;
+    const where = `load row ${load.row}`;
+    const node = nodeIndexAt(nodeX, load.xStart);
+    if (node < 0) {
+      throw invalid(`${where}: a settlement belongs at a support node; x = ${+load.xStart.toPrecision(12)} is not a node (nodes are at the span ends)`);
+    }
+    const kind = member.supports[node].kind;
+    if (kind !== "pin" && kind !== "fixed" && kind !== "spring") {
+      throw invalid(`${where}: the node at x = ${+nodeX[node].toPrecision(12)} is ${kind}, with no vertical restraint to settle; a settlement belongs at a pin, fixed or spring support`);
+    }
+    if (member.stiffness === null) {
+      throw invalid(`${where}: the forces from a settlement depend on the real EI (without EI the member is taken as uniform); give EI`);
+    }
+  }
+}
+
+function validateShear(member: Member): void {
+  const { shear, spans } = member;
+  if (shear === undefined || shear === null) return;
+  if (!Array.isArray(shear) || (shear.length !== spans.length && shear.length !== 1)) {
+    throw invalid(`EI: give the shear stiffness once for the member or once per span (${spans.length}), got ${Array.isArray(shear) ? shear.length : 0}`);
+  }
+  shear.forEach((ga, i) => {
+    if (ga === null) return;
+    const where = shear.length === 1 ? "shear stiffness of the member" : `shear stiffness of span ${i + 1}`;
+    if (!isFiniteNumber(ga) || ga <= 0) throw invalid(`${where}: GA must be a positive number (force units), got ${show(ga)}`);
+    if (!Number.isFinite(1 / ga)) throw invalid(`${where}: ${show(ga)} is too small to compute with; check its units`);
+    if (member.stiffness === null) throw invalid(`${where}: shear deformation needs EI, since the result depends on EI relative to GA`);
+  });
 }
 
 /** A couple exactly at a hinge has no side to act on: the user must say which. */
@@ -134,8 +173,9 @@ function rejectCouplesOnHinges(member: Member): void {
 
 /**
  * Checks a member's data: positive finite spans, one support per node, known support kinds,
- * positive springs (which need EI), hinges only between spans, EI once or per span, and
- * loads that lie on the member. Throws a #VALUE! SpanError naming the offending item.
+ * positive springs (which need EI), hinges only between spans, EI once or per span, a
+ * positive shear stiffness (which needs EI), loads that lie on the member, and settlements
+ * only at vertically restrained nodes of a member with EI. Throws a #VALUE! SpanError naming the offending item.
  */
 export function validateMember(member: Member): void {
   validateSpans(member.spans);
@@ -146,6 +186,13 @@ export function validateMember(member: Member): void {
   if (member.loads.length > MAX_LOADS) {
     throw invalid(`loads: ${member.loads.length} loads on one member; at most ${MAX_LOADS} are taken (combine loads that act together)`);
   }
-  for (let i = 0; i < member.loads.length; i++) validateLoad(member.loads[i], length);
+  let settles = false;
+  for (let i = 0; i < member.loads.length; i++) {
+    const load = member.loads[i];
+    validateLoad(load, length);
+    if (load.kind === "settle") settles = true;
+  }
   rejectCouplesOnHinges(member);
+  validateShear(member);
+  if (settles) validateSettlements(member);
 }

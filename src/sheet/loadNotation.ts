@@ -5,6 +5,7 @@
  *   moment C at X [case]                   couple C at x = X
  *   udl W [from A] [to B] [case]           uniform load W from A (default 0) to B (default member end)
  *   linear W1 to W2 [from A] [to B] [case] load varying from W1 at A to W2 at B
+ *   settle D at X [case]                   support at x = X settles D (down +, deflection unit)
  *
  * Keywords are case-insensitive; numbers are plain decimals ("2.5", "-3", "1e3"); the case
  * label is optional and last (letters and digits starting with a letter, as combinations
@@ -20,6 +21,7 @@ const KINDS = new Map<string, LoadKind>([
   ["moment", "moment"],
   ["udl", "udl"],
   ["linear", "linear"],
+  ["settle", "settle"],
 ]);
 
 class Tokens {
@@ -75,13 +77,13 @@ function parseOne(text: string, row: number): LoadRow {
   };
   const tokens = new Tokens(text.split(/\s+/).filter((w) => w !== ""), fail);
   const word = tokens.peek() ?? "";
-  const kind = KINDS.get(word.toLowerCase()) ?? fail(`"${word.length <= 20 ? word : `${word.slice(0, 17)}...`}" is not a load type; start with point, moment, udl or linear`);
+  const kind = KINDS.get(word.toLowerCase()) ?? fail(`"${word.length <= 20 ? word : `${word.slice(0, 17)}...`}" is not a load type; start with point, moment, udl, linear or settle`);
   tokens.expectKeyword(word.toLowerCase(), "");
   const magnitude = tokens.number("the magnitude");
   let xStart = 0;
   let xEnd: number | null = null;
   let magnitudeEnd = 0;
-  if (kind === "point" || kind === "moment") {
+  if (kind === "point" || kind === "moment" || kind === "settle") {
     tokens.expectKeyword("at", "and the position after the magnitude");
     xStart = tokens.number("the position after \"at\"");
   } else {
@@ -162,6 +164,7 @@ function parsePlain(text: string, start: number, end: number, row: number): Load
   else if (isWord(text, 0, "moment")) kind = "moment";
   else if (isWord(text, 0, "udl")) kind = "udl";
   else if (isWord(text, 0, "linear")) kind = "linear";
+  else if (isWord(text, 0, "settle")) kind = "settle";
   else return null;
   const magnitude = numberOf(text, 1, words);
   if (magnitude !== magnitude) return null;
@@ -169,7 +172,7 @@ function parsePlain(text: string, start: number, end: number, row: number): Load
   let xStart = 0;
   let xEnd: number | null = null;
   let magnitudeEnd = 0;
-  if (kind === "point" || kind === "moment") {
+  if (kind === "point" || kind === "moment" || kind === "settle") {
     if (words < 4 || !isWord(text, 2, "at")) return null;
     xStart = numberOf(text, 3, words);
     if (xStart !== xStart) return null;
@@ -247,7 +250,7 @@ function num(value: number): string {
 /** The one text form of a load row. */
 export function formatLoad(row: LoadRow): string {
   const parts: string[] = [row.kind, num(row.magnitude)];
-  if (row.kind === "point" || row.kind === "moment") parts.push("at", num(row.xStart));
+  if (row.kind === "point" || row.kind === "moment" || row.kind === "settle") parts.push("at", num(row.xStart));
   else {
     if (row.kind === "linear") parts.push("to", num(row.magnitudeEnd));
     if (row.xStart !== 0) parts.push("from", num(row.xStart));

@@ -74,6 +74,29 @@ describe("solutions share no scratch buffer with the solver", () => {
     expect(reversed).toEqual(once);
   });
 
+  test("shear stiffness and settlement reach every solve through the scratch buffers, and leave nothing behind", () => {
+    // The same member with G·A_v on every span (φ = 12EI/(GA L²) between 0.3 and 1.3 here) and/or a settlement of its second node.
+    const withPhysics = (m: Member, shear: boolean, settle: boolean): Member => ({
+      ...m,
+      shear: shear ? [2e4] : undefined,
+      loads: settle ? [...m.loads, { kind: "settle", magnitude: 0.01, xStart: m.spans[0], xEnd: m.spans[0], magnitudeEnd: 0, loadCase: "", row: 99 }] : m.loads,
+    });
+    const plain = continuous(5, 2);
+    const plainFirst = snapshot(solve(plain));
+    const variants = [withPhysics(plain, true, false), withPhysics(plain, false, true), withPhysics(plain, true, true)];
+    const first = variants.map((m) => snapshot(solve(m)));
+    // Each feature changes the answer (a dropped 1/GA or settlement would give the plain one) ...
+    for (const o of first) expect(o).not.toBe(plainFirst);
+    expect(new Set(first).size).toBe(3);
+    // ... and a plain solve after them, or after a larger sheared and settled one, is bit for bit the plain one.
+    expect(snapshot(solve(plain))).toBe(plainFirst);
+    solve(withPhysics(continuous(300, 3), true, true));
+    expect(snapshot(solve(plain))).toBe(plainFirst);
+    // The featured members again, after plain and larger solves: the same bits.
+    solve(continuous(400, 1));
+    expect(variants.map((m) => snapshot(solve(m)))).toEqual(first);
+  });
+
   test("an assembled system is the caller's own", () => {
     const system = assemble(continuous(6, 2));
     const band = Array.from(system.band);
