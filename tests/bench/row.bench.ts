@@ -13,8 +13,8 @@
  * 2. Growth: one SPAN.MAXMOMENT of a 1,000-span and of a 10,000-span member given as ranges
  *    (pins, one UDL over the whole member and a point load on every other span; a fresh load
  *    magnitude each call so the member cache never answers). Target: 10,000 spans at most 12 times 1,000.
- *    Garbage collection's share of the time is printed (perf_hooks gc entries). Run first, on a
- *    heap without the per-row passes' garbage; medians of three interleaved rounds.
+ *    Garbage collection's share of the time is printed (perf_hooks gc entries). Medians of
+ *    three interleaved rounds.
  *
  * 3. Schedule rows: MAXMOMENT, REACTIONS, DEFLECTION (another combination) and SHEAR of one
  *    member per row, through the sources, counting solves with the member cache's counter.
@@ -22,8 +22,13 @@
  *
  * 4. Where a row's time goes (the floor): reading, the core and the rest, from the sources.
  *
+ * Each part runs in a fresh Node process (the same bundle loaded anew), so that no part's
+ * heap or compiled code depends on which ran before it (measured: running the 10,000-span
+ * member first slowed the per-row passes after it by a third to a half in one process).
+ *
  * Invented data from a seeded generator. Usage: node tests/bench/run.js row
  */
+import { spawnSync } from "child_process";
 import * as fs from "fs";
 import * as os from "os";
 import * as path from "path";
@@ -342,14 +347,27 @@ function scheduleRows(): void {
   solvedMembers.clear();
 }
 
+/** The parts, each run in a fresh process (ROW_BENCH_PART), so no part inherits another's heap or compiled code. */
+const PARTS: Record<string, (functions: Record<string, Fn>) => void | Promise<void>> = {
+  perRow,
+  floor: () => floor(),
+  growth,
+  schedule: () => scheduleRows(),
+};
+
 export async function run(): Promise<void> {
-  const functions = loadBundle();
-  console.log(`node ${process.version}, ${os.cpus().length} cpus, load average ${os.loadavg().map((v) => v.toFixed(1)).join(" ")}`);
-  // Growth first, on a heap without the per-row passes' garbage (80,000 rows of text, which
-  // otherwise make the collector's work on the 10,000-span member larger by a varying amount).
-  await growth(functions);
-  perRow(functions);
-  floor();
-  scheduleRows();
-  console.log(`load average after: ${os.loadavg().map((v) => v.toFixed(1)).join(" ")}`);
+  const load = (): string => os.loadavg().map((v) => v.toFixed(1)).join(" ");
+  const part = process.env.ROW_BENCH_PART;
+  if (part !== undefined) {
+    await PARTS[part](loadBundle());
+    return;
+  }
+  console.log(`node ${process.version}, ${os.cpus().length} cpus, load average ${load()}`);
+  for (const name of Object.keys(PARTS)) {
+    const child = spawnSync(process.execPath, [path.join(__dirname, "run.js"), "row.bench"], { env: { ...process.env, ROW_BENCH_PART: name }, encoding: "utf8" });
+    // The runner's own "# file" header line is dropped; the part's lines are passed on.
+    process.stdout.write(child.stdout.replace(/^\s*# row\.bench\.ts\n/, ""));
+    if (child.status !== 0) throw new Error(`row bench part ${name} failed: ${child.stderr}`);
+  }
+  console.log(`load average after: ${load()}`);
 }
