@@ -168,7 +168,9 @@ function paneConfig(env, argv) {
     ...base,
     name: "pane",
     entry: { taskpane: "./src/pane/taskpane.ts" },
-    output: { ...base.output, filename: "[name].js", chunkFilename: "[name].js" },
+    // publicPath "": the PDF chunk loads beside taskpane.html; webpack's automatic public path
+    // would probe for importScripts (a worker API the pane never uses; tests/hardening/network.test.ts).
+    output: { ...base.output, filename: "[name].js", chunkFilename: "[name].js", publicPath: "" },
     // One entry: no shared chunks to split out; the PDF writer and pdf-lib stay one file.
     optimization: { splitChunks: false },
     plugins: [
@@ -199,6 +201,19 @@ function workbenchConfig(env, argv) {
     name: "workbench",
     entry: { workbench: "./src/workbench/main.ts" },
     output: { ...base.output, filename: "[name].js" },
+    // jszip's browser file (dist/jszip.min.js) inlines the `setimmediate` polyfill, which builds
+    // functions from text and probes for workers; the page's policy allows neither
+    // (tests/hardening/network.test.ts). So the workbench bundles jszip's own modules, with a
+    // function-only shim of ours for setimmediate and no Node stream (jszip then uses its
+    // browser paths only: support.nodestream is false).
+    resolve: {
+      ...base.resolve,
+      alias: {
+        jszip$: path.join(root, "node_modules/jszip/lib/index.js"),
+        setimmediate: path.join(root, "src/workbench/files/setImmediate.ts"),
+      },
+      fallback: { stream: false },
+    },
     plugins: [
       new HtmlWebpackPlugin({ filename: "workbench.html", template: "./src/workbench/index.html", chunks: ["workbench"] }),
     ],

@@ -41,7 +41,7 @@ export const START_USAGE = `usage:
 
 export const VERIFY_USAGE = `usage:
   spanwise verify [--out <verification.pdf|.html>] [--paper A4|letter] [--force]
-      runs the handbook cases the test suite runs and writes the verification document
+      runs the handbook and independent-reference cases the test suite runs and writes the verification document
       (default verification.pdf); exits 1 when any case fails.
 `;
 

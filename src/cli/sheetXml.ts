@@ -7,8 +7,28 @@
  * A cell or row without `r` takes the next column or row (MS-OI29500 2.1.589 c: "the cell
  * shall be located in the column with the index that is 1 greater than that of the previous
  * cell").
+ *
+ * The part is given either as text or as a byte string (see byteText.ts; `{ bytes: true }`):
+ * then positions are byte offsets, the decoded texts of a cell (formula, value, inline string,
+ * attribute values) are read as UTF-8 into fresh strings, and a rewrite copies the untouched
+ * bytes exactly. A big sheet is read that way so that nothing read from it keeps the whole
+ * part alive, and written through a sink (rewriteSheetInto) so that it never exists as one
+ * string.
  */
+import { textOfUtf8 } from "./byteText";
 import { attributes, decodeXml, localName, textRuns } from "./xmlText";
+
+export interface ScanOptions {
+  /** The part is a byte string (one character per byte), its text UTF-8. */
+  bytes?: boolean;
+}
+
+const NON_ASCII = /[\u0080-\uffff]/;
+
+/** A start tag's attributes; in a byte string a tag that is not ASCII is read as UTF-8 first (before its entities). */
+function cellAttributes(tag: string, bytes: boolean): Map<string, string> {
+  return attributes(bytes && NON_ASCII.test(tag) ? textOfUtf8(tag) : tag);
+}
 
 export interface XmlFormula {
   text: string;
@@ -100,9 +120,10 @@ function sheetDataBounds(xml: string): { start: number; end: number; selfClosing
 }
 
 /** Reads one `<c>` element starting at `open` (its start tag already read). */
-function readCell(xml: string, open: number, tag: string, close: number, row: number, col: number): XmlCell {
+function readCell(xml: string, open: number, tag: string, close: number, row: number, col: number, bytes: boolean): XmlCell {
   const selfClosing = tag.endsWith("/");
-  const attrs = attributes(tag);
+  const attrs = cellAttributes(tag, bytes);
+  const text = bytes ? textOfUtf8 : (raw: string) => raw;
   const cell: XmlCell = { row, col, start: open, end: close + 1, tagEnd: close + 1, attrs };
   if (selfClosing) return cell;
   const endTag = `</${tag.split(/[\s/]/, 1)[0]}>`;
@@ -126,14 +147,14 @@ function readCell(xml: string, open: number, tag: string, close: number, row: nu
     const content = innerSelf ? "" : xml.slice(inner.close + 1, innerEnd);
     const after = innerSelf ? innerEnd : innerEnd + qualified.length + 3;
     if (name === "f") {
-      const fa = attributes(inner.tag);
-      cell.formula = { text: decodeXml(content), type: fa.get("t"), ref: fa.get("ref"), si: fa.get("si"), tagStart: lt, tagEnd: inner.close + 1 };
+      const fa = cellAttributes(inner.tag, bytes);
+      cell.formula = { text: decodeXml(text(content)), type: fa.get("t"), ref: fa.get("ref"), si: fa.get("si"), tagStart: lt, tagEnd: inner.close + 1 };
     } else if (name === "v") {
-      cell.value = decodeXml(content);
+      cell.value = decodeXml(text(content));
       cell.valueStart = lt;
       cell.valueEnd = after;
     } else if (name === "is") {
-      cell.inline = textRuns(content);
+      cell.inline = textRuns(text(content));
     }
     i = after;
   }
@@ -141,7 +162,14 @@ function readCell(xml: string, open: number, tag: string, close: number, row: nu
 }
 
 /** Calls back for every row and cell of the sheet, in document order. */
-export function scanSheet(xml: string, onCell: (cell: XmlCell) => void, onRow?: (row: XmlRow) => void, onRowStart?: (row: XmlRow) => void): void {
+export function scanSheet(
+  xml: string,
+  onCell: (cell: XmlCell) => void,
+  onRow?: (row: XmlRow) => void,
+  onRowStart?: (row: XmlRow) => void,
+  options: ScanOptions = {},
+): void {
+  const bytes = options.bytes === true;
   const data = sheetDataBounds(xml);
   let i = data.start;
   let rowNumber = -1;
@@ -190,7 +218,7 @@ export function scanSheet(xml: string, onCell: (cell: XmlCell) => void, onRow?: 
       }
       if (cellCol <= col) throw new SheetXmlError(`cell ${r ?? cellCol} is out of order in row ${rowNumber + 1}`);
       col = cellCol;
-      const cell = readCell(xml, lt, tag, close, rowNumber, col);
+      const cell = readCell(xml, lt, tag, close, rowNumber, col, bytes);
       onCell(cell);
       i = cell.end;
       continue;
@@ -227,44 +255,60 @@ export interface SheetRewrite {
  * added cells go into their row in column order (a row element is added where none exists),
  * every other byte is copied as it was.
  */
-export function rewriteSheetWith(xml: string, hooks: SheetRewrite): string {
+export function rewriteSheetWith(xml: string, hooks: SheetRewrite, options: ScanOptions = {}): string {
+  const out: string[] = [];
+  rewriteSheetInto(xml, hooks, (piece) => out.push(piece), options);
+  return out.join("");
+}
+
+/**
+ * rewriteSheetWith, handing the result to `push` piece by piece, in order (slices of the part
+ * and the new texts): for a big sheet written to a ByteSink.
+ */
+export function rewriteSheetInto(xml: string, hooks: SheetRewrite, push: (piece: string) => void, options: ScanOptions = {}): void {
   const data = sheetDataBounds(xml);
   const newRow = (row: number, adds: readonly { text: string }[]): string => `<row r="${row + 1}">${adds.map((cell) => cell.text).join("")}</row>`;
-  const out: string[] = [];
   let copied = 0;
   const copyTo = (at: number): void => {
     if (at > copied) {
-      out.push(xml.slice(copied, at));
+      push(xml.slice(copied, at));
       copied = at;
     }
   };
   let done = -1;
-  const rowsBefore = (limit: number, at: number): void => {
+  /** New rows before `limit` (where the sheet has none), each handed to `emit` after the part is copied up to `at`. */
+  const rowsBefore = (limit: number, at: number, emit: (text: string) => void = push): void => {
     for (let row = hooks.nextRow(done + 1); row !== undefined && row < limit; row = hooks.nextRow(row + 1)) {
       const adds = hooks.adds(row);
       done = row;
       if (adds.length === 0) continue;
       copyTo(at);
-      out.push(newRow(row, adds));
+      emit(newRow(row, adds));
     }
   };
   if (data.selfClosing) {
     const tag = tagAt(xml, data.at);
     const prefix = tag.tag.slice(0, tag.tag.indexOf("sheetData"));
-    copyTo(data.at);
-    const before = out.length;
-    copied = tag.close + 1;
-    rowsBefore(SHEET_ROWS, copied);
-    const rows = out.splice(before).join("");
-    if (rows === "") return xml;
-    return `${xml.slice(0, data.at)}<${prefix}sheetData>${rows}</${prefix}sheetData>${xml.slice(tag.close + 1)}`;
+    const rows: string[] = [];
+    copied = data.at;
+    rowsBefore(SHEET_ROWS, data.at, (text) => rows.push(text));
+    if (rows.length === 0) {
+      push(xml);
+      return;
+    }
+    push(xml.slice(0, data.at));
+    push(`<${prefix}sheetData>`);
+    rows.forEach(push);
+    push(`</${prefix}sheetData>`);
+    push(xml.slice(tag.close + 1));
+    return;
   }
   let pending: { col: number; text: CellText }[] = [];
   let next = 0;
   const emitUntil = (col: number, at: number): void => {
     while (next < pending.length && pending[next].col < col) {
       copyTo(at);
-      out.push(pending[next++].text);
+      push(pending[next++].text);
     }
     if (next < pending.length && pending[next].col === col) next++;
   };
@@ -275,7 +319,7 @@ export function rewriteSheetWith(xml: string, hooks: SheetRewrite): string {
       const replacement = hooks.cell(cell);
       if (replacement !== undefined) {
         copyTo(cell.start);
-        out.push(replacement);
+        push(replacement);
         copied = cell.end;
       }
     },
@@ -284,7 +328,7 @@ export function rewriteSheetWith(xml: string, hooks: SheetRewrite): string {
         if (next < pending.length) {
           copyTo(row.start);
           const tag = xml.slice(row.start, row.tagEnd);
-          out.push(`${tag.slice(0, -2).trimEnd()}>${pending.slice(next).map((cell) => cell.text).join("")}</${row.prefix}row>`);
+          push(`${tag.slice(0, -2).trimEnd()}>${pending.slice(next).map((cell) => cell.text).join("")}</${row.prefix}row>`);
           copied = row.end;
         }
       } else emitUntil(Number.POSITIVE_INFINITY, row.closeStart);
@@ -297,11 +341,11 @@ export function rewriteSheetWith(xml: string, hooks: SheetRewrite): string {
       pending = hooks.adds(row.row);
       next = 0;
     },
+    options,
   );
   copyTo(data.end);
   rowsBefore(SHEET_ROWS, data.end);
   copyTo(xml.length);
-  return out.join("");
 }
 
 const SHEET_ROWS = 1_048_576;

@@ -19,7 +19,9 @@
  *   message rather than guessed.
  */
 import { isCellError, normalizeFormula, SHEET_LIMITS, SpanWorkbook, type CellInput, type CellResult, type SheetInput } from "../engine";
-import { parseA1, rewriteSheetWith, scanSheet, type XmlCell } from "./sheetXml";
+import { ByteSink, utf8Of } from "./byteText";
+import { FormulaTable, type FormulaCell, type FormulaKind, type Rect } from "./formulaTable";
+import { parseA1, rewriteSheetInto, scanSheet, type XmlCell } from "./sheetXml";
 import { shiftFormula } from "./sharedFormula";
 import { encodeXml } from "./xmlText";
 import { XlsxPackage, type DefinedName } from "./xlsxPackage";
@@ -30,28 +32,16 @@ export class BookError extends Error {}
 /** Cells in all legacy (fixed-size) array ranges together: each of them is written. */
 export const MAX_LEGACY_ARRAY_CELLS = 2_000_000;
 
-export interface Rect {
-  top: number;
-  left: number;
-  bottom: number;
-  right: number;
-}
-
-type ArrayKind = "dynamic" | "legacy";
-
-export interface FormulaCell {
-  row: number;
-  col: number;
-  kind: ArrayKind | "plain";
-  /** The stored range of an array formula. */
-  ref?: Rect;
-}
+export { FormulaTable, type FormulaCell, type Rect };
 
 export interface SheetBook {
   name: string;
   /** The worksheet part (its text is read again when written: big sheets hold one copy at a time). */
   path: string;
-  formulas: FormulaCell[];
+  /** Every formula cell, in document order. */
+  formulas: FormulaTable;
+  /** Plain (single-cell) formulas whose result spilled, by index in `formulas`: refused (see evaluateBook). */
+  refused: Map<number, { rows: number; cols: number }>;
 }
 
 export interface LoadedBook {
@@ -218,12 +208,13 @@ export async function readBook(bytes: Uint8Array): Promise<LoadedBook> {
   let spanCallCount = 0;
   let legacyCells = 0;
   for (const part of parts) {
-    const xml = await pkg.part(part.path);
+    // Read as bytes: every text taken from it is a fresh string, so the part itself is let go after.
+    const xml = await pkg.partBinary(part.path);
     if (xml === undefined) throw new BookError(`sheet "${part.name}" is missing from the package (${part.path})`);
     const cells: CellInput[][] = [];
-    const formulas: FormulaCell[] = [];
+    const formulas = new FormulaTable();
     const masters = new Map<string, { row: number; col: number; text: string }>();
-    const followers: { row: number; col: number; si: string; entry: FormulaCell }[] = [];
+    const followers: { row: number; col: number; si: string; kind: FormulaKind; ref?: Rect }[] = [];
     const whereOf = (row: number, col: number) => `${part.name}!${a1(row, col)}`;
     try {
       scanSheet(xml, (cell) => {
@@ -238,21 +229,22 @@ export async function readBook(bytes: Uint8Array): Promise<LoadedBook> {
         const follows = f.type === "shared" && f.si !== undefined && text.trim() === "";
         if (f.type === "shared" && f.si !== undefined && !follows) masters.set(f.si, { row: cell.row, col: cell.col, text });
         if (follows) text = "";
-        const entry: FormulaCell = { row: cell.row, col: cell.col, kind: "plain" };
+        let kind: FormulaKind = "plain";
+        let ref: Rect | undefined;
         if (f.type === "array") {
-          entry.ref = parseArrayRef(f.ref, cell.row, cell.col, whereOf(cell.row, cell.col));
+          ref = parseArrayRef(f.ref, cell.row, cell.col, whereOf(cell.row, cell.col));
           const cm = Number(cell.attrs.get("cm"));
-          entry.kind = dynamic.has(cm) ? "dynamic" : "legacy";
-          if (entry.kind === "legacy") {
-            legacyCells += (entry.ref.bottom - entry.ref.top + 1) * (entry.ref.right - entry.ref.left + 1);
+          kind = dynamic.has(cm) ? "dynamic" : "legacy";
+          if (kind === "legacy") {
+            legacyCells += (ref.bottom - ref.top + 1) * (ref.right - ref.left + 1);
             if (legacyCells > MAX_LEGACY_ARRAY_CELLS) throw new BookError(`${whereOf(cell.row, cell.col)}: legacy array formulas cover more than ${MAX_LEGACY_ARRAY_CELLS} cells in all`);
           }
         }
-        formulas.push(entry);
-        if (follows) followers.push({ row: cell.row, col: cell.col, si: f.si!, entry });
+        formulas.add(cell.row, cell.col, kind, ref);
+        if (follows) followers.push({ row: cell.row, col: cell.col, si: f.si!, kind, ref });
         spanCallCount += text.match(SPAN_CALL)?.length ?? 0;
-        row[cell.col] = text === "" ? null : engineFormula(text, entry);
-      });
+        row[cell.col] = text === "" ? null : engineFormula(text, kind, ref);
+      }, undefined, undefined, { bytes: true });
     } catch (error) {
       if (error instanceof BookError) throw error;
       throw new BookError(`sheet "${part.name}" cannot be read: ${error instanceof Error ? error.message : String(error)}`);
@@ -262,30 +254,41 @@ export async function readBook(bytes: Uint8Array): Promise<LoadedBook> {
       if (!master) throw new BookError(`${whereOf(follower.row, follower.col)}: its shared formula ${follower.si} has no first cell`);
       const text = shiftFormula(master.text, follower.row - master.row, follower.col - master.col);
       spanCallCount += text.match(SPAN_CALL)?.length ?? 0;
-      cells[follower.row][follower.col] = engineFormula(text, follower.entry);
+      cells[follower.row][follower.col] = engineFormula(text, follower.kind, follower.ref);
     }
     checkArrayRanges(part.name, formulas, cells);
     for (let r = 0; r < cells.length; r++) cells[r] ??= [];
-    sheets.push({ name: part.name, path: part.path, formulas });
+    sheets.push({ name: part.name, path: part.path, formulas, refused: new Map() });
     inputs.push({ name: part.name, cells });
   }
   return { pkg, sheets, inputs, names: pkg.definedNames(), formulaCount, spanCallCount };
 }
 
-function engineFormula(text: string, entry: FormulaCell): string {
+function engineFormula(text: string, kind: FormulaKind, ref: Rect | undefined): string {
   const typed = normalizeFormula(`=${text}`);
-  if (entry.kind !== "legacy" || !entry.ref) return typed;
-  return `=ARRAY_CONSTRAIN(${typed.slice(1)},${entry.ref.bottom - entry.ref.top + 1},${entry.ref.right - entry.ref.left + 1})`;
+  if (kind !== "legacy" || !ref) return typed;
+  return `=ARRAY_CONSTRAIN(${typed.slice(1)},${ref.bottom - ref.top + 1},${ref.right - ref.left + 1})`;
 }
 
-/** Array ranges must not overlap, nor hold another formula; their cached values are dropped. */
-function checkArrayRanges(sheet: string, formulas: readonly FormulaCell[], cells: CellInput[][]): void {
-  const arrays = formulas.filter((f): f is FormulaCell & { ref: Rect } => f.ref !== undefined).map((f) => ({ ...f.ref, anchor: f }));
+/** The stored ranges that cover more than their own cell (a one-cell range holds only its formula), with their anchors. */
+function widerRanges(formulas: FormulaTable): (Rect & { anchor: FormulaCell })[] {
+  const out: (Rect & { anchor: FormulaCell })[] = [];
+  for (let i = 0; i < formulas.length; i++) {
+    if (formulas.coversOthers(i)) out.push({ ...formulas.ref(i)!, anchor: { row: formulas.row(i), col: formulas.col(i), kind: formulas.kind(i) } });
+  }
+  return out;
+}
+
+/**
+ * Array ranges must not overlap, nor hold another formula; their cached values are dropped.
+ * (A one-cell range inside another is the formula it covers.)
+ */
+function checkArrayRanges(sheet: string, formulas: FormulaTable, cells: CellInput[][]): void {
+  const arrays = widerRanges(formulas);
   if (arrays.length === 0) return;
   const sweep = new RowSweep(arrays, (a, b) => {
     throw new BookError(`${sheet}!${a1(b.anchor.row, b.anchor.col)}: the array formula's range ${rectText(b)} overlaps the range ${rectText(a)} of ${a1(a.anchor.row, a.anchor.col)}`);
   });
-  const formulaAt = new Set(formulas.map((f) => `${f.row}:${f.col}`));
   // Only rows that hold cells are visited: a range's area is never walked.
   for (let row = sweep.nextRow(0); row !== undefined && row < cells.length; row = sweep.nextRow(row + 1)) {
     const active = sweep.at(row);
@@ -296,7 +299,7 @@ function checkArrayRanges(sheet: string, formulas: readonly FormulaCell[], cells
       if (line[col] === undefined) continue;
       const rect = sweep.find(col);
       if (!rect || (rect.anchor.row === row && rect.anchor.col === col)) continue;
-      if (formulaAt.has(`${row}:${col}`)) {
+      if (formulas.indexOf(row, col) >= 0) {
         throw new BookError(`${sheet}!${a1(rect.anchor.row, rect.anchor.col)}: the array formula's range ${rectText(rect)} covers the formula in ${a1(row, col)}`);
       }
       line[col] = null;
@@ -315,12 +318,13 @@ export function evaluateBook(book: LoadedBook, onSpanCall?: () => void): SpanWor
   book.inputs.splice(0);
   book.sheets.forEach((sheet) => {
     const id = evaluated.sheetId(sheet.name);
-    for (const formula of sheet.formulas) {
-      if (formula.kind !== "plain") continue;
-      const size = evaluated.spillSize(id, formula.row, formula.col);
+    const formulas = sheet.formulas;
+    for (let i = 0; i < formulas.length; i++) {
+      if (formulas.kind(i) !== "plain") continue;
+      const size = evaluated.spillSize(id, formulas.row(i), formulas.col(i));
       if (size && (size.rows > 1 || size.cols > 1)) {
-        (formula as FormulaCell & { spilled?: { rows: number; cols: number } }).spilled = size;
-        evaluated.setCell(id, formula.row, formula.col, "=#VALUE!");
+        sheet.refused.set(i, size);
+        evaluated.setCell(id, formulas.row(i), formulas.col(i), "=#VALUE!");
       }
     }
   });
@@ -337,18 +341,19 @@ interface ValueXml {
   content: string;
 }
 
+/** The XML of a value, as the part's bytes (UTF-8; the sheet is written as a byte string). */
 function formulaValue(value: CellResult): ValueXml {
   if (value === null) return { content: "" };
-  if (isCellError(value)) return { type: "e", content: `<v>${encodeXml(value.error)}</v>` };
+  if (isCellError(value)) return { type: "e", content: `<v>${utf8Of(encodeXml(value.error))}</v>` };
   if (typeof value === "number") return { content: `<v>${numberText(value)}</v>` };
   if (typeof value === "boolean") return { type: "b", content: `<v>${value ? 1 : 0}</v>` };
-  return { type: "str", content: `<v>${encodeXml(value)}</v>` };
+  return { type: "str", content: `<v>${utf8Of(encodeXml(value))}</v>` };
 }
 
 function plainValue(value: CellResult): ValueXml {
   if (typeof value === "string") {
     const space = /^\s|\s$/.test(value) ? ' xml:space="preserve"' : "";
-    return { type: "inlineStr", content: `<is><t${space}>${encodeXml(value)}</t></is>` };
+    return { type: "inlineStr", content: `<is><t${space}>${utf8Of(encodeXml(value))}</t></is>` };
   }
   return formulaValue(value);
 }
@@ -407,7 +412,6 @@ function valueCellText(xml: string, cell: XmlCell | undefined, row: number, col:
 }
 
 interface Spill extends Rect {
-  anchor: FormulaCell;
   /** Rows and columns the engine's result covers (a legacy range may be larger). */
   rows: number;
   cols: number;
@@ -424,27 +428,30 @@ export interface StoreResult {
 export async function storeResults(book: LoadedBook, evaluated: SpanWorkbook, onCell?: () => void): Promise<StoreResult> {
   const problems: CellProblem[] = [];
   for (const sheet of book.sheets) {
-    const sheetXml = (await book.pkg.part(sheet.path))!;
+    const sheetXml = (await book.pkg.partBinary(sheet.path))!;
     const id = evaluated.sheetId(sheet.name);
+    const formulas = sheet.formulas;
     const spills: Spill[] = [];
-    const oldAreas: (Rect & { anchor: FormulaCell })[] = [];
-    for (const formula of sheet.formulas) {
-      if (formula.ref) oldAreas.push({ ...formula.ref, anchor: formula });
-      if (formula.kind === "plain") continue;
-      const size = evaluated.spillSize(id, formula.row, formula.col) ?? { rows: 1, cols: 1 };
-      if (formula.kind === "dynamic") {
-        if (size.rows > 1 || size.cols > 1) {
-          spills.push({ top: formula.row, left: formula.col, bottom: formula.row + size.rows - 1, right: formula.col + size.cols - 1, anchor: formula, ...size });
-        }
-      } else if (formula.ref) spills.push({ ...formula.ref, anchor: formula, ...size });
+    for (let i = 0; i < formulas.length; i++) {
+      const kind = formulas.kind(i);
+      if (kind === "plain") continue;
+      const row = formulas.row(i);
+      const col = formulas.col(i);
+      const size = evaluated.spillSize(id, row, col) ?? { rows: 1, cols: 1 };
+      if (kind === "dynamic") {
+        if (size.rows > 1 || size.cols > 1) spills.push({ top: row, left: col, bottom: row + size.rows - 1, right: col + size.cols - 1, ...size });
+      } else spills.push({ ...formulas.ref(i)!, ...size });
     }
+    // Cells the stored ranges cover besides their anchors (a one-cell range covers only its formula).
+    const oldAreas = widerRanges(formulas);
     const spillValue = (spill: Spill, row: number, col: number): CellResult => {
       if (row - spill.top >= spill.rows || col - spill.left >= spill.cols) return { error: "#N/A", message: "" };
       return evaluated.getValue(id, row, col);
     };
-    const formulaText = (cell: XmlCell, formula: FormulaCell): string => {
+    const formulaText = (cell: XmlCell, index: number): string => {
+      const formula = { row: formulas.row(index), col: formulas.col(index), kind: formulas.kind(index) };
       let value = evaluated.getValue(id, formula.row, formula.col);
-      const refused = (formula as FormulaCell & { spilled?: { rows: number; cols: number } }).spilled;
+      const refused = sheet.refused.get(index);
       let ref: string | undefined;
       if (refused) {
         value = {
@@ -462,12 +469,12 @@ export async function storeResults(book: LoadedBook, evaluated: SpanWorkbook, on
     const newSweep = new RowSweep(spills);
     const oldSweep = new RowSweep(oldAreas);
     let nextFormula = 0;
-    const xml = rewriteSheetWith(sheetXml, {
+    // Written into chunks of bytes as it goes: the new sheet is never one string.
+    const sink = new ByteSink();
+    rewriteSheetInto(sheetXml, {
       cell: (cell) => {
-        const formula = sheet.formulas[nextFormula];
-        if (cell.formula && formula && formula.row === cell.row && formula.col === cell.col) {
-          nextFormula++;
-          return formulaText(cell, formula);
+        if (cell.formula && nextFormula < formulas.length && formulas.row(nextFormula) === cell.row && formulas.col(nextFormula) === cell.col) {
+          return formulaText(cell, nextFormula++);
         }
         const spill = newSweep.at(cell.row) && newSweep.find(cell.col);
         if (spill) return valueCellText(sheetXml, cell, cell.row, cell.col, spillValue(spill, cell.row, cell.col));
@@ -487,9 +494,10 @@ export async function storeResults(book: LoadedBook, evaluated: SpanWorkbook, on
         return adds;
       },
       nextRow: (row) => newSweep.nextRow(row),
-    });
-    book.pkg.setPart(sheet.path, xml);
-    sheet.formulas = [];
+    }, (piece) => sink.push(piece), { bytes: true });
+    book.pkg.setPartBytes(sheet.path, sink.chunks());
+    formulas.clear();
+    sheet.refused.clear();
   }
   return { problems };
 }

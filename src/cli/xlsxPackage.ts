@@ -5,6 +5,7 @@
  * parts Spanwise does not touch come out exactly as they went in.
  */
 import JSZip from "jszip";
+import { binaryOf, joinChunks, textOfUtf8 } from "./byteText";
 import { attributes, decodeXml, localName, textRuns } from "./xmlText";
 
 export const RELATIONSHIP = {
@@ -108,8 +109,21 @@ export class XlsxPackage {
     return file ? file.async("string") : undefined;
   }
 
+  /** Parts given as chunks of bytes (setPartBytes), joined only when the package is written. */
+  private readonly chunked = new Map<string, Uint8Array[]>();
+
   async part(path: string): Promise<string | undefined> {
+    const chunks = this.chunked.get(path);
+    if (chunks) return textOfUtf8(binaryOf(joinChunks(chunks)));
     return XlsxPackage.text(this.zip, path);
+  }
+
+  /** A part as a byte string (one character per byte; see byteText.ts), for big parts read by position. */
+  async partBinary(path: string): Promise<string | undefined> {
+    const chunks = this.chunked.get(path);
+    if (chunks) return binaryOf(joinChunks(chunks));
+    const file = this.zip.file(path);
+    return file ? binaryOf(await file.async("uint8array")) : undefined;
   }
 
   hasPart(path: string): boolean {
@@ -117,7 +131,17 @@ export class XlsxPackage {
   }
 
   setPart(path: string, text: string): void {
+    this.chunked.delete(path);
     this.zip.file(path, text);
+  }
+
+  /**
+   * A part replaced by these bytes, kept in chunks until the package is written: a big sheet
+   * is never one block of memory while the rest of the work still needs memory.
+   */
+  setPartBytes(path: string, chunks: Uint8Array[]): void {
+    if (!this.zip.file(path)) this.zip.file(path, new Uint8Array(0));
+    this.chunked.set(path, chunks);
   }
 
   relatedPath(type: string): string | undefined {
@@ -240,8 +264,14 @@ export class XlsxPackage {
     return this.generate("uint8array");
   }
 
-  /** The zip of every part: the one way write() and bytes() produce it. */
+  /** The zip of every part: the one way write() and bytes() produce it (chunked parts joined first). */
   private generate<T extends "nodebuffer" | "uint8array">(type: T): Promise<T extends "nodebuffer" ? Buffer : Uint8Array> {
+    for (const [path, chunks] of this.chunked) {
+      this.zip.file(path, joinChunks(chunks));
+      // The joined copy is the zip's now: the chunks go.
+      chunks.length = 0;
+    }
+    this.chunked.clear();
     return this.zip.generateAsync({ type, compression: "DEFLATE", compressionOptions: { level: 6 } }) as never;
   }
 }

@@ -14,6 +14,7 @@ import type { SpanFunctions } from "./catalogue";
 import { cellKey, attachContext, buildingWith, type CellAddress, type EngineContext } from "./learnedSizes";
 import { columnLetters, expandSpillReferences, hasSpillReference, mapCode, normalizeFormula, parseReference, soleSpillReference, type SpillReference } from "./formulaText";
 import type { BlockSize } from "./resultSize";
+import { formulaAfterRows } from "./references";
 import { registerSpanPlugin } from "./spanPlugin";
 import { registerSinglePlugin } from "./singlePlugin";
 import { arrayError, patchErroredArrayRanges } from "./erroredArrays";
@@ -96,7 +97,23 @@ export class SpanWorkbook {
         throw new RangeError(`sheet "${sheet.name}" is larger than a spreadsheet allows (${SHEET_LIMITS.rows} rows, ${SHEET_LIMITS.cols} columns)`);
       }
     }
-    this.context = {
+    this.context = this.newContext(options);
+    this.building = sheets;
+    // Built from all sheets at once: an empty engine filled in a batch exports every change
+    // when the batch ends, and the engine joins spilled changes by copying (quadratic).
+    this.hf = this.build(sheets, options);
+    attachContext(this.hf.dependencyGraph, this.context);
+    this.building = undefined;
+    this.settle();
+  }
+
+  /**
+   * The context the SPAN plugin reads, made outside the constructor: a closure made in the
+   * constructor would keep the constructor's variables (every sheet's cells) for the life of
+   * the workbook.
+   */
+  private newContext(options: WorkbookOptions): EngineContext {
+    return {
       functions: options.functions ?? SPAN_EXPORTS,
       learned: new Map(),
       mismatched: new Map(),
@@ -105,20 +122,16 @@ export class SpanWorkbook {
       onCall: options.onSpanCall,
       textAt: (address) => this.textAt(address),
     };
-    this.building = sheets;
+  }
+
+  /** The engine built from the sheets; the prepared copy of their cells is not kept. */
+  private build(sheets: readonly SheetInput[], options: WorkbookOptions): HyperFormula {
     const contents: Record<string, CellInput[][]> = {};
     sheets.forEach((sheet, id) => {
       if (Object.prototype.hasOwnProperty.call(contents, sheet.name)) throw new RangeError(`two sheets are named "${sheet.name}"`);
       contents[sheet.name] = sheet.cells.map((row, r) => this.preparedRow(id, r, row ?? []));
     });
-    // Built from all sheets at once: an empty engine filled in a batch exports every change
-    // when the batch ends, and the engine joins spilled changes by copying (quadratic).
-    this.hf = buildingWith(this.context, () =>
-      HyperFormula.buildFromSheets(contents as never, CONFIG, namedExpressions(options.names ?? [])),
-    );
-    attachContext(this.hf.dependencyGraph, this.context);
-    this.building = undefined;
-    this.settle();
+    return buildingWith(this.context, () => HyperFormula.buildFromSheets(contents as never, CONFIG, namedExpressions(options.names ?? [])));
   }
 
   /** A row as the engine takes it: the row itself when nothing in it changes (big sheets: no copy). */
@@ -169,13 +182,66 @@ export class SpanWorkbook {
    * to the engine in one call (many single-cell calls in one batch cost quadratic time).
    */
   setCells(sheet: number, top: number, left: number, block: readonly (readonly CellInput[])[]): void {
+    this.write(sheet, top, left, block);
+  }
+
+  /**
+   * As setCells, and says which cells' values changed, as the engine reports them from every
+   * pass: the block itself, what depends on it, and the cells of spills that changed or grew.
+   * Cells a shrinking spill leaves empty are not among them: a grid repaints the cells of an
+   * old spill whose anchor is reported.
+   */
+  setCellsReporting(sheet: number, top: number, left: number, block: readonly (readonly CellInput[])[]): CellAddress[] {
+    const changed: CellAddress[] = [];
+    this.write(sheet, top, left, block, changed);
+    return changed;
+  }
+
+  private write(sheet: number, top: number, left: number, block: readonly (readonly CellInput[])[], changed?: CellAddress[]): void {
     // Array.from, not block.map: a block from another frame (the pane writing into the workbench)
     // would map into that frame's arrays, which the engine does not take for arrays.
     const prepared = Array.from(block, (row, r) => Array.from(row, (input, c) => this.prepare({ sheet, row: top + r, col: left + c }, input)));
     const width = prepared[0]?.length ?? 0;
     if (width === 0) return;
-    if (prepared.every((row) => row.length === width)) this.hf.setCellContents({ sheet, row: top, col: left }, prepared as never);
-    else this.hf.batch(() => prepared.forEach((row, r) => row.length > 0 && this.hf.setCellContents({ sheet, row: top + r, col: left }, [row] as never)));
+    const changes =
+      prepared.every((row) => row.length === width)
+        ? this.hf.setCellContents({ sheet, row: top, col: left }, prepared as never)
+        : this.hf.batch(() => prepared.forEach((row, r) => row.length > 0 && this.hf.setCellContents({ sheet, row: top + r, col: left }, [row] as never)));
+    if (changed) collect(changes, changed);
+    this.retryBlocked(changed);
+    this.settle(changed);
+  }
+
+  /** Inserts `count` empty rows before row `at`; formulas everywhere follow the rows that moved. */
+  insertRows(sheet: number, at: number, count: number): void {
+    if (!Number.isInteger(at) || !Number.isInteger(count) || at < 0 || count < 1) throw new RangeError(`cannot insert ${count} rows at row ${at + 1}`);
+    if (this.dimensions(sheet).rows + count > SHEET_LIMITS.rows) throw new RangeError(`the sheet would have more than ${SHEET_LIMITS.rows} rows`);
+    this.hf.addRows(sheet, [at, count]);
+    this.afterRows(sheet, at, count);
+  }
+
+  /** Deletes rows `at` to `at + count - 1`; references into them become #REF!, ranges keep the rows left. */
+  deleteRows(sheet: number, at: number, count: number): void {
+    if (!Number.isInteger(at) || !Number.isInteger(count) || at < 0 || count < 1) throw new RangeError(`cannot delete ${count} rows at row ${at + 1}`);
+    this.hf.removeRows(sheet, [at, count]);
+    this.afterRows(sheet, at, -count);
+  }
+
+  /** Formulas kept as typed follow a row insertion (count > 0) or deletion (count < 0). */
+  private afterRows(sheet: number, at: number, count: number): void {
+    const name = this.hf.getSheetName(sheet) ?? "";
+    const entries = [...this.typed.values()];
+    this.typed.clear();
+    for (const entry of entries) {
+      let row = entry.address.row;
+      if (entry.address.sheet === sheet && row >= at) {
+        if (count < 0 && row < at - count) continue;
+        row += count;
+      }
+      const address = { ...entry.address, row };
+      const text = formulaAfterRows(entry.text, name, entry.address.sheet === sheet, at, count, SHEET_LIMITS);
+      this.typed.set(cellKey(address), { address, text, engineText: this.hf.getCellFormula(address) ?? "" });
+    }
     this.retryBlocked();
     this.settle();
   }
@@ -187,7 +253,7 @@ export class SpanWorkbook {
    * issue #1287, "Setting a null value in the ARRAYFORMULA expansion area does not update the
    * NoSpaceForArrayResult error", open). Cheap: an array with no space is not evaluated.
    */
-  private retryBlocked(): void {
+  private retryBlocked(changed?: CellAddress[]): void {
     const arrays = (this.hf.dependencyGraph as unknown as { arrayMapping?: { arrayMapping?: Map<string, { array?: unknown; cellAddress?: CellAddress }> } }).arrayMapping?.arrayMapping;
     if (!arrays) return;
     const blocked: { address: CellAddress; formula: string }[] = [];
@@ -197,7 +263,8 @@ export class SpanWorkbook {
       if (formula !== undefined) blocked.push({ address: { ...vertex.cellAddress }, formula });
     }
     if (blocked.length === 0) return;
-    this.hf.batch(() => blocked.forEach(({ address, formula }) => this.hf.setCellContents(address, [[formula]])));
+    const changes = this.hf.batch(() => blocked.forEach(({ address, formula }) => this.hf.setCellContents(address, [[formula]])));
+    if (changed) collect(changes, changed);
   }
 
   setCell(sheet: number, row: number, col: number, input: CellInput): void {
@@ -375,7 +442,7 @@ export class SpanWorkbook {
     return { size, error: arrayError(vertex.array) !== undefined };
   }
 
-  private settle(): void {
+  private settle(changed?: CellAddress[]): void {
     for (let pass = 0; pass < MAX_PASSES; pass++) {
       const pending = new Map<string, { address: CellAddress; text: string }>();
       for (const [key, address] of this.context.mismatched) {
@@ -389,14 +456,23 @@ export class SpanWorkbook {
         if (text !== entry.engineText) pending.set(key, { address: entry.address, text });
       }
       if (pending.size === 0) return;
-      this.hf.batch(() => {
+      const changes = this.hf.batch(() => {
         for (const [key, { address, text }] of pending) {
           const typed = this.typed.get(key);
           if (typed) typed.engineText = text;
           this.hf.setCellContents(address, [[text]]);
         }
       });
+      if (changed) collect(changes, changed);
     }
+  }
+}
+
+/** The cell addresses among the engine's exported changes (named expressions have none). */
+function collect(changes: readonly unknown[], into: CellAddress[]): void {
+  for (const change of changes) {
+    const address = (change as { address?: CellAddress }).address;
+    if (address) into.push(address);
   }
 }
 

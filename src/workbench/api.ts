@@ -1,8 +1,9 @@
 /**
  * The workbench's programmatic interface, published as `window.spanwiseWorkbench`: what a
  * diagram pane or a test needs from a sheet host — read the selection and its formula, read a
- * range's values, write a block, add a chart. Addresses are A1 text ("B3", "B3:D5",
- * "Member!B3:D5"); without a sheet name, the active sheet.
+ * range's values, write a block, add a chart; and the grid's editing (undo, fill, paste, rows,
+ * column widths) for tests and tools. Addresses are A1 text ("B3", "B3:D5", "Member!B3:D5");
+ * without a sheet name, the active sheet.
  */
 import type { CellInput, CellResult } from "../engine";
 import { parseRange, rangeText, type RangeRef } from "./addresses";
@@ -37,6 +38,27 @@ export interface WorkbenchApi {
   spillRange(address: string): string | undefined;
   /** For a cell another formula's result spills into, that formula's cell ("B3", sheet-qualified when the address is); undefined otherwise. */
   spillAnchor(address: string): string | undefined;
+  /** Scrolls the grid so the cell is in view (its row is then in the DOM); activates its sheet when named. */
+  reveal(address: string): void;
+  /** Undoes / redoes the last edit (a block write is one step); false when there is none. */
+  undo(): boolean;
+  redo(): boolean;
+  /** Fills `target` from `source` (both on the active sheet, or `target`'s sheet), relative references moved. */
+  fill(source: string, target: string): void;
+  /** Selects `at` (default: the selection) and pastes tab-separated text there, as Ctrl+V does. */
+  paste(text: string, at?: string): void;
+  /** Selects `range` (default: the selection) and gives it as tab-separated text, as Ctrl+C does. */
+  copy(range?: string): string;
+  /** Inserts / deletes the rows of `range` (e.g. "A5:A7": rows 5 to 7) on its sheet. */
+  insertRows(range: string): void;
+  deleteRows(range: string): void;
+  /** A column's width in px on the active sheet ("B" or a cell of it). */
+  columnWidth(column: string): number;
+  setColumnWidth(column: string, px: number): void;
+  /** The last block write: cells written, cells the engine reported changed, ms in the engine and in painting. */
+  lastWriteTiming(): { cells: number; changed: number; engineMs: number; paintMs: number } | undefined;
+  /** Milliseconds the grid took to build and show its first sheet. */
+  firstRenderMs(): number;
 }
 
 export function createApi(bench: Workbench, charts: HTMLElement): WorkbenchApi {
@@ -52,6 +74,12 @@ export function createApi(bench: Workbench, charts: HTMLElement): WorkbenchApi {
       activeCell: rangeText(s.anchor, s.anchor),
       formula: bench.book.getFormula(id, s.anchor.row, s.anchor.col),
     };
+  };
+  const column = (text: string): number => parseRange(/^[A-Za-z]{1,3}$/.test(text.trim()) ? `${text.trim()}1` : text).from.col;
+  const rows = (range: string): { at: number; count: number } => {
+    const ref = parseRange(range);
+    if (ref.sheet !== undefined) bench.activate(ref.sheet);
+    return { at: ref.from.row, count: ref.to.row - ref.from.row + 1 };
   };
   const api: WorkbenchApi = {
     sheets: () => bench.book.sheetNames(),
@@ -109,6 +137,39 @@ export function createApi(bench: Workbench, charts: HTMLElement): WorkbenchApi {
       if (!anchor) return undefined;
       return `${ref.sheet ? `${ref.sheet}!` : ""}${rangeText(anchor, anchor)}`;
     },
+    reveal(address: string) {
+      const ref = parseRange(address);
+      bench.reveal(ref.from, ref.sheet);
+    },
+    undo: () => bench.undo(),
+    redo: () => bench.redo(),
+    fill(source: string, target: string) {
+      const from = parseRange(source);
+      const to = parseRange(target);
+      if (to.sheet !== undefined) bench.activate(to.sheet);
+      const block = (r: RangeRef) => ({ top: r.from.row, left: r.from.col, bottom: r.to.row, right: r.to.col });
+      bench.fill(block(from), block(to));
+    },
+    paste(text: string, at?: string) {
+      if (at !== undefined) api.select(at);
+      bench.paste(text);
+    },
+    copy(range?: string) {
+      if (range !== undefined) api.select(range);
+      return bench.copySelection();
+    },
+    insertRows(range: string) {
+      const { at, count } = rows(range);
+      bench.insertRows(at, count);
+    },
+    deleteRows(range: string) {
+      const { at, count } = rows(range);
+      bench.deleteRows(at, count);
+    },
+    columnWidth: (text: string) => bench.width(column(text)),
+    setColumnWidth: (text: string, px: number) => bench.setColumnWidth(column(text), px),
+    lastWriteTiming: () => (bench.lastWrite ? { ...bench.lastWrite } : undefined),
+    firstRenderMs: () => bench.firstRenderMs,
   };
   return api;
 }

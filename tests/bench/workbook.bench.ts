@@ -49,13 +49,15 @@ export async function run(): Promise<void> {
       fs.writeFileSync(file, await storeAsDynamicArrays(fs.readFileSync(plain)));
       const result = await runCalc(file, path.join(dir, `out-${rows}.xlsx`));
       if (result.status !== 0) throw new Error(`calc exited ${result.status} on ${rows} rows: ${result.stderr}`);
-      table.push([rows, result.seconds.toFixed(1), Math.round(rows / result.seconds), Math.round(result.peakMb)]);
-      console.log(`  ${rows} rows: ${result.seconds.toFixed(1)} s, peak ${Math.round(result.peakMb)} MB`);
+      // The machine is shared: the load average beside each run says how far its wall time is stretched.
+      const load = os.loadavg()[0].toFixed(1);
+      table.push([rows, result.seconds.toFixed(1), Math.round(rows / result.seconds), Math.round(result.peakMb), load]);
+      console.log(`  ${rows} rows: ${result.seconds.toFixed(1)} s, peak ${Math.round(result.peakMb)} MB, load average ${load}`);
     }
   } finally {
     fs.rmSync(dir, { recursive: true, force: true });
   }
-  printTable(["rows", "seconds", "rows/s", "peak RSS (MB)"], table);
+  printTable(["rows", "seconds", "rows/s", "peak RSS (MB)", "load (1 min)"], table);
 }
 
 async function buildPlain(rows: number, file: string): Promise<void> {

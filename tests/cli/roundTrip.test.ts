@@ -183,4 +183,49 @@ describe("spanwise calc keeps a dynamic-array workbook as it was, values aside",
       .replace(/<row r="([56])" spans="1:9" x14ac:dyDescent="0.25">/g, '<row r="$1">');
     expect(after.get("xl/worksheets/sheet1.xml")!.toString("utf8")).toBe(expectedSheet);
   });
+
+  it("keeps every byte of a big sheet with non-ASCII text, a byte-order mark and CRLF, values aside", async () => {
+    // Read and written as bytes (src/cli/byteText.ts) through 1 MB chunks: 6,000 rows make the
+    // sheet span several chunks. Text cells in three UTF-8 lengths (2, 3 and 4 bytes), a text
+    // formula whose result is non-ASCII, a number formula, styled empty cells, whitespace.
+    const rows = 6000;
+    const sheetWith = (text: (r: number) => string, number: (r: number) => string): string => {
+      const body = Array.from({ length: rows }, (_, i) => {
+        const r = i + 1;
+        return (
+          `<row r="${r}" spans="1:5">` +
+          `<c r="A${r}" t="inlineStr"><is><t xml:space="preserve">Träger ${r} – 梁 🧱 </t></is></c>` +
+          `<c r="B${r}"><v>${r}</v></c>` +
+          `<c r="C${r}" t="str"><f>"µ"&amp;B${r}*2</f><v>${text(r)}</v></c>` +
+          `<c r="D${r}" s="1"><f>B${r}/4</f><v>${number(r)}</v></c>` +
+          `<c r="E${r}" s="1"/>` +
+          `</row>`
+        );
+      }).join("\r\n  ");
+      return (
+        `\uFEFF<?xml version="1.0" encoding="UTF-8" standalone="yes"?>\r\n<worksheet ${NS}>\r\n` +
+        `<sheetData>\r\n  ${body}\r\n</sheetData>\r\n<!-- Anmerkung: Größe ≤ 5 % -->\r\n</worksheet>`
+      );
+    };
+    const input = path.join(dir, "big.xlsx");
+    const stale = sheetWith(() => "alt", () => "0");
+    await writePackage(input, stale);
+    const out = path.join(dir, "big-out.xlsx");
+    const result = run(["calc", input, "--out", out]);
+    expect(result.stderr).toContain(`wrote ${out}`);
+    expect(result.status).toBe(0);
+
+    const before = await parts(input);
+    const after = await parts(out);
+    expect(before.get("xl/worksheets/sheet1.xml")!.length).toBeGreaterThan(1.5 * (1 << 20));
+    for (const [name, bytes] of before) {
+      if (name === "xl/worksheets/sheet1.xml") continue;
+      expect({ name, same: after.get(name)!.equals(bytes) }).toEqual({ name, same: true });
+    }
+    const expected = Buffer.from(sheetWith((r) => `µ${r * 2}`, (r) => String(r / 4)), "utf8");
+    const written = after.get("xl/worksheets/sheet1.xml")!;
+    expect(written.subarray(0, 3)).toEqual(Buffer.from([0xef, 0xbb, 0xbf]));
+    // Compared as bytes (a text comparison would hide a changed encoding).
+    expect(written.equals(expected)).toBe(true);
+  });
 });

@@ -32,6 +32,8 @@ async function workbench<T>(body: string, ...args: unknown[]): Promise<T> {
 
 async function clickCell(sheet: string, address: string): Promise<void> {
   await bench.locator("#tabs button", { hasText: sheet }).click();
+  // The grid keeps only the rows in view in the DOM: scroll to the cell first, as a user would.
+  await workbench("api.reveal(args[0])", `${sheet}!${address}`);
   const before = await page.$eval("#pane", (p) => Number((p as HTMLElement).dataset.refreshed ?? 0));
   await bench.locator(`td[data-address="${address}"]`).dispatchEvent("mousedown");
   await page.waitForFunction((b) => Number((document.querySelector("#pane") as HTMLElement).dataset.refreshed ?? 0) > b, before);
