@@ -153,7 +153,9 @@ export class SpanWorkbook {
 
   private textAt(address: CellAddress): string | undefined {
     const input = this.building ? this.building[address.sheet]?.cells[address.row]?.[address.col] : this.valueAt(address);
-    return typeof input === "string" && !input.startsWith("=") ? input : undefined;
+    if (typeof input !== "string" || input.startsWith("=")) return undefined;
+    // An input behind an apostrophe is the text after it (how a saved text cell is read in, xlsxBook.ts).
+    return this.building && input.startsWith("'") ? input.slice(1) : input;
   }
 
   private valueAt(address: CellAddress): unknown {
