@@ -36,9 +36,9 @@ import { sheetCaseReactions, sheetFrequencies, sheetModeShape, sheetSpanPeaks } 
  * @helpurl https://localhost:3000/help/reactions.html
  * @remarks Reactions at every node of a continuous beam: one row per node (span end) with x, the vertical reaction (up +) and the moment reaction (counter-clockwise +); unsupported nodes give 0, a spring gives its force. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear, settle), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
- * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
+ * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
@@ -54,10 +54,10 @@ export function reactions(spans: any[][], loads: any[][], supports?: any[][], EI
  * @helpurl https://localhost:3000/help/shear.html
  * @remarks Shear force V at each x (V = dM/dx, so a simple span's left reaction gives positive shear). Where V jumps (point load, support) the value just right of x is returned; at the right end, just left. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear, settle), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
  * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
- * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
+ * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Shear at each x, in the shape of x.
@@ -72,10 +72,10 @@ export function shear(spans: any[][], loads: any[][], x: any[][], supports?: any
  * @helpurl https://localhost:3000/help/moment.html
  * @remarks Bending moment M at each x (sagging +). Where M jumps (a couple) the value just right of x is returned; at the right end, just left. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear, settle), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
  * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
- * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform.
+ * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for slope, deflection and springs; without it the member is taken as uniform. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Moment at each x, in the shape of x.
@@ -88,12 +88,12 @@ export function moment(spans: any[][], loads: any[][], x: any[][], supports?: an
  * Slope at each x in radians, d(deflection)/dx with deflection down +; needs EI. An aid to a qualified engineer; local codes govern. Example: =SPAN.SLOPE("6 8 6", "udl 2.5", 0, , 20000)
  * @customfunction SLOPE
  * @helpurl https://localhost:3000/help/slope.html
- * @remarks Slope at each x in radians: slope = d(deflection)/dx with deflection down +. Needs EI (#N/A without it). Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
+ * @remarks Slope at each x in radians: slope = d(deflection)/dx with deflection down +. With a shear stiffness (EI "2e5 shear 8e4") slope is the rotation of the section, and d(deflection)/dx = slope + V/GA. Needs EI (#N/A without it). Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear, settle), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
  * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
- * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Required here.
+ * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Required here. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Slope at each x, in the shape of x.
@@ -106,12 +106,12 @@ export function slope(spans: any[][], loads: any[][], x: any[][], supports?: any
  * Deflection at each x, down +; needs EI. An aid to a qualified engineer; local codes govern. Example: =SPAN.DEFLECTION("6 8 6", "udl 2.5", 3, , 20000)
  * @customfunction DEFLECTION
  * @helpurl https://localhost:3000/help/deflection.html
- * @remarks Deflection at each x, positive downward, in the length unit of spans when EI is in consistent units. Needs EI (#N/A without it). Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
+ * @remarks Deflection at each x, positive downward, in the length unit of spans when EI is in consistent units. With a shear stiffness (EI "2e5 shear 8e4") it adds the shear deflection; a settle load row moves its support by the settlement. Needs EI (#N/A without it). Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear, settle), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param x Position from the member's left end, in the length unit of spans: a cell, row, column or block. The result has the same shape; blank x cells give blank results.
  * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
- * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Required here.
+ * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Required here. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @returns Deflection at each x, in the shape of x.
@@ -126,9 +126,9 @@ export function deflection(spans: any[][], loads: any[][], x: any[][], supports?
  * @helpurl https://localhost:3000/help/maxmoment.html
  * @remarks Largest (sagging) and smallest (hogging) bending moment along the member and where they occur, found exactly from the moment curve: [[largest M, x], [smallest M, x]]. Sagging moment +. Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear, settle), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
- * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for springs; without it the member is taken as uniform.
+ * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Needed for springs; without it the member is taken as uniform. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
@@ -144,9 +144,9 @@ export function maxMoment(spans: any[][], loads: any[][], supports?: any[][], EI
  * @helpurl https://localhost:3000/help/extremes.html
  * @remarks Extremes of each quantity: rows label, max, x at max, min, x at min for shear and moment, and for slope and deflection when EI is given. Found exactly from the curves, never by sampling. Signs: loads down +, couples clockwise +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear, settle), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
- * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Adds the slope and deflection rows; without it the member is taken as uniform.
+ * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Adds the slope and deflection rows; without it the member is taken as uniform. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
@@ -162,10 +162,10 @@ export function extremes(spans: any[][], loads: any[][], supports?: any[][], EI?
  * @helpurl https://localhost:3000/help/diagram.html
  * @remarks Diagram table: rows x, V, M, slope, deflection at evenly spaced stations plus every support, load point and extreme, with two rows (just left, just right) at every jump. Slope and deflection are blank without EI. Signs: loads down +, couples clockwise +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit, used for every x): a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table, one row per load: type (point, moment, udl, linear), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
+ * @param loads Load table, one row per load: type (point, moment, udl, linear, settle), magnitude, x start, x end, magnitude at end, case. Or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
  * @param [points] Number of evenly spaced stations including both ends: a whole number from 2 to 10001. Blank (or 0) = 101.
  * @param [supports] One per node (spans + 1): pin, fixed, free, hinge, a number = vertical spring (force/length); rot K adds a rotational spring (moment/radian): pin+rot 5000, rot 5000, spring 200 rot 5000. Range or one text cell. Blank = all pin; blank/0 at a node: error.
- * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Fills the slope and deflection columns; without it the member is taken as uniform.
+ * @param [EI] Flexural stiffness (force x length^2, units consistent with the loads): one value or one per span. Fills the slope and deflection columns; without it the member is taken as uniform. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [combo] Load combination such as 1.2D+1.6L+0.5S: factors on the case labels (exact spelling); a standard label (D, L, Lr, S, W, ...) not named is left out, any other must be named (+0X leaves it out). Blank = every load at factor 1.
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs are read and results given in those units (moments in force x length). Blank = your consistent units.
  * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
@@ -186,11 +186,11 @@ export function diagram(spans: any[][], loads: any[][], points?: any, supports?:
  * @helpurl https://localhost:3000/help/envelope.html
  * @remarks Envelope of shear, moment or deflection over a list of load combinations: for each x, the largest and smallest value and the combination that produces it (with pattern live load, also the loaded spans). Combinations may be written out (1.2D+1.6L) or named as sets: ASCE7-2.3.1 (strength), ASCE7-2.4.1 (allowable stress), EN1990-6.10 (needs psi0). Signs: loads down +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit): a row or column, or one text cell such as "6 8 6".
- * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation; every load needs a case label. Forces down +, couples clockwise +.
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation; every load needs a case label. Forces down +, couples clockwise +. settle D at X: support settlement D.
  * @param x Positions from the member's left end: a cell, row, column or block; one result row per cell, in reading order (blank cells give blank rows).
  * @param combos Combinations: a cell or range of texts such as 1.2D+1.6L+0.5S, and/or set names ASCE7-2.3.1, ASCE7-2.4.1, EN1990-6.10 (each expanded). Labels match exactly; each typed combination must select a load.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, a spring stiffness, or with rot K a rotational spring (pin+rot 5000). Blank = every node pin.
- * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
+ * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [quantity] shear, moment (default) or deflection.
  * @param [pattern] Pattern live load: blank or none (loads as given), standard (classical span arrangements) or full (every subset of spans, none included, exact by superposition), then the live case label (default L), e.g. "full L". At most 12 spans.
  * @param [psi0] EN 1990 combination factor psi0 for the accompanying variable cases: one number, or pairs such as "Q 0.7, S 0.5".
@@ -208,10 +208,10 @@ export function envelope(spans: any[][], loads: any[][], x: any[][], combos: any
  * @helpurl https://localhost:3000/help/peaks.html
  * @remarks Governing peaks over a list of load combinations: for shear, moment and (with EI) slope and deflection, the largest and smallest value anywhere on the member, where it occurs and the combination (and, with pattern live load, the loaded spans) that produces it. Found exactly from each combination's curves. Signs: loads down +, sagging M +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (any length unit): a row or column, or one text cell such as "6 8 6".
- * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation; every load needs a case label. Forces down +, couples clockwise +.
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation; every load needs a case label. Forces down +, couples clockwise +. settle D at X: support settlement D.
  * @param combos Combinations: a cell or range of texts such as 1.2D+1.6L+0.5S, and/or set names ASCE7-2.3.1, ASCE7-2.4.1, EN1990-6.10.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, a spring stiffness, or with rot K a rotational spring (pin+rot 5000). Blank = every node pin.
- * @param [EI] Flexural stiffness: one value or one per span. Adds the slope and deflection rows.
+ * @param [EI] Flexural stiffness: one value or one per span. Adds the slope and deflection rows. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [pattern] Pattern live load: blank or none, standard (classical arrangements) or full (every subset of spans, none included, exact by superposition), optionally followed by the live case label (default L). At most 12 spans when patterned.
  * @param [psi0] EN 1990 combination factor psi0: one number, or pairs such as "Q 0.7, S 0.5".
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs read and results given in those units (moments in force x length, deflection in the deflection unit). Blank = consistent units.
@@ -231,7 +231,7 @@ export function peaks(spans: any[][], loads: any[][], combos: any[][], supports?
  * @param effect What is measured: "reaction 2" (vertical reaction at node 2, nodes numbered from 1 at the left end), "moment reaction 1", "shear at 4.5", "moment at 6" or "deflection at 3" (needs EI).
  * @param positions Unit-load positions from the left end: a cell, row, column or block; the result has the same shape.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, a spring stiffness, or with rot K a rotational spring (pin+rot 5000). Blank = every node pin.
- * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
+ * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in". The unit load is one force unit: reaction and shear ordinates have no unit, moment ordinates are lengths, deflection is per force unit.
  * @returns The ordinate at each position, in the shape of positions.
  */
@@ -249,7 +249,7 @@ export function influence(spans: any[][], effect: any, positions: any[][], suppo
  * @param spacings Distances between consecutive axles (length): one fewer than the axles; blank for one axle.
  * @param effect What is measured: "absolute moment" (largest moment anywhere), "moment at 6", "shear at 4.5", "reaction 2", "moment reaction 1" or "deflection at 3" (needs EI).
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, a spring stiffness, or with rot K a rotational spring (pin+rot 5000). Blank = every node pin.
- * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs.
+ * @param [EI] Flexural stiffness: one value or one per span. Needed for deflection and springs. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [units] Unit labels such as "length=ft, force=kip, EI=kip*in^2, deflection=in": inputs read and results given in those units (moments in force x length, deflection in the deflection unit). Blank = consistent units.
  * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
  * @returns Rows max and min: label, value, x of the first axle, direction ("as given": the other axles follow at larger x; "reversed"), x where the effect is measured.
@@ -302,7 +302,7 @@ export function section(shape: any, dimensions: any[][], unit?: any, resultUnit?
  * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation. Forces down +, couples clockwise +; forces in the force unit, intensities in force/length, couples in force x length.
  * @param section Section modulus S (one value, both fibres), or S top and S bottom; or a SPAN.SECTION result (its Sx top and Sx bottom rows, with their units). In section-unit^3.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
- * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Needed for springs; without it the member is taken as uniform.
+ * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Needed for springs; without it the member is taken as uniform. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs: length=ft, force=kip (both needed when any is given), EI=kip*in^2, section=in (default length), stress=ksi (default force/section^2). Blank = consistent units.
  * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
@@ -318,10 +318,10 @@ export function stress(spans: any[][], loads: any[][], section: any[][], support
  * @helpurl https://localhost:3000/help/shearstress.html
  * @remarks Shear stress at the largest shear force |V|: the average V/A and the peak V Q/(I t), with x. With a SPAN.SECTION result the peak uses its Q/t max row (the largest Q/t over the depth: at the neutral axis except in a tee whose axis is in its flange). Sign follows V (V = dM/dx). Signs: loads down +, couples clockwise +. A check of the stated section only: the governing code and a qualified engineer decide the allowable stress. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (the length unit of units, or any consistent unit): a row or column, or one text cell such as "20 15".
- * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation. Forces down +, couples clockwise +.
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation. Forces down +, couples clockwise +. settle D at X: support settlement D.
  * @param section A (area: average only), or A I Q t (area, second moment, first moment about the neutral axis of the area beyond the point, width there), in section-unit powers; or a SPAN.SECTION result.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
- * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Needed for springs; without it the member is taken as uniform.
+ * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Needed for springs; without it the member is taken as uniform. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs: length=m, force=kN (both needed when any is given), EI=kN*m^2, section=mm (default length), stress=MPa (default force/section^2). Blank = consistent units.
  * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
@@ -337,10 +337,10 @@ export function shearStress(spans: any[][], loads: any[][], section: any[][], su
  * @helpurl https://localhost:3000/help/deflectioncheck.html
  * @remarks Deflection check per span: the largest deflection in each span (by magnitude, down +, from the undeflected axis, spring settlement included), span/deflection, and pass when span/deflection >= the stated limit's divisor. The limit is the engineer's: typical floor limits (such as L/360 live, L/240 total) come from the governing building code's table of deflection limits, which also says how cantilevers count; the code and a qualified engineer decide. Needs EI (#N/A without it). Signs: loads down +, couples clockwise +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right (the length unit of units, or any consistent unit): a row or column, or one text cell such as "20 15".
- * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation. Forces down +, couples clockwise +.
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell in the load notation. Forces down +, couples clockwise +. settle D at X: support settlement D.
  * @param limit The stated limit as L/360, span/360 or 360: one for the member or one per span (a row, column or text such as "L/360 L/180").
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
- * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Required here; SPAN.STIFFNESS builds it from E and I.
+ * @param [EI] Flexural stiffness, one value or one per span (EI unit of units, default force x length^2). Required here; SPAN.STIFFNESS builds it from E and I. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [combo] Load combination such as D+L or L alone: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs: length=ft, force=kip (both needed when any is given), EI=kip*in^2, deflection=in (default length). Blank = consistent units.
  * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
@@ -405,9 +405,9 @@ export function stiffness(E: any[][], I: any[][], EUnit?: any, IUnit?: any, resu
  * @helpurl https://localhost:3000/help/spanpeaks.html
  * @remarks Peaks of each span, one row per span: span number, length, largest moment and its x, smallest moment and its x, largest |V| (signed) and its x, largest |deflection| (signed) and its x (blank without EI). Each span's own exact pieces are searched, both ends included, so a hogging moment over an interior support is the smallest moment of both spans beside it; moment peaks come from the roots of V, deflection peaks from the roots of the slope, never from sampling. Signs: loads down +, couples clockwise +, sagging moment +, deflection down +. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right: a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +.
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +. settle D at X: support settlement D.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
- * @param [EI] Flexural stiffness, one value or one per span. Adds the deflection columns; without it the member is taken as uniform.
+ * @param [EI] Flexural stiffness, one value or one per span. Adds the deflection columns; without it the member is taken as uniform. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [combo] Load combination such as 1.2D+1.6L: factors on the case labels (exact spelling); a label other than the standard D, L, Lr, S, W, ... must be named. Blank = every load at factor 1.
  * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2, deflection=in", as for SPAN.REACTIONS. Blank = consistent units.
  * @param [headers] TRUE (or 1, yes) adds a first row naming each column with its unit from units (just the names without units). Blank or FALSE = no header row.
@@ -423,9 +423,9 @@ export function spanPeaks(spans: any[][], loads: any[][], supports?: any[][], EI
  * @helpurl https://localhost:3000/help/casereactions.html
  * @remarks Reactions by load case, unfactored: one row per node with its x, then one column per case label in the order the loads first use the labels (loads without a label form one case of their own), then, when combo is given, the combination's reactions (the same numbers as SPAN.REACTIONS with that combination). reaction: blank or vertical for vertical reactions (up +), moment for moment reactions (counter-clockwise +). At most 50 case labels. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right: a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +. One column per case label; at most 50 labels.
+ * @param loads Load table (type, magnitude, x start, x end, magnitude at end, case) or one text cell such as "udl 2.5 D; point 10 at 3 L". Forces down +, couples clockwise +. One column per case label; at most 50 labels. settle D at X: support settlement D.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
- * @param [EI] Flexural stiffness, one value or one per span. Needed for springs; without it the member is taken as uniform.
+ * @param [EI] Flexural stiffness, one value or one per span. Needed for springs; without it the member is taken as uniform. "2e5 shear 8e4" adds shear deformation (GA, force unit).
  * @param [combo] Load combination such as 1.2D+1.6L: adds a last column with the factored reactions. Blank = no combination column.
  * @param [units] Unit labels, key=unit pairs such as "length=ft, force=kip, EI=kip*in^2", as for SPAN.REACTIONS. Blank = consistent units.
  * @param [reaction] vertical (blank: vertical force, up +) or moment (moment reactions, counter-clockwise +; 0 where a node is not fixed).
@@ -442,7 +442,7 @@ export function caseReactions(spans: any[][], loads: any[][], supports?: any[][]
  * @helpurl https://localhost:3000/help/frequencies.html
  * @remarks Natural frequencies in bending of the member, lowest first: mode number, frequency in Hz, circular frequency in rad/s. Exact for an Euler-Bernoulli beam (no shear deformation, no rotary inertia): exact dynamic-stiffness elements with the Wittrick-Williams count, so no mode is missed. Mass per length in force x s^2 / length^2, plus the weight of the given loads divided by g. Whether a floor's vibration is acceptable is for the governing guide and the engineer to decide. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right: a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param EI Flexural stiffness, one value or one per span (force x length^2, or the EI unit of units). Required.
+ * @param EI Flexural stiffness, one value or one per span (force x length^2, or the EI unit of units). Required. Euler-Bernoulli only: a shear stiffness is refused.
  * @param mass Mass per length, one value or one per span, in force x s^2 / length^2 (t/m with kN and m, kg/m with N and m), so sqrt(EI/(m L^4)) is 1/s. Blank = 0 (mass from loads).
  * @param [modes] How many frequencies, lowest first: a whole number from 1 to 50. Blank = 1. Floor vibration acceptance is the governing guide's and the engineer's call, not checked here.
  * @param [supports] One entry per node (spans + 1): pin, fixed, free, hinge, or a spring stiffness (force/length). Blank = every node pin.
@@ -463,7 +463,7 @@ export function frequencies(spans: any[][], EI: any[][], mass: any[][], modes?: 
  * @helpurl https://localhost:3000/help/modeshape.html
  * @remarks The shape of one natural mode at each x, scaled so that its largest |w| is 1 with the leftmost such peak positive (down +). A mode whose frequency equals a neighbour's to 8 digits has no unique shape and is refused. Mass as for SPAN.FREQUENCIES. Whether a floor's vibration is acceptable is for the governing guide and the engineer to decide. Results are an aid to a qualified engineer: check them; local codes govern.
  * @param spans Span lengths left to right: a row or column with one cell per span, or one text cell such as "6 8 6".
- * @param EI Flexural stiffness, one value or one per span (force x length^2, or the EI unit of units). Required.
+ * @param EI Flexural stiffness, one value or one per span (force x length^2, or the EI unit of units). Required. Euler-Bernoulli only: a shear stiffness is refused.
  * @param mass Mass per length, one value or one per span, in force x s^2 / length^2 (t/m with kN and m, kg/m with N and m). Blank = 0 (mass from loads).
  * @param mode Which mode: 1 for the lowest frequency, up to 50. A repeated frequency has no unique shape and is refused.
  * @param x Positions from the member's left end: a cell, row, column or block (at most 10001 cells); the result has its shape, blank cells give blanks.

@@ -1,5 +1,5 @@
 import { requireStiffness } from "./evaluate";
-import type { Extreme, Quantity, Solution } from "./model";
+import type { Extreme, Piece, Quantity, Solution } from "./model";
 import { coefficients, derivative, pieceValue } from "./polynomial";
 import { rootsBetween } from "./roots";
 import { cleanZero, RELATIVE_ZERO } from "./tolerance";
@@ -9,21 +9,110 @@ export interface Candidate {
   value: number;
 }
 
+/** Scratch lists of candidate positions and values (gathering is synchronous and never re-entered). */
+let capacity = 0;
+let candidateX = new Float64Array(0);
+let candidateValue = new Float64Array(0);
+const roots = new Float64Array(2);
+
+function ensureCapacity(n: number): void {
+  if (capacity >= n) return;
+  capacity = Math.max(n, 2 * capacity, 64);
+  candidateX = new Float64Array(capacity);
+  candidateValue = new Float64Array(capacity);
+}
+
+/**
+ * Real roots strictly inside (0, hi) of c0 + c1 s + c2 s² (`terms` of them given) into
+ * `roots`, ascending; returns how many. The same arithmetic as rootsBetween (trailing zero
+ * terms dropped, the linear root, or the quadratic's stable pair), without building arrays.
+ */
+function lowRoots(terms: number, c0: number, c1: number, c2: number, hi: number): number {
+  let n = terms;
+  if (n === 3 && c2 === 0) n = 2;
+  if (n === 2 && c1 === 0) n = 1;
+  if (n === 2) {
+    const s = -c0 / c1;
+    if (!(s > 0 && s < hi)) return 0;
+    roots[0] = s;
+    return 1;
+  }
+  if (n !== 3) return 0;
+  const disc = c1 * c1 - 4 * c2 * c0;
+  if (disc < 0) return 0;
+  const root = Math.sqrt(disc);
+  const t = -0.5 * (c1 + (c1 >= 0 ? root : -root));
+  let count = 0;
+  if (t !== 0) {
+    const s = c0 / t;
+    if (s > 0 && s < hi) roots[count++] = s;
+  }
+  const s = t / c2;
+  if (s > 0 && s < hi) roots[count++] = s;
+  if (count === 2 && roots[1] < roots[0]) {
+    const first = roots[1];
+    roots[1] = roots[0];
+    roots[0] = first;
+  }
+  return count;
+}
+
+/**
+ * Roots of the quantity's derivative strictly inside a piece (0, span), into `roots` for shear
+ * and moment (their derivatives are at most quadratic), or returned as a list for slope and
+ * deflection; the count when written into `roots`.
+ */
+function turningPoints(piece: Piece, quantity: Quantity, span: number): number | number[] {
+  const { shear0: v, q0, q1 } = piece;
+  // The derivative's coefficients, i * c[i] of the quantity's own (polynomial.coefficients).
+  if (quantity === "shear") return lowRoots(2, 1 * -q0, 2 * (-q1 / 2), 0, span);
+  if (quantity === "moment") return lowRoots(3, 1 * v, 2 * (-q0 / 2), 3 * (-q1 / 6), span);
+  return rootsBetween(derivative(coefficients(piece, quantity)), 0, span);
+}
+
+/**
+ * Every place a quantity can peak, into the scratch lists; returns how many: both ends of
+ * every piece (so both sides of every jump) and every interior root of its derivative, found
+ * from the polynomials themselves, each value cleaned against the quantity's scale.
+ */
+function gather(solution: Solution, quantity: Quantity): number {
+  const { pieces } = solution;
+  const scale = solution.scales[quantity];
+  ensureCapacity(4 * pieces.length);
+  let n = 0;
+  for (let i = 0; i < pieces.length; i++) {
+    const piece = pieces[i];
+    const span = piece.x1 - piece.x0;
+    const turning = turningPoints(piece, quantity, span);
+    const inside = typeof turning === "number" ? turning : turning.length;
+    if (n + inside + 2 > capacity) {
+      const x = candidateX.subarray(0, n).slice();
+      const value = candidateValue.subarray(0, n).slice();
+      ensureCapacity(n + inside + 2 + 4 * (pieces.length - i));
+      candidateX.set(x);
+      candidateValue.set(value);
+    }
+    candidateX[n] = piece.x0;
+    candidateValue[n++] = cleanZero(pieceValue(piece, quantity, 0), scale);
+    for (let k = 0; k < inside; k++) {
+      const s = typeof turning === "number" ? roots[k] : turning[k];
+      candidateX[n] = piece.x0 + s;
+      candidateValue[n++] = cleanZero(pieceValue(piece, quantity, s), scale);
+    }
+    candidateX[n] = piece.x1;
+    candidateValue[n++] = cleanZero(pieceValue(piece, quantity, span), scale);
+  }
+  return n;
+}
+
 /**
  * Every place a quantity can peak: both ends of every piece (so both sides of every jump)
  * and every interior root of its derivative, found from the polynomials themselves.
  */
 export function candidates(solution: Solution, quantity: Quantity): Candidate[] {
-  const list: Candidate[] = [];
-  const scale = solution.scales[quantity];
-  const at = (piece: Solution["pieces"][number], s: number): number => cleanZero(pieceValue(piece, quantity, s), scale);
-  for (const piece of solution.pieces) {
-    const span = piece.x1 - piece.x0;
-    list.push({ x: piece.x0, value: at(piece, 0) });
-    const slope = derivative(coefficients(piece, quantity));
-    for (const s of rootsBetween(slope, 0, span)) list.push({ x: piece.x0 + s, value: at(piece, s) });
-    list.push({ x: piece.x1, value: at(piece, span) });
-  }
+  const n = gather(solution, quantity);
+  const list = new Array<Candidate>(n);
+  for (let i = 0; i < n; i++) list[i] = { x: candidateX[i], value: candidateValue[i] };
   return list;
 }
 
@@ -33,19 +122,22 @@ export function candidates(solution: Solution, quantity: Quantity): Candidate[] 
  */
 export function extremes(solution: Solution, quantity: Quantity): Extreme {
   requireStiffness(solution, quantity);
-  const list = candidates(solution, quantity);
+  const n = gather(solution, quantity);
   let max = -Infinity;
   let min = Infinity;
-  for (const c of list) {
-    if (c.value > max) max = c.value;
-    if (c.value < min) min = c.value;
+  for (let i = 0; i < n; i++) {
+    const value = candidateValue[i];
+    if (value > max) max = value;
+    if (value < min) min = value;
   }
   const tol = 64 * RELATIVE_ZERO * Math.max(Math.abs(max), Math.abs(min));
   let xMax = Infinity;
   let xMin = Infinity;
-  for (const c of list) {
-    if (c.value >= max - tol && c.x < xMax) xMax = c.x;
-    if (c.value <= min + tol && c.x < xMin) xMin = c.x;
+  for (let i = 0; i < n; i++) {
+    const value = candidateValue[i];
+    const x = candidateX[i];
+    if (value >= max - tol && x < xMax) xMax = x;
+    if (value <= min + tol && x < xMin) xMin = x;
   }
   return { max, xMax, min, xMin };
 }

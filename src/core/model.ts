@@ -20,12 +20,15 @@ export type Support =
   | { kind: "hinge" }
   | { kind: "spring"; stiffness: number; rotational?: number };
 
-export type LoadKind = "point" | "moment" | "udl" | "linear";
+export type LoadKind = "point" | "moment" | "udl" | "linear" | "settle";
 
 /**
  * One load. `row` is the 1-based row of the load table it came from (used in messages).
  * Point loads and couples use `xStart` only. Distributed loads run from `xStart` to `xEnd`
  * with intensity `magnitude` at the start and `magnitudeEnd` at the end (`udl`: equal).
+ * A settlement (`settle`) is a prescribed downward displacement `magnitude` of the node at
+ * `xStart` (a pin or fixed support sinking, or the base of a spring), in the deflection unit;
+ * it is a load row so that combinations factor it like any other case.
  */
 export interface Load {
   kind: LoadKind;
@@ -47,6 +50,11 @@ export interface Member {
   supports: Support[];
   stiffness: number[] | null;
   loads: Load[];
+  /**
+   * Optional shear stiffness G·A_v per span (force units; one value for the member or one per
+   * span, null for a span without shear deformation). Absent or null: Euler–Bernoulli spans.
+   */
+  shear?: (number | null)[] | null;
 }
 
 /** The quantities that vary along the member. */
@@ -62,7 +70,9 @@ export interface Reaction {
 /**
  * A stretch of the member with no jump and a linear load inside. Values at its start are
  * those just right of `x0` (after any jump there); `q0 + q1 * s` is the downward load
- * intensity at `x0 + s`, and `flexibility` is 1/EI.
+ * intensity at `x0 + s`, `flexibility` is 1/EI and `shearFlexibility` 1/(G·A_v) (0 without
+ * shear deformation). `slope0` is the rotation of the section; the deflection adds the shear
+ * part, d(deflection)/dx = slope + V·shearFlexibility.
  */
 export interface Piece {
   x0: number;
@@ -74,6 +84,7 @@ export interface Piece {
   q0: number;
   q1: number;
   flexibility: number;
+  shearFlexibility: number;
 }
 
 /** A solved member: exact piecewise polynomials plus reactions. */
@@ -84,7 +95,7 @@ export interface Solution {
   pieces: Piece[];
   /** false when the member was solved without EI (slope and deflection unavailable). */
   hasStiffness: boolean;
-  /** Largest load effect scale, used for tolerances (sum of |force| plus |couple|/length). */
+  /** Largest load effect scale, used for tolerances (sum of |force| plus |couple|/length, plus each settlement Δ times the stiffness meeting its node). */
   loadScale: number;
   /** Largest magnitude of each quantity at the piece ends: the scale that rounding is judged by. */
   scales: Record<Quantity, number>;

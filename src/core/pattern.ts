@@ -1,3 +1,4 @@
+import { invalid } from "./errors";
 import type { Load, Member } from "./model";
 import { nodePositions, snapToNode } from "./positions";
 
@@ -15,6 +16,9 @@ export type PatternMode = "none" | "standard" | "full";
 
 /** The part of a load that lies on [a, b] (null when none does). */
 export function clipLoad(load: Load, a: number, b: number, lastSpan: boolean): Load | null {
+  if (load.kind === "settle") {
+    throw invalid(`load row ${load.row}: a settlement belongs to a support, not to a span, so it cannot be arranged span by span; give it a case label other than the patterned live case`);
+  }
   if (load.kind === "point" || load.kind === "moment") {
     const inside = load.xStart >= a && (load.xStart < b || (lastSpan && load.xStart <= b));
     return inside ? load : null;

@@ -18,16 +18,19 @@ export interface GoverningPeak {
 interface Sampled {
   breaks: Float64Array;
   flexibility: Float64Array;
+  shearFlexibility: Float64Array;
   cases: Float64Array[];
   parts: (Float64Array | null)[];
 }
 
 function sample(study: Study, breaks: Float64Array): Sampled {
   const flexibility = new Float64Array(breaks.length - 1);
-  resample(study.base, breaks, flexibility);
+  const shearFlexibility = new Float64Array(breaks.length - 1);
+  resample(study.base, breaks, flexibility, shearFlexibility);
   return {
     breaks,
     flexibility,
+    shearFlexibility,
     cases: study.cases.map((s) => resample(s, breaks)),
     parts: study.parts.map((s) => (s ? resample(s, breaks) : null)),
   };
@@ -57,7 +60,7 @@ function midValues(sampled: Sampled, quantity: Quantity): Float64Array[] {
     const values = new Float64Array(m);
     if (!fields) return values;
     for (let k = 0; k < m; k++) {
-      loadPiece(piece, fields, k, sampled.breaks, sampled.flexibility);
+      loadPiece(piece, fields, k, sampled.breaks, sampled.flexibility, sampled.shearFlexibility);
       values[k] = pieceValueMid(piece, quantity);
     }
     return values;
@@ -134,7 +137,7 @@ export function governingPeaks(member: Member, combinations: Combination[], opti
       const scale = scaleOfSum(study, combination, q);
       const f = combination.live;
       const both = (fields: Float64Array, arrangement: string): void => {
-        const [high, low] = peaksOf(breaks, fields, sampled.flexibility, q, [1, -1], scale);
+        const [high, low] = peaksOf(breaks, fields, sampled.flexibility, q, [1, -1], scale, sampled.shearFlexibility);
         offer(cleanZero(high.value, scale), high.x, combination.name, arrangement, 1);
         offer(cleanZero(low.value, scale), low.x, combination.name, arrangement, -1);
       };
@@ -151,7 +154,7 @@ export function governingPeaks(member: Member, combinations: Combination[], opti
           // f * part has the sense sought where the part has the sign sense * sign(f).
           const total = fixed.slice();
           addScaled(total, f, sense * f > 0 ? up : down);
-          const [peak] = peaksOf(breaks, total, sampled.flexibility, q, [sense], scale);
+          const [peak] = peaksOf(breaks, total, sampled.flexibility, q, [sense], scale, sampled.shearFlexibility);
           const spans = governingSpans(
             mids.map((v) => v[peak.interval]),
             f,

@@ -9,36 +9,106 @@ export interface SpanStart {
   deflection: number;
 }
 
-/** The span's breakpoints in t, ascending and distinct, and the absolute x of each (a node's or a load's own x). */
-function breakpoints(loads: SpanLoad[], span: number, xLeft: number, xRight: number): { t: number[]; x: number[] } {
-  if (loads.length === 0) return { t: [0, span], x: [xLeft, xRight] };
-  const ts = [0, span];
-  const xs = [xLeft, xRight];
-  for (const load of loads) {
-    if (load.kind === "distributed") {
-      ts.push(load.from, load.to);
-      xs.push(load.xFrom, load.xTo);
-    } else {
-      ts.push(load.at);
-      xs.push(load.x);
-    }
-  }
-  const order = ts.map((_, i) => i);
-  order.sort((a, b) => ts[a] - ts[b]);
-  const t: number[] = [];
-  const x: number[] = [];
-  for (const i of order) {
-    const pt = ts[i];
-    if (pt < 0 || pt > span || (t.length > 0 && pt <= t[t.length - 1])) continue;
-    t.push(pt);
-    x.push(pt === 0 ? xLeft : pt === span ? xRight : xs[i]);
-  }
-  return { t, x };
+/**
+ * Scratch arrays of integrateSpan, reused across calls (integration is synchronous and never
+ * re-entered): breakpoints in t and their x, and per breakpoint the point force, the couple,
+ * the change of intensity and of its rate, and the change in the count of open distributed loads.
+ */
+let capacity = 0;
+let points = new Float64Array(0);
+let places = new Float64Array(0);
+let force = new Float64Array(0);
+let couple = new Float64Array(0);
+let intensity = new Float64Array(0);
+let rate = new Float64Array(0);
+let opened = new Int32Array(0);
+let candidateT = new Float64Array(0);
+let candidateX = new Float64Array(0);
+
+function ensureCapacity(n: number): void {
+  if (capacity >= n) return;
+  capacity = Math.max(n, 2 * capacity, 16);
+  points = new Float64Array(capacity);
+  places = new Float64Array(capacity);
+  force = new Float64Array(capacity);
+  couple = new Float64Array(capacity);
+  intensity = new Float64Array(capacity);
+  rate = new Float64Array(capacity);
+  opened = new Int32Array(capacity);
+  candidateT = new Float64Array(capacity);
+  candidateX = new Float64Array(capacity);
 }
 
-function indexOf(points: number[], t: number): number {
+/** Above this many candidate points a span's breakpoints are ordered by the library sort (n log n); below it by insertion. */
+const INSERTION_LIMIT = 24;
+
+/**
+ * The span's breakpoints in t, ascending and distinct, and the absolute x of each (a node's or
+ * a load's own x), into `points` and `places`; returns their count. Candidates are the span's
+ * ends and every load's positions, ordered stably (on equal t the first listed gives the x).
+ */
+function breakpoints(loads: SpanLoad[], span: number, xLeft: number, xRight: number): number {
+  let n = 2;
+  for (let i = 0; i < loads.length; i++) n += loads[i].kind === "distributed" ? 2 : 1;
+  ensureCapacity(n);
+  const ts = candidateT;
+  const xs = candidateX;
+  ts[0] = 0;
+  xs[0] = xLeft;
+  ts[1] = span;
+  xs[1] = xRight;
+  let m = 2;
+  for (let i = 0; i < loads.length; i++) {
+    const load = loads[i];
+    if (load.kind === "distributed") {
+      ts[m] = load.from;
+      xs[m++] = load.xFrom;
+      ts[m] = load.to;
+      xs[m++] = load.xTo;
+    } else {
+      ts[m] = load.at;
+      xs[m++] = load.x;
+    }
+  }
+  if (m <= INSERTION_LIMIT) {
+    // Stable insertion sort of the candidates by t (equal t keep their order).
+    for (let i = 1; i < m; i++) {
+      const t = ts[i];
+      const x = xs[i];
+      let j = i - 1;
+      while (j >= 0 && ts[j] > t) {
+        ts[j + 1] = ts[j];
+        xs[j + 1] = xs[j];
+        j--;
+      }
+      ts[j + 1] = t;
+      xs[j + 1] = x;
+    }
+  } else {
+    const order = new Array<number>(m);
+    for (let i = 0; i < m; i++) order[i] = i;
+    const t = Array.from(ts.subarray(0, m));
+    const x = Array.from(xs.subarray(0, m));
+    order.sort((a, b) => t[a] - t[b]);
+    for (let i = 0; i < m; i++) {
+      ts[i] = t[order[i]];
+      xs[i] = x[order[i]];
+    }
+  }
+  let count = 0;
+  for (let i = 0; i < m; i++) {
+    const pt = ts[i];
+    if (pt < 0 || pt > span || (count > 0 && pt <= points[count - 1])) continue;
+    points[count] = pt;
+    places[count] = pt === 0 ? xLeft : pt === span ? xRight : xs[i];
+    count++;
+  }
+  return count;
+}
+
+function indexOf(count: number, t: number): number {
   let lo = 0;
-  let hi = points.length - 1;
+  let hi = count - 1;
   while (lo < hi) {
     const mid = (lo + hi) >> 1;
     if (points[mid] < t) lo = mid + 1;
@@ -51,7 +121,8 @@ function indexOf(points: number[], t: number): number {
  * Integrates one span exactly by the area method: from the values at its left node, V
  * falls by the area under the load and by each point force, M rises by the area under V and
  * by each clockwise couple, slope falls by the area under M/EI and deflection rises by the
- * area under the slope. Pieces start and end at the nodes' and loads' own x (xLeft, xRight:
+ * area under the slope plus, with shear deformation (`shearFlexibility` = 1/(G·A_v) > 0), the
+ * area under V/(G·A_v). Pieces start and end at the nodes' and loads' own x (xLeft, xRight:
  * the span's nodes). Appends the span's pieces to `out`. The loads are swept once in
  * order of position, so the cost grows as n log n in the number of loads.
  */
@@ -63,21 +134,22 @@ export function integrateSpan(
   xRight: number,
   flexibility: number,
   out: Piece[],
+  shearFlexibility = 0,
 ): void {
-  const { t: points, x: places } = breakpoints(loads, span, xLeft, xRight);
-  const count = points.length;
-  const force = new Float64Array(count);
-  const couple = new Float64Array(count);
-  const intensity = new Float64Array(count);
-  const rate = new Float64Array(count);
-  const opened = new Int32Array(count);
-  for (const load of loads) {
-    if (load.kind === "force") force[indexOf(points, load.at)] += load.value;
-    else if (load.kind === "couple") couple[indexOf(points, load.at)] += load.value;
+  const count = breakpoints(loads, span, xLeft, xRight);
+  force.fill(0, 0, count);
+  couple.fill(0, 0, count);
+  intensity.fill(0, 0, count);
+  rate.fill(0, 0, count);
+  opened.fill(0, 0, count);
+  for (let i = 0; i < loads.length; i++) {
+    const load = loads[i];
+    if (load.kind === "force") force[indexOf(count, load.at)] += load.value;
+    else if (load.kind === "couple") couple[indexOf(count, load.at)] += load.value;
     else {
       const slope = (load.q1 - load.q0) / (load.to - load.from);
-      const from = indexOf(points, load.from);
-      const to = indexOf(points, load.to);
+      const from = indexOf(count, load.from);
+      const to = indexOf(count, load.to);
       intensity[from] += load.q0;
       rate[from] += slope;
       intensity[to] -= load.q1;
@@ -115,6 +187,7 @@ export function integrateSpan(
       q0,
       q1,
       flexibility,
+      shearFlexibility,
     };
     out.push(piece);
     const s = t1 - t0;
@@ -124,8 +197,9 @@ export function integrateSpan(
     const nextShear = shear - q0 * s - (q1 * s2) / 2;
     const nextMoment = moment + shear * s - (q0 * s2) / 2 - (q1 * s3) / 6;
     const nextSlope = slope - flexibility * (moment * s + (shear * s2) / 2 - (q0 * s3) / 6 - (q1 * s4) / 24);
-    const nextDeflection =
+    let nextDeflection =
       deflection + slope * s - flexibility * ((moment * s2) / 2 + (shear * s3) / 6 - (q0 * s4) / 24 - (q1 * s4 * s) / 120);
+    if (shearFlexibility > 0) nextDeflection += shearFlexibility * (shear * s - (q0 * s2) / 2 - (q1 * s3) / 6);
     shear = nextShear;
     moment = nextMoment;
     slope = nextSlope;

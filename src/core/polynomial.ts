@@ -3,7 +3,8 @@ import type { Piece, Quantity } from "./model";
 /**
  * Coefficients, in powers of s = x - x0, of a quantity on a piece:
  * V = V0 - q0 s - q1 s²/2; M = M0 + V0 s - q0 s²/2 - q1 s³/6;
- * slope = θ0 - (M0 s + V0 s²/2 - q0 s³/6 - q1 s⁴/24)/EI; deflection = w0 + θ0 s - (...)/EI.
+ * slope = θ0 - (M0 s + V0 s²/2 - q0 s³/6 - q1 s⁴/24)/EI (the rotation of the section);
+ * deflection = w0 + θ0 s - (...)/EI + (V0 s - q0 s²/2 - q1 s³/6)/(G·A_v).
  */
 export function coefficients(piece: Piece, quantity: Quantity): number[] {
   const { shear0: v, moment0: m, slope0: th, deflection0: w, q0, q1, flexibility: f } = piece;
@@ -14,8 +15,11 @@ export function coefficients(piece: Piece, quantity: Quantity): number[] {
       return [m, v, -q0 / 2, -q1 / 6];
     case "slope":
       return [th, -f * m, (-f * v) / 2, (f * q0) / 6, (f * q1) / 24];
-    case "deflection":
+    case "deflection": {
+      const g = piece.shearFlexibility;
+      if (g > 0) return [w, th + g * v, (-f * m) / 2 - (g * q0) / 2, (-f * v) / 6 - (g * q1) / 6, (f * q0) / 24, (f * q1) / 120];
       return [w, th, (-f * m) / 2, (-f * v) / 6, (f * q0) / 24, (f * q1) / 120];
+    }
   }
 }
 
@@ -40,5 +44,7 @@ export function pieceValue(piece: Piece, quantity: Quantity, s: number): number 
   const f = piece.flexibility;
   const s2 = s * s;
   if (quantity === "slope") return piece.slope0 - f * s * (m + s * (v / 2 - s * (q0 / 6 + (q1 * s) / 24)));
-  return piece.deflection0 + piece.slope0 * s - f * s2 * (m / 2 + s * (v / 6 - s * (q0 / 24 + (q1 * s) / 120)));
+  const bending = piece.deflection0 + piece.slope0 * s - f * s2 * (m / 2 + s * (v / 6 - s * (q0 / 24 + (q1 * s) / 120)));
+  const g = piece.shearFlexibility;
+  return g > 0 ? bending + g * s * (v - s * (q0 / 2 + (q1 * s) / 6)) : bending;
 }

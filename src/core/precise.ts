@@ -2,14 +2,14 @@
  * The stiffness solve in double-double arithmetic, for members whose stiffness system is too
  * ill-conditioned for double precision to give every result to 1e-9 of its scale: a short
  * link beside a hinge, a spring far softer or stiffer than the spans, EI ratios near 1e6.
- * Element matrices, node positions, equivalent nodal loads, the elimination and the end forces
- * are all carried in about 32 digits, so rigid-body motions of stiff parts cancel exactly
+ * Element matrices (Timoshenko ones too), node positions, equivalent nodal loads, settlements
+ * moved to the right-hand side, the elimination and the end forces are all carried in about 32 digits, so rigid-body motions of stiff parts cancel exactly
  * enough; only the final displacements and end forces are rounded to doubles.
  */
 import { add, dd, div, mul, mulNumber, neg, sqrt, sub, toNumber, twoProduct, type DD } from "./doubleDouble";
 import type { SpanLoad } from "./elementLoads";
 import { invalid } from "./errors";
-import { elementDofs, rotationalSpring, type Layout } from "./layout";
+import { elementDofs, prescribedDisplacement, rotationalSpring, type Layout } from "./layout";
 import type { Member } from "./model";
 
 /** Smallest pivot, relative to its diagonal entry, that double-double elimination still trusts. */
@@ -20,15 +20,43 @@ const GAUSS_POINT = sqrt(div(dd(3), dd(5)));
 const GAUSS_NODES = [neg(GAUSS_POINT), ZERO, GAUSS_POINT];
 const GAUSS_WEIGHTS = [div(dd(5), dd(9)), div(dd(8), dd(9)), div(dd(5), dd(9))];
 
-/** The 4x4 element matrix in double-double, DOFs [w1, θ1, w2, θ2]. */
-function elementMatrix(ei: number, span: number): DD[] {
+/** φ = 12EI/(G·A_v L²) in double-double (zero without shear deformation). */
+function shearPhi(ei: number, span: number, shearFlexibility: number): DD {
+  if (!(shearFlexibility > 0)) return ZERO;
+  return div(mulNumber(mulNumber(dd(ei), 12), shearFlexibility), twoProduct(span, span));
+}
+
+/** The 4x4 element matrix in double-double, DOFs [w1, θ1, w2, θ2] (stiffness.elementMatrix; Timoshenko when φ > 0). */
+function elementMatrix(ei: number, span: number, phi: DD): DD[] {
   const L2 = twoProduct(span, span);
+  if (phi.hi > 0) {
+    const k = div(dd(ei), mul(mulNumber(L2, span), add(dd(1), phi)));
+    const a = mulNumber(k, 12);
+    const b = mulNumber(mulNumber(k, 6), span);
+    const c = mul(mul(k, add(dd(4), phi)), L2);
+    const d = mul(mul(k, sub(dd(2), phi)), L2);
+    return [a, b, neg(a), b, b, c, neg(b), d, neg(a), neg(b), a, neg(b), b, d, neg(b), c];
+  }
   const k = div(dd(ei), mulNumber(L2, span));
   const a = mulNumber(k, 12);
   const b = mulNumber(mulNumber(k, 6), span);
   const c = mul(mulNumber(k, 4), L2);
   const d = mul(mulNumber(k, 2), L2);
   return [a, b, neg(a), b, b, c, neg(b), d, neg(a), neg(b), a, neg(b), b, d, neg(b), c];
+}
+
+/** The shear parts of the Timoshenko shape functions (elementLoads.addShearShape) in double-double. */
+function addShearShape(out: DD[], s: DD, span: number, value: DD): void {
+  const s2 = mul(s, s);
+  out[0] = add(out[0], mul(value, sub(dd(1), s)));
+  out[1] = add(out[1], mulNumber(mul(value, sub(s, s2)), span / 2));
+  out[2] = add(out[2], mul(value, s));
+  out[3] = add(out[3], mulNumber(mul(value, sub(s2, s)), span / 2));
+}
+
+function addShearShapeRotation(out: DD[], s: DD, value: DD): void {
+  out[1] = add(out[1], mul(value, sub(dd(1), s)));
+  out[3] = add(out[3], mul(value, s));
 }
 
 function addShape(out: DD[], s: DD, span: number, value: DD): void {
@@ -59,13 +87,21 @@ function local(t: number, x: number, span: number, nodeStart: DD): DD {
 }
 
 /** Work-equivalent nodal loads of one span in double-double (see elementLoads.equivalentNodalLoads). */
-function nodalLoads(loads: SpanLoad[], span: number, nodeStart: DD): DD[] {
+function nodalLoads(loads: SpanLoad[], span: number, nodeStart: DD, phi: DD): DD[] {
   const out = [ZERO, ZERO, ZERO, ZERO];
+  const shear = [ZERO, ZERO, ZERO, ZERO];
+  const sheared = phi.hi > 0;
   const L = dd(span);
   for (const load of loads) {
-    if (load.kind === "force") addShape(out, div(local(load.at, load.x, span, nodeStart), L), span, dd(load.value));
-    else if (load.kind === "couple") addShapeSlope(out, div(local(load.at, load.x, span, nodeStart), L), span, dd(load.value));
-    else {
+    if (load.kind === "force") {
+      const s = div(local(load.at, load.x, span, nodeStart), L);
+      addShape(out, s, span, dd(load.value));
+      if (sheared) addShearShape(shear, s, span, dd(load.value));
+    } else if (load.kind === "couple") {
+      const s = div(local(load.at, load.x, span, nodeStart), L);
+      addShapeSlope(out, s, span, dd(load.value));
+      if (sheared) addShearShapeRotation(shear, s, dd(load.value));
+    } else {
       const from = local(load.from, load.xFrom, span, nodeStart);
       const to = local(load.to, load.xTo, span, nodeStart);
       const length = sub(to, from);
@@ -75,11 +111,15 @@ function nodalLoads(loads: SpanLoad[], span: number, nodeStart: DD): DD[] {
       for (let g = 0; g < 3; g++) {
         const t = add(mid, mul(half, GAUSS_NODES[g]));
         const q = add(dd(load.q0), mul(rate, sub(t, from)));
-        addShape(out, div(t, L), span, mul(mul(GAUSS_WEIGHTS[g], half), q));
+        const w = mul(mul(GAUSS_WEIGHTS[g], half), q);
+        addShape(out, div(t, L), span, w);
+        if (sheared) addShearShape(shear, div(t, L), span, w);
       }
     }
   }
-  return out;
+  if (!sheared) return out;
+  const onePlus = add(dd(1), phi);
+  return out.map((v, r) => div(add(v, mul(phi, shear[r])), onePlus));
 }
 
 export interface PreciseSolution {
@@ -103,16 +143,19 @@ export function solvePrecise(member: Member, layout: Layout, spanLoads: SpanLoad
   let nodeStart = ZERO;
   for (let e = 0; e < member.spans.length; e++) {
     const span = member.spans[e];
-    const k = elementMatrix(layout.stiffness[e], span);
-    const f = nodalLoads(spanLoads[e], span, nodeStart);
+    const phi = shearPhi(layout.stiffness[e], span, layout.shearFlexibility[e]);
+    const k = elementMatrix(layout.stiffness[e], span, phi);
+    const f = nodalLoads(spanLoads[e], span, nodeStart, phi);
     matrices.push(k);
     loads.push(f);
     nodeStart = add(nodeStart, dd(span));
     const dofs = elementDofs(layout, e);
+    const settled = [0, 1, 2, 3].map((r) => prescribedDisplacement(layout, e, r));
     for (let r = 0; r < 4; r++) {
       const i = dofs[r];
       if (i < 0) continue;
       rhs[i] = add(rhs[i], f[r]);
+      for (let c = 0; c < 4; c++) if (settled[c] !== 0) rhs[i] = sub(rhs[i], mulNumber(k[r * 4 + c], settled[c]));
       for (let c = 0; c < 4; c++) {
         const j = dofs[c];
         if (j < i) continue;
@@ -124,6 +167,7 @@ export function solvePrecise(member: Member, layout: Layout, spanLoads: SpanLoad
     if (support.kind === "spring") {
       const i = layout.deflectionDof[node];
       band[i * stride] = add(band[i * stride], dd(support.stiffness));
+      if (layout.settlement !== null) rhs[i] = add(rhs[i], twoProduct(support.stiffness, layout.settlement[node]));
     }
     const rotational = rotationalSpring(support);
     if (rotational > 0) {
@@ -135,7 +179,7 @@ export function solvePrecise(member: Member, layout: Layout, spanLoads: SpanLoad
   const displacements = Float64Array.from(x, toNumber);
   const endForces = member.spans.map((_, e) => {
     const dofs = elementDofs(layout, e);
-    const localD = dofs.map((dof) => (dof >= 0 ? x[dof] : ZERO));
+    const localD = dofs.map((dof, r) => (dof >= 0 ? x[dof] : dd(prescribedDisplacement(layout, e, r))));
     const out: number[] = [];
     for (let r = 0; r < 4; r++) {
       let sum = neg(loads[e][r]);

@@ -8,70 +8,112 @@
  * - `staticsResidual`: the member's equilibrium (vertical forces, moments about x = 0) from
  *   the final reactions against the loads, which the solver refuses to report when it fails.
  */
-import { solveBanded, type PivotStats } from "./banded";
+import { factorBanded, solveFactored, type PivotStats } from "./banded";
 import { productError } from "./doubleDouble";
 import type { Load, Reaction } from "./model";
 import type { StiffnessSystem } from "./stiffness";
 
-/** Adds a * b to the double-double (hi, lo) held in acc, without losing the product's low part. */
-function addProduct(acc: [number, number], a: number, b: number): void {
-  const p = a * b;
-  const pe = productError(a, b, p);
-  const s = acc[0] + p;
-  const v = s - acc[0];
-  const se = acc[0] - (s - v) + (p - v);
-  acc[0] = s;
-  acc[1] += se + pe;
+/** K d - f, each row summed in double-double (a + b = hi + lo kept in locals, the product's low part by productError), into r. */
+function residualInto(system: StiffnessSystem, d: Float64Array, r: Float64Array): void {
+  const { size: n, halfBandwidth: hb, band, rhs } = system;
+  const stride = hb + 1;
+  for (let i = 0; i < n; i++) {
+    let hi = -rhs[i];
+    let lo = 0;
+    const first = Math.max(0, i - hb);
+    const last = Math.min(n - 1, i + hb);
+    for (let j = first; j <= last; j++) {
+      const a = j < i ? band[j * stride + (i - j)] : band[i * stride + (j - i)];
+      const b = d[j];
+      const p = a * b;
+      const pe = productError(a, b, p);
+      const s = hi + p;
+      const v = s - hi;
+      const se = hi - (s - v) + (p - v);
+      hi = s;
+      lo += se + pe;
+    }
+    r[i] = hi + lo;
+  }
 }
 
 /** K d - f, each row summed in double-double. */
 export function residualOf(system: StiffnessSystem, d: Float64Array): Float64Array {
-  const { size: n, halfBandwidth: hb, band, rhs } = system;
-  const stride = hb + 1;
-  const r = new Float64Array(n);
-  const acc: [number, number] = [0, 0];
-  for (let i = 0; i < n; i++) {
-    acc[0] = -rhs[i];
-    acc[1] = 0;
-    for (let j = Math.max(0, i - hb); j < i; j++) addProduct(acc, band[j * stride + (i - j)], d[j]);
-    for (let j = i; j <= Math.min(n - 1, i + hb); j++) addProduct(acc, band[i * stride + (j - i)], d[j]);
-    r[i] = acc[0] + acc[1];
-  }
+  const r = new Float64Array(system.size);
+  residualInto(system, d, r);
   return r;
 }
 
-/** Row r of a 4x4 element matrix times the element's displacements, minus its nodal load, in double-double. */
-export function endForce(k: number[], r: number, local: number[], nodalLoad: number): number {
-  const acc: [number, number] = [-nodalLoad, 0];
-  for (let c = 0; c < 4; c++) addProduct(acc, k[r * 4 + c], local[c]);
-  return acc[0] + acc[1];
+/**
+ * Row r of a 4x4 element matrix (row-major from `at` in k) times the element's displacements
+ * (from `localAt` in local), minus its nodal load, in double-double.
+ */
+export function endForce(k: ArrayLike<number>, r: number, local: ArrayLike<number>, nodalLoad: number, at = 0, localAt = 0): number {
+  let hi = -nodalLoad;
+  let lo = 0;
+  for (let c = 0; c < 4; c++) {
+    const a = k[at + r * 4 + c];
+    const b = local[localAt + c];
+    const p = a * b;
+    const pe = productError(a, b, p);
+    const s = hi + p;
+    const v = s - hi;
+    const se = hi - (s - v) + (p - v);
+    hi = s;
+    lo += se + pe;
+  }
+  return hi + lo;
 }
 
 const REFINEMENT_STEPS = 3;
 /** A residual below this fraction of the largest load term is rounding: no refinement (results stay bit-identical). */
 const SETTLED = 1e-13;
 
-/** Solves K d = f and refines d while the residual is above rounding and shrinks (a few steps; O(n b^2) each). */
+/** Scratch buffers of the refined solve, reused across calls (the solve is synchronous and never re-entered). */
+let factored = new Float64Array(64);
+let solution = new Float64Array(16);
+let residual = new Float64Array(16);
+
+/**
+ * Solves K d = f and refines d while the residual is above rounding and shrinks (a few steps;
+ * O(n b^2) each). The band is factored once and the factors reused for each correction. The
+ * result is a scratch buffer (its first `size` entries; it may be longer): valid until the
+ * next call, so the caller copies what it keeps.
+ */
 export function solveRefined(system: StiffnessSystem, stats?: PivotStats): Float64Array {
-  const d = solveBanded(system, stats);
+  const { size: n, halfBandwidth: hb } = system;
+  const cells = n * (hb + 1);
+  if (factored.length < cells) factored = new Float64Array(Math.max(cells, 2 * factored.length));
+  if (solution.length < n) {
+    solution = new Float64Array(Math.max(n, 2 * solution.length));
+    residual = new Float64Array(solution.length);
+  }
+  const a = factored;
+  const d = solution;
+  const r = residual;
+  for (let i = 0; i < cells; i++) a[i] = system.band[i];
+  for (let i = 0; i < n; i++) d[i] = system.rhs[i];
+  factorBanded(a, system.band, n, hb, stats);
+  solveFactored(a, n, hb, d);
   let load = 0;
-  for (const v of system.rhs) load = Math.max(load, Math.abs(v));
+  for (let i = 0; i < n; i++) load = Math.max(load, Math.abs(system.rhs[i]));
   let size = Infinity;
   for (let step = 0; step < REFINEMENT_STEPS; step++) {
-    const r = residualOf(system, d);
+    residualInto(system, d, r);
     let next = 0;
-    for (const v of r) next = Math.max(next, Math.abs(v));
+    for (let i = 0; i < n; i++) next = Math.max(next, Math.abs(r[i]));
     if (!(next < size) || next <= SETTLED * load) break;
     size = next;
-    const delta = solveBanded({ ...system, rhs: r });
-    for (let i = 0; i < d.length; i++) d[i] -= delta[i];
+    solveFactored(a, n, hb, r);
+    for (let i = 0; i < n; i++) d[i] -= r[i];
   }
   return d;
 }
 
 /**
  * Out-of-balance vertical force and moment about x = 0 of the reactions (up +, moments
- * counter-clockwise +) against the loads (down +, couples clockwise +).
+ * counter-clockwise +) against the loads (down +, couples clockwise +). A settlement is no
+ * force: the reactions it causes balance among themselves.
  */
 export function staticsResidual(loads: Load[], reactions: Reaction[]): { force: number; moment: number } {
   let force = 0;
@@ -86,7 +128,7 @@ export function staticsResidual(loads: Load[], reactions: Reaction[]): { force: 
       moment -= load.magnitude * load.xStart;
     } else if (load.kind === "moment") {
       moment -= load.magnitude;
-    } else {
+    } else if (load.kind !== "settle") {
       const a = load.xStart;
       const b = load.xEnd;
       const w1 = load.magnitude;

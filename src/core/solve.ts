@@ -1,14 +1,14 @@
 import { isCollapsedPivot, type PivotStats } from "./banded";
-import { elementDofs, rotationalSpring } from "./layout";
+import { elementDof, nodePositions, prescribedDisplacement, rotationalSpring, type Layout } from "./layout";
 import { solvePrecise, worstStiffnessRatio } from "./precise";
 import type { Member, Piece, Quantity, Reaction, Solution } from "./model";
 import { pieceValue } from "./polynomial";
 import { cleanZero, EQUILIBRIUM_TOLERANCE } from "./tolerance";
 import { endForce, solveRefined, staticsResidual } from "./refine";
 import { invalid } from "./errors";
-import { integrateSpan } from "./pieces";
+import { integrateSpan, type SpanStart } from "./pieces";
 import { checkStability } from "./stability";
-import { assembleMember, elementMatrix } from "./stiffness";
+import { assembleMember, type Assembly } from "./stiffness";
 import { validateMember } from "./validate";
 
 function loadScaleOf(member: Member, length: number): number {
@@ -16,7 +16,7 @@ function loadScaleOf(member: Member, length: number): number {
   for (const load of member.loads) {
     if (load.kind === "point") scale += Math.abs(load.magnitude);
     else if (load.kind === "moment") scale += Math.abs(load.magnitude) / length;
-    else {
+    else if (load.kind !== "settle") {
       const end = load.kind === "linear" ? load.magnitudeEnd : load.magnitude;
       scale += ((Math.abs(load.magnitude) + Math.abs(end)) / 2) * (load.xEnd - load.xStart);
     }
@@ -24,68 +24,87 @@ function loadScaleOf(member: Member, length: number): number {
   return scale;
 }
 
-const QUANTITIES: Quantity[] = ["shear", "moment", "slope", "deflection"];
-
-/** The sum of the magnitudes of a quantity's terms at the end of a piece: the size its rounding is relative to. */
-function termsAtEnd(p: Piece, quantity: Quantity): number {
-  const s = p.x1 - p.x0;
-  const v = Math.abs(p.shear0);
-  const m = Math.abs(p.moment0);
-  const q0 = Math.abs(p.q0) * s;
-  const q1 = Math.abs(p.q1) * s * s;
-  const load = v + q0 + q1;
-  if (quantity === "shear") return load;
-  if (quantity === "moment") return m + load * s;
-  const bending = p.flexibility * s * (m + load * s);
-  if (quantity === "slope") return Math.abs(p.slope0) + bending;
-  return Math.abs(p.deflection0) + Math.abs(p.slope0) * s + bending * s;
+/**
+ * A settlement loads the member through its supports alone (the reactions it causes balance
+ * each other). The scale its forces are judged by is the largest they could be: Δ times the
+ * stiffness that meets the node (12EI/L³ of each span beside it, and a spring's k).
+ */
+function settlementScale(member: Member, layout: Layout): number {
+  const settlement = layout.settlement;
+  if (settlement === null) return 0;
+  let scale = 0;
+  settlement.forEach((delta, node) => {
+    if (delta === 0) return;
+    let stiffness = 0;
+    for (const e of [node - 1, node]) {
+      if (e >= 0 && e < member.spans.length) stiffness += (12 * layout.stiffness[e]) / member.spans[e] ** 3;
+    }
+    const support = member.supports[node];
+    if (support.kind === "spring") stiffness += support.stiffness;
+    scale += Math.abs(delta) * stiffness;
+  });
+  return scale;
 }
 
 /**
  * Each quantity's own scale: its largest magnitude on the member (sampled at every piece's
- * ends and middle, within a small factor of the true largest for these low polynomials), but never below 1% of the size of the terms it is computed from, so that a
- * quantity that is zero throughout (to rounding) is not judged against its own noise.
- * cleanZero against this scale zeroes only values below 1e-11 of it.
+ * ends and middle, within a small factor of the true largest for these low polynomials), but
+ * never below 1% of the size of the terms it is computed from (the sum of the magnitudes of its
+ * terms at the end of a piece, or of the end forces' terms in the solve), so that a quantity
+ * that is zero throughout (to rounding) is not judged against its own noise. cleanZero against
+ * this scale zeroes only values below 1e-11 of it. One sweep over the pieces for all four.
  */
-function scalesOf(pieces: Piece[], answer: StiffnessAnswer): Record<Quantity, number> {
-  const scales: Record<Quantity, number> = { shear: 0, moment: 0, slope: 0, deflection: 0 };
-  const solveTerms: Record<Quantity, number> = { shear: answer.forceTerms, moment: answer.momentTerms, slope: 0, deflection: 0 };
-  for (const quantity of QUANTITIES) {
-    let largest = 0;
-    let terms = 0;
+function scalesOf(pieces: Piece[], forceTerms: number, momentTerms: number): Record<Quantity, number> {
+  let shear = 0;
+  let moment = 0;
+  let slope = 0;
+  let deflection = 0;
+  let shearTerms = 0;
+  let momentTermsOfPieces = 0;
+  let slopeTerms = 0;
+  let deflectionTerms = 0;
+  for (let i = 0; i < pieces.length; i++) {
+    const p = pieces[i];
+    const span = p.x1 - p.x0;
+    const half = 0.5 * span;
     // Shear is linear in a piece without a varying load, so its ends hold its largest value.
-    const middle = quantity !== "shear";
-    for (const p of pieces) {
-      const span = p.x1 - p.x0;
-      largest = Math.max(largest, Math.abs(pieceValue(p, quantity, 0)), Math.abs(pieceValue(p, quantity, span)));
-      if (middle || p.q1 !== 0) largest = Math.max(largest, Math.abs(pieceValue(p, quantity, 0.5 * span)));
-      terms = Math.max(terms, termsAtEnd(p, quantity));
-    }
-    scales[quantity] = Math.max(largest, 0.01 * Math.max(terms, solveTerms[quantity]));
+    shear = Math.max(shear, Math.abs(pieceValue(p, "shear", 0)), Math.abs(pieceValue(p, "shear", span)));
+    if (p.q1 !== 0) shear = Math.max(shear, Math.abs(pieceValue(p, "shear", half)));
+    moment = Math.max(moment, Math.abs(pieceValue(p, "moment", 0)), Math.abs(pieceValue(p, "moment", span)));
+    moment = Math.max(moment, Math.abs(pieceValue(p, "moment", half)));
+    slope = Math.max(slope, Math.abs(pieceValue(p, "slope", 0)), Math.abs(pieceValue(p, "slope", span)));
+    slope = Math.max(slope, Math.abs(pieceValue(p, "slope", half)));
+    deflection = Math.max(deflection, Math.abs(pieceValue(p, "deflection", 0)), Math.abs(pieceValue(p, "deflection", span)));
+    deflection = Math.max(deflection, Math.abs(pieceValue(p, "deflection", half)));
+    // The sum of the magnitudes of each quantity's terms at the end of the piece: the size its rounding is relative to.
+    const m = Math.abs(p.moment0);
+    const load = Math.abs(p.shear0) + Math.abs(p.q0) * span + Math.abs(p.q1) * span * span;
+    const bending = p.flexibility * span * (m + load * span);
+    shearTerms = Math.max(shearTerms, load);
+    momentTermsOfPieces = Math.max(momentTermsOfPieces, m + load * span);
+    slopeTerms = Math.max(slopeTerms, Math.abs(p.slope0) + bending);
+    let deflectionTerm = Math.abs(p.deflection0) + Math.abs(p.slope0) * span + bending * span;
+    // With shear deformation the deflection also sums V/(G·A_v) over the piece.
+    if (p.shearFlexibility > 0) deflectionTerm += p.shearFlexibility * span * load;
+    deflectionTerms = Math.max(deflectionTerms, deflectionTerm);
   }
-  return scales;
-}
-
-/** Reactions with rounding noise (against the largest reaction of the kind, or 1% of the load scale) set to 0. */
-function cleanReactions(reactions: Reaction[], loadScale: number, length: number): Reaction[] {
-  let force = 0.01 * loadScale;
-  let moment = 0.01 * loadScale * length;
-  for (const r of reactions) {
-    force = Math.max(force, Math.abs(r.force));
-    moment = Math.max(moment, Math.abs(r.moment));
-  }
-  return reactions.map((r) => ({ x: r.x, force: cleanZero(r.force, force), moment: cleanZero(r.moment, moment) }));
+  return {
+    shear: Math.max(shear, 0.01 * Math.max(shearTerms, forceTerms)),
+    moment: Math.max(moment, 0.01 * Math.max(momentTermsOfPieces, momentTerms)),
+    slope: Math.max(slope, 0.01 * Math.max(slopeTerms, 0)),
+    deflection: Math.max(deflection, 0.01 * Math.max(deflectionTerms, 0)),
+  };
 }
 
 /** Numbers that overflowed (or underflowed into 0/0) must never reach the sheet. */
-function requireFinite(d: Float64Array, pieces: Piece[], reactions: Reaction[], scales: Record<Quantity, number>): void {
-  let ok = Object.values(scales).every(Number.isFinite);
-  for (const v of d) ok = ok && Number.isFinite(v);
-  for (const p of pieces) {
-    ok = ok && Number.isFinite(p.shear0) && Number.isFinite(p.moment0) && Number.isFinite(p.slope0) && Number.isFinite(p.deflection0);
-    ok = ok && Number.isFinite(p.flexibility);
+function requireFinite(d: Float64Array, size: number, pieces: Piece[], reactions: Reaction[], scales: Record<Quantity, number>): void {
+  let ok = Number.isFinite(scales.shear) && Number.isFinite(scales.moment) && Number.isFinite(scales.slope) && Number.isFinite(scales.deflection);
+  for (let i = 0; ok && i < size; i++) ok = Number.isFinite(d[i]);
+  for (let i = 0; ok && i < pieces.length; i++) {
+    const p = pieces[i];
+    ok = Number.isFinite(p.shear0) && Number.isFinite(p.moment0) && Number.isFinite(p.slope0) && Number.isFinite(p.deflection0) && Number.isFinite(p.flexibility);
   }
-  for (const r of reactions) ok = ok && Number.isFinite(r.force) && Number.isFinite(r.moment);
+  for (let i = 0; ok && i < reactions.length; i++) ok = Number.isFinite(reactions[i].force) && Number.isFinite(reactions[i].moment);
   if (!ok) {
     throw invalid("the numbers are too large or too small to compute reliably (check the units of spans, loads and EI)");
   }
@@ -114,61 +133,102 @@ const PIVOT_RATIO_FOR_DOUBLE = 1e-6;
  */
 const CANCELLATION_FOR_DOUBLE = 1e3;
 
+/**
+ * The solved stiffness system: displacements and each span's end forces [force left, moment
+ * left, force right, moment right] (K d - f, 4 from 4 e). One object, reused by every solve
+ * (the solve is synchronous and never re-entered); its arrays may be scratch buffers longer
+ * than the member needs, so what a solution keeps is copied out of them.
+ */
 interface StiffnessAnswer {
   d: Float64Array;
-  endForces: number[][];
+  ends: Float64Array;
   /** The largest sums of magnitudes of the terms the end forces and end moments came from: the size of their rounding. */
   forceTerms: number;
   momentTerms: number;
 }
 
+const EMPTY = new Float64Array(0);
+const answer: StiffnessAnswer = { d: EMPTY, ends: EMPTY, forceTerms: 0, momentTerms: 0 };
+const pivotStats: PivotStats = { smallestPivotRatio: 1 };
+let scratchEnds = new Float64Array(16);
+const local = new Float64Array(4);
+
+function endsBuffer(spanCount: number): Float64Array {
+  if (scratchEnds.length < 4 * spanCount) scratchEnds = new Float64Array(Math.max(4 * spanCount, 2 * scratchEnds.length));
+  return scratchEnds;
+}
+
 /** The double solve, or null when its accuracy is not assured (a pivot lost digits, or the end forces cancel). */
-function solveInDouble(member: Member, assembly: ReturnType<typeof assembleMember>): StiffnessAnswer | null {
-  const { layout, system, nodalLoads } = assembly;
-  const stats: PivotStats = { smallestPivotRatio: 1 };
+function solveInDouble(member: Member, assembly: Assembly): StiffnessAnswer | null {
+  const { layout, system, matrices, nodalLoads } = assembly;
+  pivotStats.smallestPivotRatio = 1;
   let d: Float64Array;
   try {
-    d = system.size > 0 ? solveRefined(system, stats) : new Float64Array(0);
+    d = system.size > 0 ? solveRefined(system, pivotStats) : EMPTY;
   } catch (error) {
     if (isCollapsedPivot(error)) return null;
     throw error;
   }
-  if (stats.smallestPivotRatio < PIVOT_RATIO_FOR_DOUBLE) return null;
-  const endForces: number[][] = [];
+  if (pivotStats.smallestPivotRatio < PIVOT_RATIO_FOR_DOUBLE) return null;
+  const spanCount = member.spans.length;
+  const ends = endsBuffer(spanCount);
   let forceTerms = 0;
   let momentTerms = 0;
   let momentTermsRaw = 0;
   let forces = 0;
   let moments = 0;
-  for (let e = 0; e < member.spans.length; e++) {
-    const k = elementMatrix(layout.stiffness[e], member.spans[e]);
-    const local = elementDofs(layout, e).map((dof) => (dof >= 0 ? d[dof] : 0));
-    const end = [0, 0, 0, 0];
+  const { settlement } = layout;
+  for (let e = 0; e < spanCount; e++) {
+    const km = 16 * e;
+    const span = member.spans[e];
+    for (let c = 0; c < 4; c++) {
+      const dof = elementDof(layout, e, c);
+      // A restrained DOF moves by its settlement (prescribed), else not at all.
+      local[c] = dof >= 0 ? d[dof] : settlement === null ? 0 : prescribedDisplacement(layout, e, c);
+    }
     for (let r = 0; r < 4; r++) {
-      end[r] = endForce(k, r, local, nodalLoads[e][r]);
-      let terms = Math.abs(nodalLoads[e][r]);
-      for (let c = 0; c < 4; c++) terms += Math.abs(k[r * 4 + c] * local[c]);
+      const f = nodalLoads[4 * e + r];
+      const end = endForce(matrices, r, local, f, km);
+      ends[4 * e + r] = end;
+      let terms = Math.abs(f);
+      for (let c = 0; c < 4; c++) terms += Math.abs(matrices[km + r * 4 + c] * local[c]);
       if (r % 2 === 0) {
         forceTerms = Math.max(forceTerms, terms);
-        forces = Math.max(forces, Math.abs(end[r]));
+        forces = Math.max(forces, Math.abs(end));
       } else {
-        momentTerms = Math.max(momentTerms, terms / member.spans[e]);
+        momentTerms = Math.max(momentTerms, terms / span);
         momentTermsRaw = Math.max(momentTermsRaw, terms);
-        moments = Math.max(moments, Math.abs(end[r]) / member.spans[e]);
+        moments = Math.max(moments, Math.abs(end) / span);
       }
     }
-    endForces.push(end);
   }
   const scale = Math.max(forces, moments);
   if (forceTerms > CANCELLATION_FOR_DOUBLE * scale || momentTerms > CANCELLATION_FOR_DOUBLE * scale) return null;
-  return { d, endForces, forceTerms, momentTerms: momentTermsRaw };
+  answer.d = d;
+  answer.ends = ends;
+  answer.forceTerms = forceTerms;
+  answer.momentTerms = momentTermsRaw;
+  return answer;
 }
 
 /** The double-double solve; its results are rounded once, so their rounding is relative to themselves. */
-function preciseAnswer(member: Member, assembly: ReturnType<typeof assembleMember>): StiffnessAnswer {
+function preciseAnswer(member: Member, assembly: Assembly): StiffnessAnswer {
   const precise = solvePrecise(member, assembly.layout, assembly.spanLoads, assembly.system.halfBandwidth);
-  return { d: precise.displacements, endForces: precise.endForces, forceTerms: 0, momentTerms: 0 };
+  const ends = endsBuffer(member.spans.length);
+  precise.endForces.forEach((end, e) => {
+    for (let r = 0; r < 4; r++) ends[4 * e + r] = end[r];
+  });
+  answer.d = precise.displacements;
+  answer.ends = ends;
+  answer.forceTerms = 0;
+  answer.momentTerms = 0;
+  return answer;
 }
+
+/** The values at a span's left node handed to integrateSpan: one object, reused. */
+const start: SpanStart = { shear: 0, moment: 0, slope: 0, deflection: 0 };
+let nodeForce = new Float64Array(8);
+let nodeMoment = new Float64Array(8);
 
 /**
  * Solves a member exactly: validates it, checks it cannot move as a mechanism, assembles
@@ -176,62 +236,121 @@ function preciseAnswer(member: Member, assembly: ReturnType<typeof assembleMembe
  * every span from its solved end forces into exact polynomial pieces. The solve runs in
  * double precision when that is assured to be accurate (no pivot lost more than six digits,
  * no end force cancels out of much larger terms), otherwise in double-double (precise.ts).
+ * The layout, band, right-hand side, element matrices, end forces and node sums live in
+ * scratch buffers reused across calls; the solution holds only its own fresh arrays.
  * Throws a #VALUE! SpanError for bad input or an unstable member.
  */
 export function solve(member: Member): Solution {
   validateMember(member);
-  checkStability(member);
-  const assembly = assembleMember(member);
+  const nodeX = nodePositions(member.spans);
+  checkStability(member, nodeX);
+  const assembly = assembleMember(member, nodeX, true);
   const { layout, spanLoads } = assembly;
-  const answer = solveInDouble(member, assembly) ?? preciseAnswer(member, assembly);
-  const d = answer.d;
-  const value = (dof: number): number => (dof >= 0 ? d[dof] : 0);
-  const nodeCount = layout.nodeX.length;
-  const nodeForce = new Array<number>(nodeCount).fill(0);
-  const nodeMoment = new Array<number>(nodeCount).fill(0);
-  const pieces: Piece[] = [];
-  for (let e = 0; e < member.spans.length; e++) {
-    const span = member.spans[e];
-    const ei = layout.stiffness[e];
-    const dofs = elementDofs(layout, e);
-    const end = answer.endForces[e];
-    nodeForce[e] += end[0];
-    nodeMoment[e] += end[1];
-    nodeForce[e + 1] += end[2];
-    nodeMoment[e + 1] += end[3];
-    const start = { shear: -end[0], moment: end[1], slope: value(dofs[1]), deflection: value(dofs[0]) };
-    integrateSpan(start, spanLoads[e], span, layout.nodeX[e], layout.nodeX[e + 1], 1 / ei, pieces);
+  const solved = solveInDouble(member, assembly) ?? preciseAnswer(member, assembly);
+  const { d, ends } = solved;
+  const nodeCount = nodeX.length;
+  if (nodeForce.length < nodeCount) {
+    nodeForce = new Float64Array(Math.max(nodeCount, 2 * nodeForce.length));
+    nodeMoment = new Float64Array(nodeForce.length);
   }
-  const loadScale = loadScaleOf(member, layout.length);
-  const raw: Reaction[] = member.supports.map((support, i) => {
-    const x = layout.nodeX[i];
-    // A rotational spring resists the clockwise rotation θ with a counter-clockwise moment kθ.
-    const moment = rotationalSpring(support) * value(layout.rotationRightDof[i]);
-    switch (support.kind) {
-      case "pin":
-        return { x, force: -nodeForce[i], moment };
-      case "fixed":
-        return { x, force: -nodeForce[i], moment: -nodeMoment[i] };
-      case "spring":
-        return { x, force: support.stiffness * value(layout.deflectionDof[i]), moment };
-      case "free":
-        return { x, force: 0, moment };
-      default:
-        return { x, force: 0, moment: 0 };
-    }
-  });
-  const reactions = cleanReactions(raw, loadScale, layout.length);
-  const scales = scalesOf(pieces, answer);
-  requireFinite(d, pieces, reactions, scales);
+  nodeForce.fill(0, 0, nodeCount);
+  nodeMoment.fill(0, 0, nodeCount);
+  const pieces: Piece[] = [];
+  const spanCount = member.spans.length;
+  const { settlement } = layout;
+  for (let e = 0; e < spanCount; e++) {
+    const at = 4 * e;
+    nodeForce[e] += ends[at];
+    nodeMoment[e] += ends[at + 1];
+    nodeForce[e + 1] += ends[at + 2];
+    nodeMoment[e + 1] += ends[at + 3];
+    const slopeDof = layout.rotationRightDof[e];
+    const deflectionDof = layout.deflectionDof[e];
+    start.shear = -ends[at];
+    start.moment = ends[at + 1];
+    start.slope = slopeDof >= 0 ? d[slopeDof] : 0;
+    start.deflection = deflectionDof >= 0 ? d[deflectionDof] : settlement === null ? 0 : prescribedDisplacement(layout, e, 0);
+    integrateSpan(start, spanLoads[e], member.spans[e], nodeX[e], nodeX[e + 1], 1 / layout.stiffness[e], pieces, layout.shearFlexibility[e]);
+  }
+  const loadScale = loadScaleOf(member, layout.length) + settlementScale(member, layout);
+  const reactions = reactionsOf(member, layout, d, loadScale);
+  const scales = scalesOf(pieces, solved.forceTerms, solved.momentTerms);
+  requireFinite(d, layout.size, pieces, reactions, scales);
   requireEquilibrium(member, reactions, loadScale, layout.length);
   return {
     length: layout.length,
-    nodeX: layout.nodeX,
+    nodeX,
     reactions,
     pieces,
     hasStiffness: member.stiffness !== null,
     loadScale,
     scales,
-    displacements: Array.from(d),
+    displacements: copyOf(d, layout.size),
   };
+}
+
+/** The first `size` entries of a (scratch) array, as a fresh list. */
+function copyOf(values: Float64Array, size: number): number[] {
+  const list = new Array<number>(size);
+  for (let i = 0; i < size; i++) list[i] = values[i];
+  return list;
+}
+
+let rawForce = new Float64Array(8);
+let rawMoment = new Float64Array(8);
+
+/**
+ * The reactions at every node (from the node sums of the end forces, or the springs), with
+ * rounding noise (against the largest reaction of the kind, or 1% of the load scale) set to 0.
+ */
+function reactionsOf(member: Member, layout: Layout, d: Float64Array, loadScale: number): Reaction[] {
+  const { supports } = member;
+  const { settlement } = layout;
+  const count = supports.length;
+  if (rawForce.length < count) {
+    rawForce = new Float64Array(Math.max(count, 2 * rawForce.length));
+    rawMoment = new Float64Array(rawForce.length);
+  }
+  let forceScale = 0.01 * loadScale;
+  let momentScale = 0.01 * loadScale * layout.length;
+  for (let i = 0; i < count; i++) {
+    const support = supports[i];
+    const rotationDof = layout.rotationRightDof[i];
+    // A rotational spring resists the clockwise rotation θ with a counter-clockwise moment kθ.
+    const spring = rotationalSpring(support) * (rotationDof >= 0 ? d[rotationDof] : 0);
+    let force = 0;
+    let moment = 0;
+    switch (support.kind) {
+      case "pin":
+        force = -nodeForce[i];
+        moment = spring;
+        break;
+      case "fixed":
+        force = -nodeForce[i];
+        moment = -nodeMoment[i];
+        break;
+      case "spring": {
+        const deflectionDof = layout.deflectionDof[i];
+        const w = deflectionDof >= 0 ? d[deflectionDof] : 0;
+        // The spring pushes on k(w - Δ) when its base settles by Δ.
+        force = support.stiffness * (settlement === null ? w : w - settlement[i]);
+        moment = spring;
+        break;
+      }
+      case "free":
+        moment = spring;
+        break;
+      default:
+        break;
+    }
+    rawForce[i] = force;
+    rawMoment[i] = moment;
+    forceScale = Math.max(forceScale, Math.abs(force));
+    momentScale = Math.max(momentScale, Math.abs(moment));
+  }
+  const reactions = new Array<Reaction>(count);
+  for (let i = 0; i < count; i++) {
+    reactions[i] = { x: layout.nodeX[i], force: cleanZero(rawForce[i], forceScale), moment: cleanZero(rawMoment[i], momentScale) };
+  }
+  return reactions;
 }

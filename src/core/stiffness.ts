@@ -1,10 +1,11 @@
 import { equivalentNodalLoads, loadsBySpan, type SpanLoad } from "./elementLoads";
-import { buildLayout, elementDofs, rotationalSpring, type Layout } from "./layout";
+import { buildLayout, elementDof, prescribedDisplacement, rotationalSpring, type Layout } from "./layout";
 import type { Member } from "./model";
 
 /**
  * The reduced stiffness system K d = f over the free DOFs, stored as the upper band of the
- * symmetric K: entry (i, j), j >= i, sits at band[i * (halfBandwidth + 1) + (j - i)].
+ * symmetric K: entry (i, j), j >= i, sits at band[i * (halfBandwidth + 1) + (j - i)]. The
+ * arrays may be longer than `size` needs (the solver's scratch buffers): read them by index.
  */
 export interface StiffnessSystem {
   size: number;
@@ -13,21 +14,69 @@ export interface StiffnessSystem {
   rhs: Float64Array;
 }
 
-/** The 4x4 Euler–Bernoulli element matrix, row-major, DOFs [w1, θ1, w2, θ2]. */
-export function elementMatrix(ei: number, span: number): number[] {
-  const k = ei / (span * span * span);
-  const a = 12 * k;
-  const b = 6 * span * k;
-  const c = 4 * span * span * k;
-  const d = 2 * span * span * k;
-  return [a, b, -a, b, b, c, -b, d, -a, -b, a, -b, b, d, -b, c];
+/**
+ * The 4x4 element matrix, row-major, DOFs [w1, θ1, w2, θ2] (θ the rotation of the section),
+ * written into `out` from index `at`: the one definition of the element's stiffness.
+ * Euler–Bernoulli without a shear flexibility; with one (1/(G·A_v) > 0), the exact prismatic
+ * Timoshenko element, φ = 12EI/(G·A_v L²): EI/((1+φ)L³)·[12, 6L, -12, 6L; 6L, (4+φ)L²,
+ * -6L, (2-φ)L²; ...].
+ */
+export function elementMatrixInto(out: number[] | Float64Array, at: number, ei: number, span: number, shearFlexibility = 0): void {
+  let a: number;
+  let b: number;
+  let c: number;
+  let d: number;
+  if (shearFlexibility > 0) {
+    const phi = shearPhi(ei, span, shearFlexibility);
+    const k = ei / (span * span * span * (1 + phi));
+    a = 12 * k;
+    b = 6 * span * k;
+    c = (4 + phi) * span * span * k;
+    d = (2 - phi) * span * span * k;
+  } else {
+    const k = ei / (span * span * span);
+    a = 12 * k;
+    b = 6 * span * k;
+    c = 4 * span * span * k;
+    d = 2 * span * span * k;
+  }
+  out[at] = a;
+  out[at + 1] = b;
+  out[at + 2] = -a;
+  out[at + 3] = b;
+  out[at + 4] = b;
+  out[at + 5] = c;
+  out[at + 6] = -b;
+  out[at + 7] = d;
+  out[at + 8] = -a;
+  out[at + 9] = -b;
+  out[at + 10] = a;
+  out[at + 11] = -b;
+  out[at + 12] = b;
+  out[at + 13] = d;
+  out[at + 14] = -b;
+  out[at + 15] = c;
+}
+
+/** The 4x4 element matrix, row-major, DOFs [w1, θ1, w2, θ2] (Timoshenko with a shear flexibility > 0; see elementMatrixInto). */
+export function elementMatrix(ei: number, span: number, shearFlexibility = 0): number[] {
+  const out = new Array<number>(16);
+  elementMatrixInto(out, 0, ei, span, shearFlexibility);
+  return out;
+}
+
+/** φ = 12EI/(G·A_v L²) of a span (0 without shear deformation). */
+export function shearPhi(ei: number, span: number, shearFlexibility: number): number {
+  return shearFlexibility > 0 ? (12 * ei * shearFlexibility) / (span * span) : 0;
 }
 
 export interface Assembly {
   layout: Layout;
   system: StiffnessSystem;
   spanLoads: SpanLoad[][];
-  nodalLoads: number[][];
+  /** Per span, its element matrix (16 entries from 16 e) and its equivalent nodal loads (4 from 4 e). */
+  matrices: Float64Array;
+  nodalLoads: Float64Array;
 }
 
 function halfBandwidthOf(layout: Layout, spanCount: number): number {
@@ -35,7 +84,8 @@ function halfBandwidthOf(layout: Layout, spanCount: number): number {
   for (let e = 0; e < spanCount; e++) {
     let low = Infinity;
     let high = -Infinity;
-    for (const d of elementDofs(layout, e)) {
+    for (let r = 0; r < 4; r++) {
+      const d = elementDof(layout, e, r);
       if (d < 0) continue;
       if (d < low) low = d;
       if (d > high) high = d;
@@ -45,42 +95,81 @@ function halfBandwidthOf(layout: Layout, spanCount: number): number {
   return width;
 }
 
-/** Builds the layout, the span loads and the banded system of a (validated) member. */
-export function assembleMember(member: Member): Assembly {
-  const layout = buildLayout(member);
+/** Scratch buffers of the solver's own assembly (see assembleMember's `reuse`). */
+let scratchBand: Float64Array = new Float64Array(64);
+let scratchRhs: Float64Array = new Float64Array(16);
+let scratchMatrices: Float64Array = new Float64Array(64);
+let scratchNodal: Float64Array = new Float64Array(16);
+
+/** The scratch buffer, or a longer one (doubling) when it holds fewer than `length` entries. */
+function atLeast(buffer: Float64Array, length: number): Float64Array {
+  return buffer.length >= length ? buffer : new Float64Array(Math.max(length, 2 * buffer.length));
+}
+
+/**
+ * Builds the layout, the span loads and the banded system of a (validated) member. With
+ * `reuse` the layout's DOF arrays, the band, the right-hand side, the element matrices and
+ * the nodal loads are scratch buffers shared by every call (no allocation once grown; possibly
+ * longer than needed): valid only until the next such call, for the solver's own use within one solve.
+ */
+export function assembleMember(member: Member, nodeX?: number[], reuse = false): Assembly {
+  const layout = buildLayout(member, nodeX, reuse);
   const spanCount = member.spans.length;
   const halfBandwidth = halfBandwidthOf(layout, spanCount);
   const stride = halfBandwidth + 1;
-  const band = new Float64Array(layout.size * stride);
-  const rhs = new Float64Array(layout.size);
+  const n = layout.size;
+  let band: Float64Array;
+  let rhs: Float64Array;
+  let matrices: Float64Array;
+  let nodal: Float64Array;
+  if (reuse) {
+    band = scratchBand = atLeast(scratchBand, n * stride);
+    rhs = scratchRhs = atLeast(scratchRhs, n);
+    matrices = scratchMatrices = atLeast(scratchMatrices, 16 * spanCount);
+    nodal = scratchNodal = atLeast(scratchNodal, 4 * spanCount);
+    band.fill(0, 0, n * stride);
+    rhs.fill(0, 0, n);
+  } else {
+    band = new Float64Array(n * stride);
+    rhs = new Float64Array(n);
+    matrices = new Float64Array(16 * spanCount);
+    nodal = new Float64Array(4 * spanCount);
+  }
   const spanLoads = loadsBySpan(layout.nodeX, member.spans, member.loads);
-  const nodalLoads: number[][] = [];
+  const { settlement } = layout;
   for (let e = 0; e < spanCount; e++) {
     const span = member.spans[e];
-    const k = elementMatrix(layout.stiffness[e], span);
-    const dofs = elementDofs(layout, e);
-    const f = equivalentNodalLoads(spanLoads[e], span);
-    nodalLoads.push(f);
+    const km = 16 * e;
+    const fm = 4 * e;
+    const g = layout.shearFlexibility[e];
+    elementMatrixInto(matrices, km, layout.stiffness[e], span, g);
+    equivalentNodalLoads(spanLoads[e], span, nodal, fm, shearPhi(layout.stiffness[e], span, g));
     for (let r = 0; r < 4; r++) {
-      const i = dofs[r];
+      const i = elementDof(layout, e, r);
       if (i < 0) continue;
-      rhs[i] += f[r];
+      rhs[i] += nodal[fm + r];
+      // A settling restrained node moves K·Δ to the right-hand side.
+      if (settlement !== null) for (let c = 0; c < 4; c++) rhs[i] -= matrices[km + r * 4 + c] * prescribedDisplacement(layout, e, c);
       for (let c = 0; c < 4; c++) {
-        const j = dofs[c];
+        const j = elementDof(layout, e, c);
         if (j < i) continue;
-        band[i * stride + (j - i)] += k[r * 4 + c];
+        band[i * stride + (j - i)] += matrices[km + r * 4 + c];
       }
     }
   }
-  member.supports.forEach((support, node) => {
+  const { supports } = member;
+  for (let node = 0; node < supports.length; node++) {
+    const support = supports[node];
     if (support.kind === "spring") {
       const i = layout.deflectionDof[node];
       band[i * stride] += support.stiffness;
+      // The spring's base settles: its force k(w - Δ) puts kΔ on the right-hand side.
+      if (settlement !== null) rhs[i] += support.stiffness * settlement[node];
     }
     const rotational = rotationalSpring(support);
     if (rotational > 0) band[layout.rotationRightDof[node] * stride] += rotational;
-  });
-  return { layout, system: { size: layout.size, halfBandwidth, band, rhs }, spanLoads, nodalLoads };
+  }
+  return { layout, system: { size: n, halfBandwidth, band, rhs }, spanLoads, matrices, nodalLoads: nodal };
 }
 
 /** The reduced stiffness system of a (validated) member. */

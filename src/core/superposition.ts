@@ -151,8 +151,8 @@ export function mergeBreaks(solutions: Solution[], extra: number[] = []): Float6
   return Float64Array.from(out);
 }
 
-/** A solution's piece values at the start of every grid interval (FIELDS per interval), plus 1/EI there. */
-export function resample(solution: Solution, breaks: Float64Array, flexibility?: Float64Array): Float64Array {
+/** A solution's piece values at the start of every grid interval (FIELDS per interval), plus 1/EI (and 1/GA) there. */
+export function resample(solution: Solution, breaks: Float64Array, flexibility?: Float64Array, shearFlexibility?: Float64Array): Float64Array {
   const m = breaks.length - 1;
   const out = new Float64Array(FIELDS * m);
   const { pieces } = solution;
@@ -170,6 +170,7 @@ export function resample(solution: Solution, breaks: Float64Array, flexibility?:
     out[o + 4] = p.q0 + p.q1 * s;
     out[o + 5] = p.q1;
     if (flexibility) flexibility[k] = p.flexibility;
+    if (shearFlexibility) shearFlexibility[k] = p.shearFlexibility;
   }
   return out;
 }
@@ -181,7 +182,7 @@ export function addScaled(out: Float64Array, a: number, x: Float64Array): void {
 }
 
 /** A scratch piece holding grid interval k of `fields`. */
-export function loadPiece(piece: Piece, fields: Float64Array, k: number, breaks: Float64Array, flexibility: Float64Array): Piece {
+export function loadPiece(piece: Piece, fields: Float64Array, k: number, breaks: Float64Array, flexibility: Float64Array, shearFlexibility?: Float64Array): Piece {
   const o = FIELDS * k;
   piece.x0 = breaks[k];
   piece.x1 = breaks[k + 1];
@@ -192,11 +193,12 @@ export function loadPiece(piece: Piece, fields: Float64Array, k: number, breaks:
   piece.q0 = fields[o + 4];
   piece.q1 = fields[o + 5];
   piece.flexibility = flexibility[k];
+  piece.shearFlexibility = shearFlexibility ? shearFlexibility[k] : 0;
   return piece;
 }
 
 export function scratchPiece(): Piece {
-  return { x0: 0, x1: 0, shear0: 0, moment0: 0, slope0: 0, deflection0: 0, q0: 0, q1: 0, flexibility: 0 };
+  return { x0: 0, x1: 0, shear0: 0, moment0: 0, slope0: 0, deflection0: 0, q0: 0, q1: 0, flexibility: 0, shearFlexibility: 0 };
 }
 
 export interface PeakAt {
@@ -221,6 +223,7 @@ export function peaksOf(
   quantity: Quantity,
   senses: readonly (1 | -1)[],
   scale: number,
+  shearFlexibility?: Float64Array,
 ): PeakAt[] {
   const m = breaks.length - 1;
   const piece = scratchPiece();
@@ -230,7 +233,7 @@ export function peaksOf(
   let high = -Infinity;
   let low = Infinity;
   for (let k = 0; k < m; k++) {
-    loadPiece(piece, fields, k, breaks, flexibility);
+    loadPiece(piece, fields, k, breaks, flexibility, shearFlexibility);
     const a = pieceValue(piece, quantity, 0);
     const b = pieceValue(piece, quantity, piece.x1 - piece.x0);
     start[k] = a;
@@ -240,7 +243,7 @@ export function peaksOf(
   }
   const inner = new Map<number, { s: number; v: number }[]>();
   for (let k = 0; k < m; k++) {
-    loadPiece(piece, fields, k, breaks, flexibility);
+    loadPiece(piece, fields, k, breaks, flexibility, shearFlexibility);
     const length = piece.x1 - piece.x0;
     const c = coefficients(piece, quantity);
     let spread = 0;

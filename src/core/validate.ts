@@ -11,7 +11,7 @@ export { memberLength };
  */
 export const MAX_LOADS = 10000;
 
-const LOAD_KINDS = new Set(["point", "moment", "udl", "linear"]);
+const LOAD_KINDS = new Set(["point", "moment", "udl", "linear", "settle"]);
 const SUPPORT_KINDS = new Set(["pin", "fixed", "free", "hinge", "spring"]);
 
 function isFiniteNumber(value: unknown): value is number {
@@ -24,11 +24,17 @@ function show(value: unknown): string {
 
 function validateSpans(spans: number[]): void {
   if (!Array.isArray(spans) || spans.length === 0) throw invalid("spans: give at least one span length");
-  spans.forEach((span, i) => {
+  for (let i = 0; i < spans.length; i++) {
+    const span = spans[i];
     if (!isFiniteNumber(span) || span <= 0) {
       throw invalid(`span ${i + 1}: length must be a positive number, got ${show(span)}`);
     }
-  });
+  }
+}
+
+/** Names support i in a message: "support 2 (x = 6)" (only a message needs the node's position). */
+function supportPlace(spans: number[], i: number, length: number): string {
+  return `support ${i + 1} (x = ${shownLength(nodePositions(spans)[i] ?? length)})`;
 }
 
 function validateSupports(member: Member, length: number): void {
@@ -37,36 +43,35 @@ function validateSupports(member: Member, length: number): void {
     const count = Array.isArray(supports) ? supports.length : 0;
     throw invalid(`supports: need ${spans.length + 1} entries (one per node, spans + 1), got ${count}`);
   }
-  const nodeX = nodePositions(spans);
-  supports.forEach((support, i) => {
-    const where = (): string => `support ${i + 1} (x = ${shownLength(nodeX[i] ?? length)})`;
+  for (let i = 0; i < supports.length; i++) {
+    const support = supports[i];
     if (!support || !SUPPORT_KINDS.has(support.kind)) {
-      throw invalid(`${where()}: unknown support ${show(support && support.kind)}; use pin, fixed, free, hinge or a spring stiffness`);
+      throw invalid(`${supportPlace(spans, i, length)}: unknown support ${show(support && support.kind)}; use pin, fixed, free, hinge or a spring stiffness`);
     }
     if (support.kind === "spring") {
       if (!isFiniteNumber(support.stiffness) || support.stiffness <= 0) {
-        throw invalid(`${where()}: spring stiffness must be a positive number, got ${show(support.stiffness)}`);
+        throw invalid(`${supportPlace(spans, i, length)}: spring stiffness must be a positive number, got ${show(support.stiffness)}`);
       }
       if (member.stiffness === null) {
-        throw invalid(`${where()}: a spring support needs EI, since the result depends on EI relative to the spring`);
+        throw invalid(`${supportPlace(spans, i, length)}: a spring support needs EI, since the result depends on EI relative to the spring`);
       }
     }
     const rotational: unknown = (support as { rotational?: unknown }).rotational;
     if (rotational !== undefined) {
       if (support.kind === "fixed" || support.kind === "hinge") {
-        throw invalid(`${where()}: a rotational spring belongs with pin, free or a vertical spring, not with ${support.kind}`);
+        throw invalid(`${supportPlace(spans, i, length)}: a rotational spring belongs with pin, free or a vertical spring, not with ${support.kind}`);
       }
       if (!isFiniteNumber(rotational) || rotational < 0) {
-        throw invalid(`${where()}: rotational spring stiffness must be a positive number (moment per radian), got ${show(rotational)}`);
+        throw invalid(`${supportPlace(spans, i, length)}: rotational spring stiffness must be a positive number (moment per radian), got ${show(rotational)}`);
       }
       if (member.stiffness === null && rotational > 0) {
-        throw invalid(`${where()}: a rotational spring needs EI, since the result depends on EI relative to the spring`);
+        throw invalid(`${supportPlace(spans, i, length)}: a rotational spring needs EI, since the result depends on EI relative to the spring`);
       }
     }
     if (support.kind === "hinge" && (i === 0 || i === spans.length)) {
-      throw invalid(`${where()}: a hinge joins two spans, so it belongs at an interior node, not at a member end`);
+      throw invalid(`${supportPlace(spans, i, length)}: a hinge joins two spans, so it belongs at an interior node, not at a member end`);
     }
-  });
+  }
 }
 
 function validateStiffness(member: Member): void {
@@ -75,10 +80,11 @@ function validateStiffness(member: Member): void {
   if (!Array.isArray(stiffness) || (stiffness.length !== spans.length && stiffness.length !== 1)) {
     throw invalid(`EI: give one value for the member or one per span (${spans.length}), got ${Array.isArray(stiffness) ? stiffness.length : 0}`);
   }
-  stiffness.forEach((ei, i) => {
+  for (let i = 0; i < stiffness.length; i++) {
+    const ei = stiffness[i];
     if (!isFiniteNumber(ei) || ei <= 0) throw invalid(`EI of span ${i + 1}: must be a positive number, got ${show(ei)}`);
     if (!Number.isFinite(1 / ei)) throw invalid(`EI of span ${i + 1}: ${show(ei)} is too small to compute with; check its units`);
-  });
+  }
 }
 
 /** The common case, checked without building any message. */
@@ -86,6 +92,7 @@ function isPlainLoad(load: Load, length: number): boolean {
   if (!LOAD_KINDS.has(load.kind) || !isFiniteNumber(load.magnitude) || !isFiniteNumber(load.xStart)) return false;
   if (!isOnMember(load.xStart, length)) return false;
   if (load.kind === "point" || load.kind === "moment") return true;
+  if (load.kind === "settle") return false;
   if (!isFiniteNumber(load.xEnd) || !isOnMember(load.xEnd, length) || load.xEnd <= load.xStart) return false;
   return load.kind !== "linear" || isFiniteNumber(load.magnitudeEnd);
 }
@@ -95,13 +102,13 @@ function validateLoad(load: Load, length: number): void {
   const where = `load row ${load.row}`;
   const tol = positionTolerance(length);
   if (!LOAD_KINDS.has(load.kind)) {
-    throw invalid(`${where}: unknown load type ${show(load.kind)}; use point, moment, udl or linear`);
+    throw invalid(`${where}: unknown load type ${show(load.kind)}; use point, moment, udl, linear or settle`);
   }
   if (!isFiniteNumber(load.magnitude)) throw invalid(`${where}: magnitude must be a finite number, got ${show(load.magnitude)}`);
   if (!isFiniteNumber(load.xStart)) throw invalid(`${where}: x start must be a finite number, got ${show(load.xStart)}`);
   if (load.xStart < -tol) throw invalid(`${where}: x start ${load.xStart} is before the member start 0`);
   if (load.xStart > length + tol) throw invalid(`${where}: x start ${load.xStart} is beyond the member end ${shownLength(length)}`);
-  if (load.kind === "point" || load.kind === "moment") return;
+  if (load.kind === "point" || load.kind === "moment" || load.kind === "settle") return;
   if (!isFiniteNumber(load.xEnd)) throw invalid(`${where}: x end must be a finite number, got ${show(load.xEnd)}`);
   if (load.xEnd > length + tol) throw invalid(`${where}: x end ${load.xEnd} is beyond the member end ${shownLength(length)}`);
   if (load.xEnd <= load.xStart) throw invalid(`${where}: x end ${load.xEnd} is not beyond x start ${load.xStart}`);
@@ -110,9 +117,49 @@ function validateLoad(load: Load, length: number): void {
   }
 }
 
+/**
+ * A settlement is the prescribed deflection of a node that is restrained vertically (pin,
+ * fixed, or a spring, whose base settles), and its forces depend on the real EI.
+ */
+function validateSettlements(member: Member): void {
+  const nodeX = nodePositions(member.spans);
+  for (const load of member.loads) {
+    if (load.kind !== "settle") continue;
+    const where = `load row ${load.row}`;
+    const node = nodeIndexAt(nodeX, load.xStart);
+    if (node < 0) {
+      throw invalid(`${where}: a settlement belongs at a support node; x = ${+load.xStart.toPrecision(12)} is not a node (nodes are at the span ends)`);
+    }
+    const kind = member.supports[node].kind;
+    if (kind !== "pin" && kind !== "fixed" && kind !== "spring") {
+      throw invalid(`${where}: the node at x = ${+nodeX[node].toPrecision(12)} is ${kind}, with no vertical restraint to settle; a settlement belongs at a pin, fixed or spring support`);
+    }
+    if (member.stiffness === null) {
+      throw invalid(`${where}: the forces from a settlement depend on the real EI (without EI the member is taken as uniform); give EI`);
+    }
+  }
+}
+
+function validateShear(member: Member): void {
+  const { shear, spans } = member;
+  if (shear === undefined || shear === null) return;
+  if (!Array.isArray(shear) || (shear.length !== spans.length && shear.length !== 1)) {
+    throw invalid(`EI: give the shear stiffness once for the member or once per span (${spans.length}), got ${Array.isArray(shear) ? shear.length : 0}`);
+  }
+  shear.forEach((ga, i) => {
+    if (ga === null) return;
+    const where = shear.length === 1 ? "shear stiffness of the member" : `shear stiffness of span ${i + 1}`;
+    if (!isFiniteNumber(ga) || ga <= 0) throw invalid(`${where}: GA must be a positive number (force units), got ${show(ga)}`);
+    if (!Number.isFinite(1 / ga)) throw invalid(`${where}: ${show(ga)} is too small to compute with; check its units`);
+    if (member.stiffness === null) throw invalid(`${where}: shear deformation needs EI, since the result depends on EI relative to GA`);
+  });
+}
+
 /** A couple exactly at a hinge has no side to act on: the user must say which. */
 function rejectCouplesOnHinges(member: Member): void {
-  if (!member.supports.some((support) => support.kind === "hinge")) return;
+  let hinges = false;
+  for (let i = 0; i < member.supports.length; i++) hinges = hinges || member.supports[i].kind === "hinge";
+  if (!hinges) return;
   const nodeX = nodePositions(member.spans);
   for (const load of member.loads) {
     if (load.kind !== "moment") continue;
@@ -126,8 +173,9 @@ function rejectCouplesOnHinges(member: Member): void {
 
 /**
  * Checks a member's data: positive finite spans, one support per node, known support kinds,
- * positive springs (which need EI), hinges only between spans, EI once or per span, and
- * loads that lie on the member. Throws a #VALUE! SpanError naming the offending item.
+ * positive springs (which need EI), hinges only between spans, EI once or per span, a
+ * positive shear stiffness (which needs EI), loads that lie on the member, and settlements
+ * only at vertically restrained nodes of a member with EI. Throws a #VALUE! SpanError naming the offending item.
  */
 export function validateMember(member: Member): void {
   validateSpans(member.spans);
@@ -138,6 +186,13 @@ export function validateMember(member: Member): void {
   if (member.loads.length > MAX_LOADS) {
     throw invalid(`loads: ${member.loads.length} loads on one member; at most ${MAX_LOADS} are taken (combine loads that act together)`);
   }
-  for (const load of member.loads) validateLoad(load, length);
+  let settles = false;
+  for (let i = 0; i < member.loads.length; i++) {
+    const load = member.loads[i];
+    validateLoad(load, length);
+    if (load.kind === "settle") settles = true;
+  }
   rejectCouplesOnHinges(member);
+  validateShear(member);
+  if (settles) validateSettlements(member);
 }

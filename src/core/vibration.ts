@@ -75,6 +75,7 @@ export function massesFromLoads(loads: Load[], g: number): Mass[] {
   return loads.map((load): Mass => {
     const where = `load row ${load.row}`;
     if (load.kind === "moment") throw invalid(`${where}: a couple carries no mass; leave couples out of the loads (or the combination) that give the mass`);
+    if (load.kind === "settle") throw invalid(`${where}: a settlement carries no mass; leave settlements out of the loads (or the combination) that give the mass`);
     if (load.kind === "point") return { kind: "point", at: load.xStart, mass: load.magnitude / g, row: load.row };
     if (load.kind === "linear" && load.magnitudeEnd !== load.magnitude) {
       throw invalid(`${where}: a linearly varying load gives a mass that varies along the member, which is not taken exactly; give uniform loads or the mass per length`);
@@ -276,6 +277,9 @@ function prepare(model: VibrationModel): Mesh {
   const { member } = model;
   validateMember(member);
   if (member.stiffness === null) throw unavailable("EI: natural frequencies need the flexural stiffness; give EI for the member or each span");
+  if (member.shear && member.shear.some((ga) => ga !== null)) {
+    throw invalid("EI: natural frequencies are computed for Euler-Bernoulli spans only; leave the shear stiffness (shear GA) out of EI for this function");
+  }
   checkStability(member);
   const mesh = buildMesh(model);
   for (const e of mesh.elements) {

@@ -43,6 +43,8 @@ export function loadText(l: Load): string {
       return `uniform ${num(l.magnitude)} over ${between}${tag}`;
     case "linear":
       return `linear ${num(l.magnitude)} to ${num(l.magnitudeEnd)} over ${between}${tag}`;
+    case "settle":
+      return `settlement ${num(l.magnitude)} (down) at ${at}${tag}`;
   }
 }
 

@@ -98,6 +98,7 @@ function loadShapes(l: Load, X: (x: number) => number, beamY: number, level: num
       { kind: "text", x: x + 7, y: top, text: `${label}C=${short(l.magnitude, 4)}`, size: 6.5 },
     ];
   }
+  if (l.kind === "settle") return [{ kind: "text", x: X(l.xStart) + 3, y: beamY + 14, text: `${label}settle ${short(l.magnitude, 4)}`, size: 6.5 }];
   const a = X(l.xStart);
   const b = X(l.xEnd);
   const big = Math.max(Math.abs(l.magnitude), Math.abs(l.magnitudeEnd)) || 1;

@@ -36,9 +36,10 @@ function hashOf(arg: unknown, hash: number): number {
       scratch[0] = arg === 0 ? 0 : arg;
       return mix(mix(mix(hash, 2), scratchWords[0]), scratchWords[1]);
     case "string": {
+      // One multiply per character (FNV-1a's step), then one full mix: text cells are most of a schedule row's cells.
       let h = mix(hash, 3 + arg.length * 16);
-      for (let i = 0; i < arg.length; i++) h = mix(h, arg.charCodeAt(i));
-      return h;
+      for (let i = 0; i < arg.length; i++) h = Math.imul(h ^ arg.charCodeAt(i), 0x01000193);
+      return mix(h, 0);
     }
     case "boolean":
       return mix(hash, arg ? 4 : 5);

@@ -9,7 +9,7 @@ const ERROR_TEXT =
   /^#(?:N\/A|VALUE!|REF!|DIV\/0!|NUM!|NAME\?|NULL!|SPILL!|CALC!|GETTING_DATA|BUSY!|FIELD!|CONNECT!|BLOCKED!|UNKNOWN!|PYTHON!|EXTERNAL!)$/;
 
 /** Linear time: the digits before the point are one run, and the point starts its own group. */
-const NUMBER_TEXT = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
+export const NUMBER_TEXT = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
 
 /** True for a cell with nothing in it: "", whitespace-only text, null or undefined (not 0). */
 export function isEmpty(value: unknown): boolean {
@@ -38,12 +38,94 @@ export function errorCodeOf(value: unknown): string | null {
   return null;
 }
 
-/** A number written as text ("6", " 2.5 ", "-1e3"), or null when the text is not one number. */
+/** Powers of ten that are exact doubles (10^0 to 10^22). */
+const EXACT_POWERS = [1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22];
+
+/** Significant digits a mantissa may hold and stay an exact double (10^15 < 2^53). */
+const EXACT_DIGITS = 15;
+
+/**
+ * The value of text[start, end) when it is one plain decimal (NUMBER_TEXT: sign, digits with an
+ * optional point, optional exponent) and finite, else NaN; read without building strings. With
+ * at most 15 significant digits and a power of ten up to 10^22 either way, the value is one
+ * correctly rounded product or quotient of two exact doubles, which is what Number() gives
+ * (correctly rounded decimal conversion); any other text is handed to Number() itself.
+ */
+export function decimalValue(text: string, start: number, end: number): number {
+  let i = start;
+  let negative = false;
+  let c = i < end ? text.charCodeAt(i) : 0;
+  if (c === 43 || c === 45) {
+    negative = c === 45;
+    c = ++i < end ? text.charCodeAt(i) : 0;
+  }
+  let mantissa = 0;
+  let significant = 0;
+  let digits = 0;
+  let fraction = 0;
+  let exact = true;
+  while (c >= 48 && c <= 57) {
+    if (mantissa !== 0 || c !== 48) {
+      if (significant < EXACT_DIGITS) mantissa = mantissa * 10 + (c - 48);
+      else exact = false;
+      significant++;
+    }
+    digits++;
+    c = ++i < end ? text.charCodeAt(i) : 0;
+  }
+  if (c === 46) {
+    c = ++i < end ? text.charCodeAt(i) : 0;
+    while (c >= 48 && c <= 57) {
+      if (mantissa !== 0 || c !== 48) {
+        if (significant < EXACT_DIGITS) mantissa = mantissa * 10 + (c - 48);
+        else exact = false;
+        significant++;
+      }
+      digits++;
+      fraction++;
+      c = ++i < end ? text.charCodeAt(i) : 0;
+    }
+  }
+  if (digits === 0) return NaN;
+  let exponent = 0;
+  if (i < end && (c === 101 || c === 69)) {
+    c = ++i < end ? text.charCodeAt(i) : 0;
+    let negativeExponent = false;
+    if (c === 43 || c === 45) {
+      negativeExponent = c === 45;
+      c = ++i < end ? text.charCodeAt(i) : 0;
+    }
+    let exponentDigits = 0;
+    while (c >= 48 && c <= 57) {
+      if (exponent < 1e6) exponent = exponent * 10 + (c - 48);
+      else exact = false;
+      exponentDigits++;
+      c = ++i < end ? text.charCodeAt(i) : 0;
+    }
+    if (exponentDigits === 0) return NaN;
+    if (negativeExponent) exponent = -exponent;
+  }
+  if (i !== end) return NaN;
+  const power = exponent - fraction;
+  if (exact && (mantissa === 0 || (power >= -22 && power <= 22))) {
+    const magnitude = mantissa === 0 ? 0 : power >= 0 ? mantissa * EXACT_POWERS[power] : mantissa / EXACT_POWERS[-power];
+    return negative ? -magnitude : magnitude;
+  }
+  const value = Number(start === 0 && end === text.length ? text : text.slice(start, end));
+  return Number.isFinite(value) ? value : NaN;
+}
+
+/** True for a character code String.prototype.trim never removes, below 128 (printable ASCII). */
+function isPrintable(code: number): boolean {
+  return code > 32 && code < 127;
+}
+
+/** A number written as text ("6", " 2.5 ", "-1e3"), or null when the text is not one number (NUMBER_TEXT). */
 export function numberFromText(text: string): number | null {
-  const trimmed = text.trim();
-  if (!NUMBER_TEXT.test(trimmed)) return null;
-  const value = Number(trimmed);
-  return Number.isFinite(value) ? value : null;
+  const n = text.length;
+  const trimmed = n > 0 && isPrintable(text.charCodeAt(0)) && isPrintable(text.charCodeAt(n - 1)) ? text : text.trim();
+  const value = decimalValue(trimmed, 0, trimmed.length);
+  return value === value ? value : null;
 }
 
 /** How a cell value reads in a message: numbers plain, text quoted. */

@@ -7,7 +7,7 @@ export { parseLoadNotation, formatLoad, formatLoadNotation } from "./loadNotatio
 export { toLoad, isCaseLabel, placeOf, COLUMNS, LOAD_KINDS } from "./loadRow";
 export type { LoadRow, ColumnName } from "./loadRow";
 export { readSupports } from "./supports";
-export { readSpans, readStiffness } from "./lists";
+export { readSpans, readStiffness, readFlexure, SHEAR_WORD } from "./lists";
 export { isEmpty, isBlank, errorCodeOf, numberFromText, readNumber, readText, show } from "./cells";
 export { rowsOf, singleCell, isOmitted, isAllBlank, vectorCells, splitList, listEntries } from "./ranges";
 export { mapPositions, orBlank, finite } from "./shape";

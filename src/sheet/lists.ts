@@ -10,8 +10,8 @@
  * cell of two blank read as uniform EI).
  */
 import { invalid } from "../core";
-import { isBlank, isEmpty, readNumber } from "./cells";
-import { isAllBlank, listEntries } from "./ranges";
+import { isBlank, isEmpty, numberFromText, readNumber } from "./cells";
+import { isAllBlank, listEntries, singleCell, splitList } from "./ranges";
 
 /** Most spans one member may have. */
 export const MAX_SPANS = 10000;
@@ -36,15 +36,98 @@ export function readSpans(arg: unknown): number[] {
   return positive(entries, count, "spans", "a span length");
 }
 
+/** The word that follows an EI value with that span's shear stiffness G·A_v (force units). */
+export const SHEAR_WORD = "shear";
+
+/** The EI argument read: EI per span, and G·A_v per span (null where none) or null when no entry gives one. */
+export interface Flexure {
+  stiffness: number[] | null;
+  shear: (number | null)[] | null;
+}
+
+interface FlexureEntry {
+  ei: unknown;
+  shear: string | null;
+}
+
+const isShearWord = (token: string): boolean => token.toLowerCase() === SHEAR_WORD;
+
+/**
+ * The EI entries with their shear stiffness: in one text cell, `shear G` after an EI value
+ * belongs to it ("2.1e5 shear 8e4" is one entry; "2e5 shear 8e4, 3e5" two); in a range, a cell
+ * is a number or text "EI" or "EI shear G". One pass over the tokens (linear).
+ */
+function flexureEntries(arg: unknown): FlexureEntry[] {
+  const single = singleCell(arg);
+  const fromText = typeof single === "string" && !single.trim().startsWith("#");
+  const cells = fromText ? [single] : listEntries(arg, "EI");
+  const out: FlexureEntry[] = [];
+  for (const cell of cells) {
+    if (typeof cell !== "string" || (!fromText && !/shear/i.test(cell))) {
+      out.push({ ei: cell, shear: null });
+      continue;
+    }
+    const tokens = splitList(cell);
+    const first = out.length;
+    for (let i = 0; i < tokens.length; i++) {
+      if (!isShearWord(tokens[i])) {
+        out.push({ ei: tokens[i], shear: null });
+        continue;
+      }
+      const entry = out.length > first ? out[out.length - 1] : null;
+      if (entry === null || entry.shear !== null) {
+        throw invalid(`EI entry ${out.length + (entry === null ? 1 : 0)}: "${SHEAR_WORD}" must follow an EI value, as in 2.1e5 ${SHEAR_WORD} 8e4 (EI, then the shear stiffness G·A_v)`);
+      }
+      entry.shear = i + 1 < tokens.length ? tokens[++i] : "";
+    }
+    if (!fromText && out.length !== first + 1) {
+      throw invalid(`EI entry ${first + 1}: ${JSON.stringify(cell.trim().length <= 40 ? cell.trim() : `${cell.trim().slice(0, 37)}...`)} is not one EI; write EI or EI ${SHEAR_WORD} G·A_v in each cell`);
+    }
+  }
+  return out;
+}
+
+function shearOf(entry: FlexureEntry, index: number): number | null {
+  if (entry.shear === null) return null;
+  const value = numberFromText(entry.shear);
+  if (value === null || !(value > 0)) {
+    throw invalid(`EI entry ${index + 1}: ${SHEAR_WORD} must be followed by a positive shear stiffness G·A_v (force units), got ${JSON.stringify(entry.shear.length <= 20 ? entry.shear : `${entry.shear.slice(0, 17)}...`)}`);
+  }
+  return value;
+}
+
+/**
+ * EI per span, or null when omitted (uniform member; slope and deflection unavailable), and
+ * the optional shear stiffness G·A_v per span written after EI with the word `shear`. One
+ * value is the whole member's; otherwise one positive value per span, none of them blank.
+ */
+export function readFlexure(arg: unknown, spanCount: number): Flexure {
+  if (isAllBlank(arg)) return { stiffness: null, shear: null };
+  const entries = flexureEntries(arg);
+  let count = entries.length;
+  while (count > Math.max(spanCount, 1) && isBlank(entries[count - 1].ei) && entries[count - 1].shear === null) count--;
+  const used = count === 1 ? 1 : count;
+  const stiffness = readStiffnessEntries(entries.map((e) => e.ei), count, spanCount);
+  let shear: (number | null)[] | null = null;
+  for (let i = 0; i < used; i++) {
+    const ga = shearOf(entries[i], i);
+    if (ga === null) continue;
+    if (shear === null) shear = new Array<number | null>(spanCount).fill(null);
+    if (count === 1) shear.fill(ga);
+    else shear[i] = ga;
+  }
+  return { stiffness, shear };
+}
+
 /**
  * EI per span, or null when omitted (uniform member; slope and deflection unavailable). One
  * value is the whole member's; otherwise one positive value per span, none of them blank.
  */
 export function readStiffness(arg: unknown, spanCount: number): number[] | null {
-  if (isAllBlank(arg)) return null;
-  const entries = listEntries(arg, "EI");
-  let count = entries.length;
-  while (count > Math.max(spanCount, 1) && isBlank(entries[count - 1])) count--;
+  return readFlexure(arg, spanCount).stiffness;
+}
+
+function readStiffnessEntries(entries: unknown[], count: number, spanCount: number): number[] {
   if (count === spanCount) return positive(entries, count, "EI", "EI");
   if (count === 1) return new Array<number>(spanCount).fill(positive(entries, 1, "EI", "EI")[0]);
   let blank = 1;

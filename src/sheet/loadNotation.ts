@@ -5,6 +5,7 @@
  *   moment C at X [case]                   couple C at x = X
  *   udl W [from A] [to B] [case]           uniform load W from A (default 0) to B (default member end)
  *   linear W1 to W2 [from A] [to B] [case] load varying from W1 at A to W2 at B
+ *   settle D at X [case]                   support at x = X settles D (down +, deflection unit)
  *
  * Keywords are case-insensitive; numbers are plain decimals ("2.5", "-3", "1e3"); the case
  * label is optional and last (letters and digits starting with a letter, as combinations
@@ -12,7 +13,7 @@
  * only when x start is not 0 and `to` only when x end is not the member end.
  */
 import { invalid, MAX_LOADS, type LoadKind } from "../core";
-import { numberFromText } from "./cells";
+import { decimalValue, numberFromText } from "./cells";
 import { isCaseLabel, type LoadRow } from "./loadRow";
 
 const KINDS = new Map<string, LoadKind>([
@@ -20,6 +21,7 @@ const KINDS = new Map<string, LoadKind>([
   ["moment", "moment"],
   ["udl", "udl"],
   ["linear", "linear"],
+  ["settle", "settle"],
 ]);
 
 class Tokens {
@@ -75,13 +77,13 @@ function parseOne(text: string, row: number): LoadRow {
   };
   const tokens = new Tokens(text.split(/\s+/).filter((w) => w !== ""), fail);
   const word = tokens.peek() ?? "";
-  const kind = KINDS.get(word.toLowerCase()) ?? fail(`"${word.length <= 20 ? word : `${word.slice(0, 17)}...`}" is not a load type; start with point, moment, udl or linear`);
+  const kind = KINDS.get(word.toLowerCase()) ?? fail(`"${word.length <= 20 ? word : `${word.slice(0, 17)}...`}" is not a load type; start with point, moment, udl, linear or settle`);
   tokens.expectKeyword(word.toLowerCase(), "");
   const magnitude = tokens.number("the magnitude");
   let xStart = 0;
   let xEnd: number | null = null;
   let magnitudeEnd = 0;
-  if (kind === "point" || kind === "moment") {
+  if (kind === "point" || kind === "moment" || kind === "settle") {
     tokens.expectKeyword("at", "and the position after the magnitude");
     xStart = tokens.number("the position after \"at\"");
   } else {
@@ -100,9 +102,138 @@ function parseOne(text: string, row: number): LoadRow {
   return { kind, magnitude, xStart, xEnd, magnitudeEnd, loadCase, row, fromText: true };
 }
 
+/** Most words a load has in the notation ("linear 1 to 2 from 0 to 4 D"); a longer one is read by parseOne. */
+const MAX_WORDS = 10;
+const wordStart = new Int32Array(MAX_WORDS);
+const wordEnd = new Int32Array(MAX_WORDS);
+
+/** Whitespace as /\s/ and trim() see it, for ASCII text. */
+function isSpace(code: number): boolean {
+  return code === 32 || (code >= 9 && code <= 13);
+}
+
+/** Whether word w of `text` is `keyword` (lower-case ASCII) in any case, as toLowerCase() compares. */
+function isWord(text: string, w: number, keyword: string): boolean {
+  const start = wordStart[w];
+  if (wordEnd[w] - start !== keyword.length) return false;
+  for (let i = 0; i < keyword.length; i++) {
+    const c = text.charCodeAt(start + i);
+    if ((c >= 65 && c <= 90 ? c + 32 : c) !== keyword.charCodeAt(i)) return false;
+  }
+  return true;
+}
+
+function isLetter(code: number): boolean {
+  return (code >= 65 && code <= 90) || (code >= 97 && code <= 122);
+}
+
+/** True for a case label (isCaseLabel: a letter, then letters and digits) in text[start, end). */
+function isLabel(text: string, start: number, end: number): boolean {
+  if (end <= start || !isLetter(text.charCodeAt(start))) return false;
+  for (let i = start + 1; i < end; i++) {
+    const c = text.charCodeAt(i);
+    if (!isLetter(c) && !(c >= 48 && c <= 57)) return false;
+  }
+  return true;
+}
+
+/** The number word w of `text` is (decimalValue), NaN when there is no such word or it is not a number. */
+function numberOf(text: string, w: number, words: number): number {
+  return w < words ? decimalValue(text, wordStart[w], wordEnd[w]) : NaN;
+}
+
+/**
+ * One load of ASCII text[start, end) (no ';' inside) read without building strings (only its
+ * case label is sliced), or null when it is not a plain, well-formed load: then parseOne reads
+ * it, with its messages. When it gives a row, it is the row parseOne gives.
+ */
+function parsePlain(text: string, start: number, end: number, row: number): LoadRow | null {
+  let words = 0;
+  let i = start;
+  while (i < end) {
+    while (i < end && isSpace(text.charCodeAt(i))) i++;
+    if (i >= end) break;
+    if (words === MAX_WORDS) return null;
+    wordStart[words] = i;
+    while (i < end && !isSpace(text.charCodeAt(i))) i++;
+    wordEnd[words++] = i;
+  }
+  if (words < 2) return null;
+  let kind: LoadKind;
+  if (isWord(text, 0, "point")) kind = "point";
+  else if (isWord(text, 0, "moment")) kind = "moment";
+  else if (isWord(text, 0, "udl")) kind = "udl";
+  else if (isWord(text, 0, "linear")) kind = "linear";
+  else if (isWord(text, 0, "settle")) kind = "settle";
+  else return null;
+  const magnitude = numberOf(text, 1, words);
+  if (magnitude !== magnitude) return null;
+  let w = 2;
+  let xStart = 0;
+  let xEnd: number | null = null;
+  let magnitudeEnd = 0;
+  if (kind === "point" || kind === "moment" || kind === "settle") {
+    if (words < 4 || !isWord(text, 2, "at")) return null;
+    xStart = numberOf(text, 3, words);
+    if (xStart !== xStart) return null;
+    w = 4;
+  } else {
+    if (kind === "linear") {
+      if (words < 4 || !isWord(text, 2, "to")) return null;
+      magnitudeEnd = numberOf(text, 3, words);
+      if (magnitudeEnd !== magnitudeEnd) return null;
+      w = 4;
+    }
+    if (w + 1 < words && isWord(text, w, "from")) {
+      const from = numberOf(text, w + 1, words);
+      if (from === from) {
+        xStart = from;
+        w += 2;
+      }
+    }
+    if (w + 1 < words && isWord(text, w, "to")) {
+      const to = numberOf(text, w + 1, words);
+      if (to === to) {
+        xEnd = to === 0 ? null : to;
+        w += 2;
+      }
+    }
+  }
+  let loadCase = "";
+  if (w < words) {
+    if (!isLabel(text, wordStart[w], wordEnd[w])) return null;
+    loadCase = text.slice(wordStart[w], wordEnd[w]);
+    w++;
+  }
+  if (w !== words) return null;
+  return { kind, magnitude, xStart, xEnd, magnitudeEnd, loadCase, row, fromText: true };
+}
+
+/** True when every character of the text is ASCII (so whitespace and case are the ASCII rules). */
+function isAscii(text: string): boolean {
+  for (let i = 0; i < text.length; i++) if (text.charCodeAt(i) > 127) return false;
+  return true;
+}
+
 /** Parses the load notation into rows (numbered 1, 2, ... in order). Empty pieces are skipped. */
 export function parseLoadNotation(text: string): LoadRow[] {
   const rows: LoadRow[] = [];
+  if (isAscii(text)) {
+    let from = 0;
+    while (from <= text.length) {
+      let to = text.indexOf(";", from);
+      if (to < 0) to = text.length;
+      let start = from;
+      let end = to;
+      while (start < end && isSpace(text.charCodeAt(start))) start++;
+      while (end > start && isSpace(text.charCodeAt(end - 1))) end--;
+      from = to + 1;
+      if (start === end) continue;
+      if (rows.length === MAX_LOADS) throw invalid(`loads text: more than ${MAX_LOADS} loads on one member; combine loads that act together`);
+      rows.push(parsePlain(text, start, end, rows.length + 1) ?? parseOne(text.slice(start, end), rows.length + 1));
+    }
+    return rows;
+  }
   for (const piece of text.split(";")) {
     const trimmed = piece.trim();
     if (trimmed === "") continue;
@@ -119,7 +250,7 @@ function num(value: number): string {
 /** The one text form of a load row. */
 export function formatLoad(row: LoadRow): string {
   const parts: string[] = [row.kind, num(row.magnitude)];
-  if (row.kind === "point" || row.kind === "moment") parts.push("at", num(row.xStart));
+  if (row.kind === "point" || row.kind === "moment" || row.kind === "settle") parts.push("at", num(row.xStart));
   else {
     if (row.kind === "linear") parts.push("to", num(row.magnitudeEnd));
     if (row.xStart !== 0) parts.push("from", num(row.xStart));

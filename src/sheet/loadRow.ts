@@ -20,7 +20,7 @@ export interface LoadRow {
   fromText: boolean;
 }
 
-export const LOAD_KINDS: readonly LoadKind[] = ["point", "moment", "udl", "linear"];
+export const LOAD_KINDS: readonly LoadKind[] = ["point", "moment", "udl", "linear", "settle"];
 
 /** Table column numbers and names, 1-based as the user counts them. */
 export const COLUMNS = ["type", "magnitude", "x start", "x end", "magnitude at end", "case"] as const;

@@ -1,6 +1,7 @@
 /**
  * The load table: one load per row, columns type, magnitude, x start, x end, magnitude at
- * end, case. Fewer than six columns = the missing ones blank. Wholly blank rows (every cell
+ * end, case. A `settle` row is a support settlement: magnitude = the downward displacement Δ
+ * (deflection unit), x start = the support node, x end and magnitude at end blank. Fewer than six columns = the missing ones blank. Wholly blank rows (every cell
  * "", null or 0) are skipped. Row numbers in messages are 1-based rows of the given range.
  */
 import { invalid, MAX_LOADS, type LoadKind } from "../core";
@@ -12,6 +13,7 @@ const KINDS = new Map<string, LoadKind>([
   ["moment", "moment"],
   ["udl", "udl"],
   ["linear", "linear"],
+  ["settle", "settle"],
 ]);
 
 function isBlankRow(cells: unknown[]): boolean {
@@ -20,12 +22,14 @@ function isBlankRow(cells: unknown[]): boolean {
 }
 
 function readKind(cell: unknown, row: number): LoadKind {
-  const where = placeOf(row, false, "type");
-  if (isBlank(cell)) throw invalid(`${where}: the load type is blank; use point, moment, udl or linear`);
+  // The common spelling first, with no string built; messages only when throwing.
+  const plain = typeof cell === "string" ? KINDS.get(cell) : undefined;
+  if (plain !== undefined) return plain;
+  if (isBlank(cell)) throw invalid(`${placeOf(row, false, "type")}: the load type is blank; use point, moment, udl, linear or settle`);
   const code = errorCodeOf(cell);
-  if (code !== null) throw invalid(`${where}: the cell holds the error ${code}`);
+  if (code !== null) throw invalid(`${placeOf(row, false, "type")}: the cell holds the error ${code}`);
   const kind = typeof cell === "string" ? KINDS.get(cell.trim().toLowerCase()) : undefined;
-  if (!kind) throw invalid(`${where}: ${show(cell)} is not a load type; use point, moment, udl or linear`);
+  if (!kind) throw invalid(`${placeOf(row, false, "type")}: ${show(cell)} is not a load type; use point, moment, udl, linear or settle`);
   return kind;
 }
 
@@ -37,25 +41,32 @@ function requireBlank(cell: unknown, row: number, column: ColumnName, why: strin
 }
 
 function readCase(cell: unknown, row: number): string {
-  const where = placeOf(row, false, "case");
   if (isBlank(cell)) return "";
-  const label = readText(cell, () => where);
+  const where = (): string => placeOf(row, false, "case");
+  const label = readText(cell, where);
   if (!isCaseLabel(label)) {
-    throw invalid(`${where}: ${show(cell)} is not a case label; use letters and digits starting with a letter, such as D, L or Lr`);
+    throw invalid(`${where()}: ${show(cell)} is not a case label; use letters and digits starting with a letter, such as D, L or Lr`);
   }
   return label;
+}
+
+/** A number cell of a load row: a finite number as it is, anything else by readNumber (with its message). */
+function numberCell(cells: unknown[], column: number, row: number, blank: number): number {
+  const cell = cells[column];
+  if (typeof cell === "number" && Number.isFinite(cell)) return cell;
+  return readNumber(cell, () => placeOf(row, false, COLUMNS[column]), blank);
 }
 
 /** Reads one non-blank table row (cells beyond the sixth must be blank). */
 export function readLoadRow(cells: unknown[], row: number): LoadRow {
   const kind = readKind(cells[0], row);
-  const number = (column: number, blank: number) => readNumber(cells[column], () => placeOf(row, false, COLUMNS[column]), blank);
+  const number = (column: number, blank: number): number => numberCell(cells, column, row, blank);
   const magnitude = number(1, 0);
   const xStart = number(2, 0);
   let xEnd: number | null = null;
   let magnitudeEnd = 0;
-  if (kind === "point" || kind === "moment") {
-    requireBlank(cells[3], row, "x end", `a ${kind === "point" ? "point load" : "couple"} acts at x start only`);
+  if (kind === "point" || kind === "moment" || kind === "settle") {
+    requireBlank(cells[3], row, "x end", `a ${kind === "point" ? "point load" : kind === "moment" ? "couple" : "settlement"} acts at x start only`);
     requireBlank(cells[4], row, "magnitude at end", "only a linear load has a magnitude at end");
   } else {
     const end = number(3, 0);

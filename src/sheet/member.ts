@@ -4,7 +4,7 @@
  */
 import { applyCombination, checkCombinations, invalid, parseCombination, type Combination, type Member } from "../core";
 import { errorCodeOf, isEmpty, show } from "./cells";
-import { readSpans, readStiffness } from "./lists";
+import { readFlexure, readSpans } from "./lists";
 import type { LoadRow } from "./loadRow";
 import { placeOf, toLoad } from "./loadRow";
 import { parseLoadNotation } from "./loadNotation";
@@ -75,7 +75,7 @@ export function readMember(args: MemberArgs): Member {
   const spans = readSpans(args.spans);
   let length = 0;
   for (const span of spans) length += span;
-  const stiffness = readStiffness(args.EI, spans.length);
+  const { stiffness, shear } = readFlexure(args.EI, spans.length);
   const supports = readSupports(args.supports, spans.length);
   const rows = readLoads(args.loads);
   const comboText = readComboText(args.combo);
@@ -85,5 +85,5 @@ export function readMember(args: MemberArgs): Member {
     rows.map((row) => toLoad(row, length)),
     combination,
   );
-  return { spans, supports, stiffness, loads };
+  return shear === null ? { spans, supports, stiffness, loads } : { spans, supports, stiffness, loads, shear };
 }

@@ -161,8 +161,10 @@ export function memberInSI(member: Member, units: MemberUnits): Member {
     spans: member.spans.map((s) => s * L),
     supports: member.supports.map((s) => supportInSI(s, F, L)),
     stiffness: member.stiffness === null ? null : member.stiffness.map((ei) => ei * units.EI.factor),
+    ...(member.shear ? { shear: member.shear.map((ga) => (ga === null ? null : ga * F)) } : {}),
     loads: member.loads.map((load) => {
-      const scale = load.kind === "point" ? F : load.kind === "moment" ? F * L : F / L;
+      // A settlement is a displacement, given in the deflection unit.
+      const scale = load.kind === "settle" ? units.deflection.factor : load.kind === "point" ? F : load.kind === "moment" ? F * L : F / L;
       return { ...load, magnitude: load.magnitude * scale, magnitudeEnd: load.magnitudeEnd * scale, xStart: load.xStart * L, xEnd: load.xEnd * L };
     }),
   };
@@ -170,11 +172,16 @@ export function memberInSI(member: Member, units: MemberUnits): Member {
 
 /**
  * The member in the user's own length and force units: only EI changes (to force x length^2
- * of those units), so every result comes out in the units the member was written in, with
+ * of those units), and a settlement (from the deflection unit to the length unit; G·A_v is in
+ * the force unit already), so every result comes out in the units the member was written in, with
  * deflection in the length unit. Used where results are drawn rather than converted.
  */
 export function memberInOwnUnits(member: Member, units: MemberUnits): Member {
   const consistent = units.force.factor * units.length.factor * units.length.factor;
   const scale = units.EI.factor / consistent;
-  return { ...member, stiffness: member.stiffness === null ? null : member.stiffness.map((ei) => ei * scale) };
+  const stiffness = member.stiffness === null ? null : member.stiffness.map((ei) => ei * scale);
+  if (!member.loads.some((load) => load.kind === "settle")) return { ...member, stiffness };
+  // A settlement is given in the deflection unit; in the member's own units it is a length.
+  const toLength = units.deflection.factor / units.length.factor;
+  return { ...member, stiffness, loads: member.loads.map((load) => (load.kind === "settle" ? { ...load, magnitude: load.magnitude * toLength } : load)) };
 }

@@ -3,6 +3,7 @@
  * supports alternate pin / pin with fixed ends. The solve is meant to be O(n) in spans; the
  * ratio 1000-span / 10-span cost should be at most 200 (100x the spans, with some headroom).
  */
+import * as os from "os";
 import { solve, type Load, type Member } from "../../src/core";
 import { measure, printTable } from "./measure";
 
@@ -20,6 +21,8 @@ function member(spans: number): Member {
 }
 
 export function run(): void {
+  const load = (): string => os.loadavg().map((v) => v.toFixed(1)).join(" ");
+  console.log(`load average ${load()}`);
   const counts = [1, 3, 10, 100, 1000];
   const results = counts.map((n) => {
     const m = member(n);
@@ -32,4 +35,5 @@ export function run(): void {
   );
   const ratio = results[4].perCallMs / results[2].perCallMs;
   console.log(`ratio 1000-span / 10-span: ${ratio.toFixed(1)} (target: at most 200) ${ratio <= 200 ? "OK" : "OVER TARGET"}`);
+  console.log(`load average after ${load()}`);
 }

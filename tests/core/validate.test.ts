@@ -44,7 +44,7 @@ const cases: [string, () => Member, string][] = [
   ],
   ["zero EI", () => ({ ...base(), stiffness: [1, 0, 1] }), "EI of span 2: must be a positive number, got 0"],
   ["infinite EI", () => ({ ...base(), stiffness: [1, 1, Infinity] }), "EI of span 3: must be a positive number, got Infinity"],
-  ["unknown load kind", () => withLoad(3, { ...point(1, 2), kind: "torque" as Load["kind"] }), 'load row 3: unknown load type "torque"; use point, moment, udl or linear'],
+  ["unknown load kind", () => withLoad(3, { ...point(1, 2), kind: "torque" as Load["kind"] }), 'load row 3: unknown load type "torque"; use point, moment, udl, linear or settle'],
   ["NaN magnitude", () => withLoad(2, point(NaN, 2)), "load row 2: magnitude must be a finite number, got NaN"],
   ["infinite magnitude", () => withLoad(2, udl(Infinity, 0, 2)), "load row 2: magnitude must be a finite number, got Infinity"],
   ["NaN x start", () => withLoad(4, couple(1, NaN)), "load row 4: x start must be a finite number, got NaN"],

@@ -41,6 +41,7 @@ export const keywordText: fc.Arbitrary<string> = fc.constantFrom(
   "ASCE7-2.3.1", "ASCE7-2.4.1", "EN1990-6.10", "rectangle", "I", "tee", "circle", "box", "tube", "channel", "rect",
   "full L", "full", "standard", "standard L", "none", "shear", "deflection", "Q 0.7", "Q 0.7, S 0.5", "0.7", "Q S",
   "udl 2 D; point 10 at 3 L", "point 5 at 2", "moment 3 at 1", "linear 1 to 2", "6 8 6", "fixed pin pin free", "200 100",
+  "settle", "settle 0.01 at 6", "settle 0.01 at 0 D", "2e5 shear 8e4", "shear", "shear 0", "1e4 shear 1e4, 2e4",
 );
 
 export const garbageText: fc.Arbitrary<string> = fc.oneof(fc.string({ maxLength: 12 }), fc.string({ unit: "binary", maxLength: 6 }));
@@ -203,13 +204,14 @@ export function stiffnessArg(p: Plan, noisy = true): fc.Arbitrary<unknown> {
       { weight: 3, arbitrary: fc.constant(null) },
       { weight: 3, arbitrary: ei.map((v) => [[v]]) },
       { weight: 3, arbitrary: fc.array(ei, { minLength: n, maxLength: n }).chain(listArg) },
+      { weight: 1, arbitrary: fc.tuple(ei, fc.double({ min: 1, max: 1e6, noNaN: true })).map(([v, ga]) => [[`${String(v)} shear ${ga}`]]) },
     ],
     [{ weight: 1, arbitrary: anyArg() }],
   );
 }
 
 export function loadKind(noisy = true): fc.Arbitrary<unknown> {
-  return mix<unknown>(noisy, [{ weight: 8, arbitrary: fc.constantFrom<unknown>("point", "moment", "udl", "linear", "Point", "UDL", " linear ") }], [{ weight: 1, arbitrary: anyCell }]);
+  return mix<unknown>(noisy, [{ weight: 8, arbitrary: fc.constantFrom<unknown>("point", "moment", "udl", "linear", "Point", "UDL", " linear ") }], [{ weight: 1, arbitrary: anyCell }, { weight: 1, arbitrary: fc.constant<unknown>("settle") }]);
 }
 
 export function magnitude(noisy = true): fc.Arbitrary<unknown> {

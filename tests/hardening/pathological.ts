@@ -21,6 +21,9 @@ export const CASES: Case[] = [
   ["number reader: digits, a point, then a letter", (n) => grown(n, "1.", "1", "x"), (t) => numberFromText(t)],
   ["spans text cell: one long bad number", (n) => grown(n, "", "9", "!"), (t) => fx.reactions([[t]], [["udl 1"]])],
   ["load notation: a long bad magnitude", (n) => grown(n, "udl ", "2", "q"), (t) => fx.reactions([[6]], [[t]])],
+  ["load notation: a long bad settlement", (n) => grown(n, "settle ", "2", "q"), (t) => fx.reactions([[6]], [[t]])],
+  ["EI text cell: many spans with shear, then a bad one", (n) => grown(n, "", "2e5 shear 8e4 ", "shear"), (t) => fx.reactions([["6"]], [["udl 1"]], null as never, [[t]])],
+  ["EI text cell: a long bad shear stiffness", (n) => grown(n, "2e5 shear ", "8", "x"), (t) => fx.reactions([["6"]], [["udl 1"]], null as never, [[t]])],
   ["combination term: spaces after the factor", (n) => grown(n, "1.2", " ", "!"), (t) => parseCombination(t)],
   ["combination term: digits then a bad character", (n) => grown(n, "", "1", "!"), (t) => parseCombination(t)],
   ["combination: many distinct terms then a bad one", (n) => {

@@ -1,4 +1,5 @@
-import { errorCodeOf, isBlank, isEmpty, numberFromText, readNumber, readText, show } from "../../src/sheet/cells";
+import * as fc from "fast-check";
+import { decimalValue, errorCodeOf, isBlank, isEmpty, NUMBER_TEXT, numberFromText, readNumber, readText, show } from "../../src/sheet/cells";
 
 const where = () => "load row 2, column 3 (x start)";
 
@@ -57,6 +58,41 @@ describe("numbers stored as text", () => {
     ["--1", null],
   ])("%p -> %p", (text, value) => {
     expect(numberFromText(text)).toBe(value);
+  });
+});
+
+/** The definition the fast reader must match: the plain-decimal pattern, then Number() (correctly rounded), finite. */
+function byDefinition(text: string): number | null {
+  const trimmed = text.trim();
+  if (!NUMBER_TEXT.test(trimmed)) return null;
+  const value = Number(trimmed);
+  return Number.isFinite(value) ? value : null;
+}
+
+describe("numberFromText reads without building strings, and equals the pattern and Number() bit for bit", () => {
+  test.each([
+    "0", "-0", "+0", "-0.0", "0.", ".0", "00012.5000", "0.1", "0.3", "-7.45", "123456789012345", "1234567890123456", "12345678901234567890",
+    "9007199254740993", "0.000000000000000000001", "1e22", "1e23", "1.5e-22", "4.9e-324", "2e-324", "1.7976931348623157e308", "1.8e308",
+    "1e-400", "0e99999999", "5e+3", "5E-3", ".", "+", "-", "e5", "1e", "1e+", "1.2.3", "1..2", " 1 ", "\u00a02\u00a0", "\ufeff3", "1 2", "",
+    "1_000", "٣", "12345.678901234567", "0.1234567890123456789", "3.14159265358979323846", "8.25", "2.50",
+  ])("%p", (text) => {
+    expect(Object.is(numberFromText(text), byDefinition(text))).toBe(true);
+  });
+
+  test("random decimals of every length and exponent agree with the definition", () => {
+    const digits = fc.stringMatching(/^[0-9]{0,22}$/);
+    const text = fc
+      .tuple(fc.constantFrom("", "+", "-"), digits, fc.constantFrom("", "."), digits, fc.constantFrom("", "e", "E"), fc.constantFrom("", "+", "-"), fc.integer({ min: 0, max: 330 }))
+      .map(([sign, whole, point, fraction, e, eSign, exponent]) => `${sign}${whole}${point}${fraction}${e ? `${e}${eSign}${exponent}` : ""}`);
+    fc.assert(
+      fc.property(text, (t) => Object.is(numberFromText(t), byDefinition(t))),
+      { numRuns: 20000, seed: 15 },
+    );
+  });
+
+  test("a slice of a longer text reads as the slice alone", () => {
+    expect(decimalValue("at 2.75;", 3, 7)).toBe(2.75);
+    expect(Number.isNaN(decimalValue("at 2.75;", 3, 8))).toBe(true);
   });
 });
 

@@ -1,4 +1,4 @@
-import { MAX_SPANS, readSpans, readStiffness } from "../../src/sheet/lists";
+import { readFlexure, MAX_SPANS, readSpans, readStiffness } from "../../src/sheet/lists";
 
 describe("readSpans", () => {
   test.each([
@@ -64,5 +64,38 @@ describe("readStiffness", () => {
     ["negative", [[-5]], 1, /EI entry 1: EI must be positive, got -5/],
   ])("%s is an error", (_label, arg, spans, message) => {
     expect(() => readStiffness(arg, spans)).toThrow(message);
+  });
+});
+
+describe("readFlexure: EI with the shear stiffness G·A_v after the word shear", () => {
+  test.each([
+    ["no shear: as readStiffness", [["1e4 2e4"]], 2, { stiffness: [10000, 20000], shear: null }],
+    ["one text cell for the member", "2.1e5 shear 8e4", 3, { stiffness: [210000, 210000, 210000], shear: [80000, 80000, 80000] }],
+    ["one text cell per span, shear on the first only", [["2e5 SHEAR 8e4, 3e5"]], 2, { stiffness: [200000, 300000], shear: [80000, null] }],
+    ["a range: one cell with shear, one plain number", [["2e5 shear 7e4", 3e5]], 2, { stiffness: [200000, 300000], shear: [70000, null] }],
+    ["a range, each cell with shear", [["2e5 shear 7e4", "3e5 shear 9e4"]], 2, { stiffness: [200000, 300000], shear: [70000, 90000] }],
+    ["a range wider than the one span", [["2e5 shear 7e4", "", 0]], 1, { stiffness: [200000], shear: [70000] }],
+    ["omitted", null, 2, { stiffness: null, shear: null }],
+  ])("%s", (_label, arg, spans, expected) => {
+    expect(readFlexure(arg, spans)).toEqual(expected);
+  });
+
+  test.each([
+    ["shear without a value", "2e5 shear", 1, /^EI entry 1: shear must be followed by a positive shear stiffness G·A_v \(force units\), got ""$/],
+    ["shear of 0", "2e5 shear 0", 1, /^EI entry 1: shear must be followed by a positive shear stiffness G·A_v \(force units\), got "0"$/],
+    ["shear negative", [["2e5 shear -3"]], 1, /got "-3"$/],
+    ["shear text", "2e5 shear lots", 1, /got "lots"$/],
+    ["shear first", "shear 8e4", 1, /^EI entry 1: "shear" must follow an EI value, as in 2.1e5 shear 8e4/],
+    ["shear twice", "2e5 shear 8e4 shear 9e4", 1, /^EI entry 1: "shear" must follow an EI value/],
+    ["two EI values in one range cell", [["2e5 3e5 shear 8e4", 1]], 2, /^EI entry 1: "2e5 3e5 shear 8e4" is not one EI; write EI or EI shear G·A_v in each cell$/],
+    ["a shear entry counted wrongly", "2e5 shear 8e4 3e5 4e5", 2, /EI: give one value for the member or one per span \(2\), got 3/],
+    ["EI of 0 with shear", "0 shear 8e4", 1, /EI entry 1: EI must be positive, got 0/],
+  ])("%s is an error", (_label, arg, spans, message) => {
+    expect(() => readFlexure(arg, spans)).toThrow(message);
+  });
+
+  test("2,000 spans, each with its shear stiffness, in one text cell", () => {
+    const text = "2e5 shear 8e4 ".repeat(2000);
+    expect(readFlexure(text, 2000).shear).toHaveLength(2000);
   });
 });

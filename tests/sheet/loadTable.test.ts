@@ -36,7 +36,7 @@ describe("readLoadTable: rows as the host delivers them", () => {
 
 describe("readLoadTable: errors name the row and column", () => {
   test.each([
-    ["unknown type", [["", "", ""], ["pont", 10, 3]], /^load row 2, column 1 \(type\): "pont" is not a load type; use point, moment, udl or linear$/],
+    ["unknown type", [["", "", ""], ["pont", 10, 3]], /^load row 2, column 1 \(type\): "pont" is not a load type; use point, moment, udl, linear or settle$/],
     [
       "more than 10,000 loads (blank rows do not count)",
       [["", "", ""], ...Array.from({ length: 10001 }, () => ["point", 1, 2])],
@@ -52,6 +52,8 @@ describe("readLoadTable: errors name the row and column", () => {
     ["text x end", [["udl", 1, 0, "end"]], /load row 1, column 4 \(x end\): "end" is not a number/],
     ["x end on a point load", [["point", 1, 2, 4]], /load row 1, column 4 \(x end\): 4 given, but a point load acts at x start only; leave it blank/],
     ["x end on a couple", [["moment", 1, 2, 4]], /load row 1, column 4 \(x end\): 4 given, but a couple acts at x start only/],
+    ["x end on a settlement", [["settle", 0.01, 6, 8]], /^load row 1, column 4 \(x end\): 8 given, but a settlement acts at x start only; leave it blank$/],
+    ["end magnitude on a settlement", [["settle", 0.01, 6, "", 2]], /^load row 1, column 5 \(magnitude at end\): 2 given, but only a linear load has a magnitude at end; leave it blank$/],
     ["end magnitude on a udl", [["udl", 1, 0, 4, 2]], /load row 1, column 5 \(magnitude at end\): 2 given, but only a linear load has a magnitude at end/],
     ["end magnitude on a point", [["point", 1, 0, "", 2]], /load row 1, column 5 \(magnitude at end\)/],
     ["error in an unused column", [["point", 1, 0, "#N/A"]], /load row 1, column 4 \(x end\): the cell holds the error #N\/A/],

@@ -151,3 +151,30 @@ describe("the units path keeps nodes as nodes: the member is solved in its own l
     expect(withUnits.nodeX).toEqual([0, 12, 20]);
   });
 });
+
+describe("settlement and shear stiffness under units", () => {
+  const m: Member = {
+    spans: [6, 6],
+    supports: [{ kind: "pin" }, { kind: "pin" }, { kind: "pin" }],
+    stiffness: [1e4, 1e4],
+    shear: [2e3, null],
+    loads: [{ kind: "settle", magnitude: 10, xStart: 6, xEnd: 6, magnitudeEnd: 0, loadCase: "SD", row: 1 }],
+  };
+
+  test("memberInSI: Δ from the deflection unit (mm) to m, G·A_v from kN to N", () => {
+    const si = memberInSI(m, readMemberUnits("length=m, force=kN, deflection=mm")!);
+    expect(si.loads[0].magnitude).toBeCloseTo(0.01, 15);
+    expect(si.shear).toEqual([2e6, null]);
+  });
+
+  test("memberInOwnUnits: Δ from the deflection unit (in) to the length unit (ft); G·A_v stays in the force unit", () => {
+    const own = memberInOwnUnits(m, readMemberUnits("length=ft, force=kip, deflection=in")!);
+    expect(own.loads[0].magnitude).toBeCloseTo(10 / 12, 14);
+    expect(own.shear).toEqual([2e3, null]);
+  });
+
+  test("without a settlement, memberInOwnUnits keeps the loads as given", () => {
+    const plain = { ...m, loads: [] };
+    expect(memberInOwnUnits(plain, readMemberUnits("length=ft, force=kip, deflection=in")!).loads).toBe(plain.loads);
+  });
+});

@@ -87,7 +87,7 @@ export function drawDiagrams(input: DrawInput, rows = diagram(input.solution, dr
     .join("");
   const axis = axisSvg(layout, u.x, c);
   const title = `<text x="${layout.left}" y="12" fill="${c.muted}" font-size="10">${escapeXml(input.subtitle ?? "")}</text>`;
-  const sketch = sketchSvg(member, layout, { force: u.shear, intensity: u.intensity, moment: u.moment }, c);
+  const sketch = sketchSvg(member, layout, { force: u.shear, intensity: u.intensity, moment: u.moment, length: u.x }, c);
   const svg =
     `<svg xmlns="http://www.w3.org/2000/svg" class="spanwise-diagram" width="${layout.width}" height="${layout.height}" viewBox="0 0 ${layout.width} ${layout.height}" font-family="system-ui, sans-serif" data-theme="${input.theme}">` +
     `<rect width="100%" height="100%" fill="${c.background}"/>` +

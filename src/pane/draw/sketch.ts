@@ -1,6 +1,7 @@
 /**
  * The loading sketch: the beam, its supports and hinges, and its loads — point forces and
- * couples with their values, distributed loads drawn to one scale of intensity. SVG text. Pure.
+ * couples with their values, distributed loads drawn to one scale of intensity, settlements as
+ * a dashed arrow beside their support. SVG text. Pure.
  */
 import type { Load, Member, Support } from "../../core";
 import { escapeXml, formatValue } from "./format";
@@ -12,6 +13,8 @@ export interface SketchUnits {
   force: string;
   intensity: string;
   moment: string;
+  /** The length unit, for a settlement (the pane's member holds it in the length unit). */
+  length?: string;
 }
 
 const f = (n: number): string => (Math.round(n * 10) / 10).toString();
@@ -121,6 +124,18 @@ export function sketchSvg(member: Member, layout: Layout, units: SketchUnits, c:
     parts.push(
       `<g class="load couple" data-m="${load.magnitude}"><path d="M${f(sx)},${f(y)} A${r},${r} 0 0 ${clockwise ? 1 : 0} ${f(ex)},${f(y)} ${head}" stroke="${c.load}" stroke-width="1.6" fill="none"/>` +
         label(px, y + 30, formatValue(load.magnitude) + (units.moment ? ` ${units.moment}` : "") + caseSuffix(load), c, anchorAt(px, layout)) +
+        `</g>`,
+    );
+  }
+
+  // A settlement: a short arrow below its support, down for a support that sinks.
+  for (const load of member.loads.filter((l) => l.kind === "settle")) {
+    const px = x(load.xStart) + 14;
+    const down = load.magnitude >= 0;
+    const path = down ? `M${f(px)},${f(y + 6)} V${f(y + 22)} m-3,-5 l3,5 l3,-5` : `M${f(px)},${f(y + 22)} V${f(y + 6)} m-3,5 l3,-5 l3,5`;
+    parts.push(
+      `<g class="load settlement" data-d="${load.magnitude}"><path d="${path}" stroke="${c.load}" stroke-width="1.4" fill="none" stroke-dasharray="3,2"/>` +
+        label(px + 3, y + 34, `settles ${formatValue(load.magnitude)}` + (units.length ? ` ${units.length}` : "") + caseSuffix(load), c, anchorAt(px, layout)) +
         `</g>`,
     );
   }

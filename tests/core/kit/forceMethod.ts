@@ -7,6 +7,11 @@
  * two equilibrium conditions past the right end, zero deflection (and slope) at supports,
  * spring compatibility (vertical, and rotational: moment = k x rotation) and zero moment at hinges. Every quantity is an affine function of the
  * unknowns, integrated exactly span by span (EI is constant within a span).
+ *
+ * Shear deformation (member.shear, G·A_v per span): the deflection adds the integral of V/(G·A_v)
+ * (Timoshenko: slope is the rotation of the section, d(deflection)/dx = slope + V/(G·A_v)).
+ * Settlement (settle loads): the deflection condition at a pin or fixed node becomes w = Δ,
+ * at a spring w - R/k = Δ (the spring's base settles).
  */
 import { Matrix, SingularValueDecomposition } from "ml-matrix";
 import type { Member, Quantity, Support } from "../../../src/core";
@@ -68,6 +73,13 @@ export function forceMethodSolve(member: Member): ForceMethodSolution {
   for (const span of member.spans) nodeX.push(nodeX[nodeX.length - 1] + span);
   const length = nodeX[nodeX.length - 1];
   const flexibility = member.spans.map((_, i) => 1 / (member.stiffness ? member.stiffness[i] : 1));
+  const shearGiven = member.shear ?? null;
+  const shearFlexibility = member.spans.map((_, i) => {
+    const ga = shearGiven === null ? null : shearGiven.length === 1 ? shearGiven[0] : shearGiven[i];
+    return ga === null || ga === undefined ? 0 : 1 / ga;
+  });
+  const settlementAt = (x: number): number =>
+    member.loads.reduce((sum, l) => (l.kind === "settle" && Math.abs(l.xStart - x) <= 1e-9 * Math.max(1, x) ? sum + l.magnitude : sum), 0);
 
   const forceIndex: (number | null)[] = [];
   const momentIndex: (number | null)[] = [];
@@ -106,6 +118,7 @@ export function forceMethodSolve(member: Member): ForceMethodSolution {
     if (m !== null) terms.push({ at: nodeX[i], power: 0, coefficient: unit(m, -1) });
   });
   for (const load of member.loads) {
+    if (load.kind === "settle") continue;
     if (load.kind === "point") terms.push({ at: load.xStart, power: 1, coefficient: constant(-load.magnitude) });
     else if (load.kind === "moment") terms.push({ at: load.xStart, power: 0, coefficient: constant(load.magnitude) });
     else {
@@ -140,9 +153,15 @@ export function forceMethodSolve(member: Member): ForceMethodSolution {
   let deflection = unit(deflectionIndex);
   const slopeIn = (span: number, start: Affine, x: number): Affine =>
     terms.reduce((acc, t) => add(acc, t.coefficient, -flexibility[span] * integral1(nodeX[span], x, t.at, t.power)), start);
+  // The shear part: the integral of V = sum of power * c * <t-a>^(power-1) over [node, x], over G·A_v.
   const deflectionIn = (span: number, startSlope: Affine, startDeflection: Affine, x: number): Affine =>
     terms.reduce(
-      (acc, t) => add(acc, t.coefficient, -flexibility[span] * integral2(nodeX[span], x, t.at, t.power)),
+      (acc, t) =>
+        add(
+          acc,
+          t.coefficient,
+          -flexibility[span] * integral2(nodeX[span], x, t.at, t.power) + (t.power >= 1 ? shearFlexibility[span] * t.power * integral1(nodeX[span], x, t.at, t.power - 1) : 0),
+        ),
       add(startDeflection, startSlope, x - nodeX[span]),
     );
   for (let span = 0; span < member.spans.length; span++) {
@@ -175,12 +194,13 @@ export function forceMethodSolve(member: Member): ForceMethodSolution {
   const equations: Affine[] = [shearAt(length, true), momentAt(length, true)];
   member.supports.forEach((support, i) => {
     const x = nodeX[i];
-    if (support.kind === "pin" || support.kind === "fixed") equations.push(deflectionAt(x, "left"));
+    const settled = settlementAt(x);
+    if (support.kind === "pin" || support.kind === "fixed") equations.push(add(deflectionAt(x, "left"), constant(-settled)));
     if (support.kind === "fixed") {
       equations.push(slopeAt(x, i === 0 ? "right" : "left"));
     }
     if (support.kind === "spring") {
-      equations.push(add(deflectionAt(x, "left"), unit(forceIndex[i] as number), -1 / support.stiffness));
+      equations.push(add(add(deflectionAt(x, "left"), unit(forceIndex[i] as number), -1 / support.stiffness), constant(-settled)));
     }
     const k = rotationalOf(support);
     // A rotational spring's reaction moment (counter-clockwise +) is k times the node's rotation.

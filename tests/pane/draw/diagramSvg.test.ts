@@ -83,6 +83,16 @@ describe("drawDiagrams", () => {
     expect(bands[1].h1 / bands[0].h0).toBeCloseTo(4 / 5, 1);
   });
 
+  it("marks a settlement beside its support, with its value, unit and case; the deflection panel reaches it", () => {
+    const settled = readMember({ spans: "6 6", loads: "udl 2 D; settle 0.01 at 6 SD", supports: null, EI: [[24000]], combo: null });
+    const d = drawDiagrams({ member: settled, solution: solve(settled), units, theme: "light", width: 360 });
+    expect(d.svg.match(/class="load settlement" data-d="0.01"/g)).toHaveLength(1);
+    expect(d.svg).toContain(`settles ${formatValue(0.01)} m SD`);
+    expect(d.svg.match(/class="load distributed"/g)).toHaveLength(1);
+    const lift = readMember({ spans: "6 6", loads: "settle -0.01 at 6", supports: null, EI: [[24000]], combo: null });
+    expect(drawDiagrams({ member: lift, solution: solve(lift), units, theme: "light", width: 360 }).svg).toContain('class="load settlement" data-d="-0.01"');
+  });
+
   it("leaves out deflection without EI and the dark theme changes colours", () => {
     const noEI = readMember({ spans: "6", loads: "udl 2", supports: null, EI: null, combo: null });
     const dark = drawDiagrams({ member: noEI, solution: solve(noEI), units, theme: "dark", width: 320 });
