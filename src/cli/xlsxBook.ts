@@ -172,9 +172,10 @@ function cellInput(cell: XmlCell, strings: readonly string[], where: () => strin
   if (v === undefined) return null;
   switch (type) {
     case "s": {
+      // The shared strings are made engine text once (readBook), not once per cell.
       const text = strings[Number(v)];
       if (text === undefined) throw new BookError(`${where()}: shared string ${v} does not exist`);
-      return textInput(text);
+      return text;
     }
     case "str":
       return textInput(v);
@@ -190,9 +191,23 @@ function cellInput(cell: XmlCell, strings: readonly string[], where: () => strin
   }
 }
 
-/** Text that would read as a formula is kept as text (as the host keeps it). */
-function textInput(text: string): string {
-  return text.startsWith("=") ? `'${text}` : text;
+/**
+ * Raw text the formula engine would not keep as text: a formula ("="), a leading apostrophe
+ * (dropped), a number ("123", " 42 ", "1e3", "-5", ".5", "12%", "$12", "12$"), a truth value
+ * ("TRUE"), an error ("#N/A"). A wider net than the engine's own reading (text starting with
+ * a digit, a sign, ".", "$" or "#"): an apostrophe too many costs nothing, one too few turns
+ * text into a number. Checked against the engine over every 1-3 piece combination of digits,
+ * signs, "." "," "%" "$" "e" "#N/A" "TRUE" "=" "'" and spaces (none missed).
+ */
+const READ_AS_OTHER = /^(?:['=#]|\s*[-+.$\d]|\s*(?:true|false)\s*$)/i;
+
+/**
+ * A text cell as the engine must take it to keep it text, as the host keeps it (a text cell
+ * is text: ISTEXT TRUE, handed to functions as text): behind an apostrophe, which the engine
+ * reads as "the rest is text" and drops.
+ */
+export function textInput(text: string): string {
+  return READ_AS_OTHER.test(text) ? `'${text}` : text;
 }
 
 /** Reads a package; throws BookError (or PackageError) saying why it cannot be used. */
@@ -200,7 +215,7 @@ export async function readBook(bytes: Uint8Array): Promise<LoadedBook> {
   const pkg = await XlsxPackage.open(bytes);
   const parts = pkg.sheets();
   if (parts.length === 0) throw new BookError("it holds no worksheets");
-  const strings = await pkg.sharedStrings();
+  const strings = (await pkg.sharedStrings()).map(textInput);
   const dynamic = await pkg.dynamicArrayIndexes();
   const sheets: SheetBook[] = [];
   const inputs: SheetInput[] = [];

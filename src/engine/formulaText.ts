@@ -87,3 +87,16 @@ export function hasSpillReference(text: string): boolean {
 export function expandSpillReferences(text: string, resolve: (reference: SpillReference, written: string) => string): string {
   return mapCode(text, (code) => code.replace(SPILL, (_whole, before: string, reference: string) => before + resolve(parseReference(reference), reference)));
 }
+
+/**
+ * The reference of a formula that is one spilled-range reference and nothing else (`=A1#`,
+ * `= Sheet2!$B$3# `), else undefined. Such a formula returns the whole spilled array, which
+ * spills in its turn (Microsoft support, "Spilled range operator": `A2#` is the range A2's
+ * formula spills into; Microsoft Learn, "Handle dynamic arrays and spilling using the Excel
+ * JavaScript API": a formula `=A4:D4` spills), where a bare range in the formula engine is
+ * "Cell range not allowed".
+ */
+export function soleSpillReference(formula: string): string | undefined {
+  const match = new RegExp(String.raw`^=\s*(${REFERENCE})#\s*$`).exec(formula);
+  return match ? match[1] : undefined;
+}

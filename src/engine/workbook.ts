@@ -9,14 +9,16 @@
  *   rewritten again whenever that spill changes size.
  * Both repeat until nothing changes (a few passes at most).
  */
-import { DetailedCellError, HyperFormula } from "hyperformula";
+import { DetailedCellError, ErrorType, HyperFormula } from "hyperformula";
 import type { SpanFunctions } from "./catalogue";
 import { cellKey, attachContext, buildingWith, type CellAddress, type EngineContext } from "./learnedSizes";
-import { columnLetters, expandSpillReferences, hasSpillReference, mapCode, normalizeFormula } from "./formulaText";
+import { columnLetters, expandSpillReferences, hasSpillReference, mapCode, normalizeFormula, parseReference, soleSpillReference, type SpillReference } from "./formulaText";
 import type { BlockSize } from "./resultSize";
 import { formulaAfterRows } from "./references";
 import { registerSpanPlugin } from "./spanPlugin";
 import { registerSinglePlugin } from "./singlePlugin";
+import { arrayError, patchErroredArrayRanges } from "./erroredArrays";
+import { anchorArrayText, registerAnchorArrayPlugin } from "./anchorArray";
 import { SPAN_EXPORTS } from "./spanFunctions";
 
 /** What a cell holds as typed: text starting with "=" is a formula. */
@@ -87,6 +89,8 @@ export class SpanWorkbook {
   constructor(sheets: readonly SheetInput[], options: WorkbookOptions = {}) {
     registerSpanPlugin();
     registerSinglePlugin();
+    registerAnchorArrayPlugin();
+    patchErroredArrayRanges();
     for (const sheet of sheets) {
       const widest = sheet.cells.reduce((most, row) => Math.max(most, row?.length ?? 0), 0);
       if (sheet.cells.length > SHEET_LIMITS.rows || widest > SHEET_LIMITS.cols) {
@@ -149,7 +153,9 @@ export class SpanWorkbook {
 
   private textAt(address: CellAddress): string | undefined {
     const input = this.building ? this.building[address.sheet]?.cells[address.row]?.[address.col] : this.valueAt(address);
-    return typeof input === "string" && !input.startsWith("=") ? input : undefined;
+    if (typeof input !== "string" || input.startsWith("=")) return undefined;
+    // An input behind an apostrophe is the text after it (how a saved text cell is read in, xlsxBook.ts).
+    return this.building && input.startsWith("'") ? input.slice(1) : input;
   }
 
   private valueAt(address: CellAddress): unknown {
@@ -204,6 +210,7 @@ export class SpanWorkbook {
         ? this.hf.setCellContents({ sheet, row: top, col: left }, prepared as never)
         : this.hf.batch(() => prepared.forEach((row, r) => row.length > 0 && this.hf.setCellContents({ sheet, row: top + r, col: left }, [row] as never)));
     if (changed) collect(changes, changed);
+    this.retryBlocked(changed);
     this.settle(changed);
   }
 
@@ -237,7 +244,29 @@ export class SpanWorkbook {
       const text = formulaAfterRows(entry.text, name, entry.address.sheet === sheet, at, count, SHEET_LIMITS);
       this.typed.set(cellKey(address), { address, text, engineText: this.hf.getCellFormula(address) ?? "" });
     }
+    this.retryBlocked();
     this.settle();
+  }
+
+  /**
+   * Sets every array formula whose spill is blocked (`#SPILL!`) again, so that it spills once
+   * the cells in its way are cleared, as in the spreadsheet. The engine tries a blocked array
+   * again only when one of its own inputs changes, not when its area is freed (HyperFormula
+   * issue #1287, "Setting a null value in the ARRAYFORMULA expansion area does not update the
+   * NoSpaceForArrayResult error", open). Cheap: an array with no space is not evaluated.
+   */
+  private retryBlocked(changed?: CellAddress[]): void {
+    const arrays = (this.hf.dependencyGraph as unknown as { arrayMapping?: { arrayMapping?: Map<string, { array?: unknown; cellAddress?: CellAddress }> } }).arrayMapping?.arrayMapping;
+    if (!arrays) return;
+    const blocked: { address: CellAddress; formula: string }[] = [];
+    for (const vertex of arrays.values()) {
+      if (arrayError(vertex.array)?.type !== ErrorType.SPILL || !vertex.cellAddress) continue;
+      const formula = this.hf.getCellFormula(vertex.cellAddress);
+      if (formula !== undefined) blocked.push({ address: { ...vertex.cellAddress }, formula });
+    }
+    if (blocked.length === 0) return;
+    const changes = this.hf.batch(() => blocked.forEach(({ address, formula }) => this.hf.setCellContents(address, [[formula]])));
+    if (changed) collect(changes, changed);
   }
 
   setCell(sheet: number, row: number, col: number, input: CellInput): void {
@@ -338,6 +367,7 @@ export class SpanWorkbook {
     if (cells.length === 0) return;
     const prepared = cells.map(([row, col, input]) => [row, col, this.prepare({ sheet, row, col }, input)] as const);
     this.hf.batch(() => prepared.forEach(([row, col, input]) => this.hf.setCellContents({ sheet, row, col }, [[input]] as never)));
+    this.retryBlocked();
     this.settle();
   }
 
@@ -377,14 +407,41 @@ export class SpanWorkbook {
     return engineText;
   }
 
-  /** The typed formula as the engine takes it: saved forms normalized, `A1#` resolved. */
+  /**
+   * The typed formula as the engine takes it: saved forms normalized, `A1#` resolved. A formula
+   * that is `=A1#` alone becomes the array `={A1:C4}`, so it spills as the host's does.
+   */
   private engineText(address: CellAddress, formula: string): string {
-    return expandSpillReferences(normalizeFormula(formula), (reference, written) => {
-      const sheet = reference.sheetName === undefined ? address.sheet : this.hf?.getSheetId(reference.sheetName);
-      const size = sheet === undefined ? undefined : this.spillSize(sheet, reference.row, reference.col);
-      if (!size) return "#REF!";
-      return `${written}:${columnLetters(reference.col + size.cols - 1)}${reference.row + size.rows}`;
-    });
+    const normalized = normalizeFormula(formula);
+    const sole = soleSpillReference(normalized);
+    if (sole !== undefined) {
+      const target = this.spillTarget(address, parseReference(sole), sole);
+      return target.range ? `={${target.range}}` : `=${target.text}`;
+    }
+    return expandSpillReferences(normalized, (reference, written) => this.spillTarget(address, reference, written).text);
+  }
+
+  /**
+   * What `written#` stands for now: the range its anchor's array covers, or — no array spills
+   * there — ANCHORARRAY, which gives the failed array formula's error or #REF! (anchorArray.ts).
+   */
+  private spillTarget(address: CellAddress, reference: SpillReference, written: string): { text: string; range?: string } {
+    const sheet = reference.sheetName === undefined ? address.sheet : this.hf?.getSheetId(reference.sheetName);
+    if (sheet === undefined) return { text: anchorArrayText(written, false) };
+    const array = this.arrayAt(sheet, reference.row, reference.col);
+    if (!array || array.error) return { text: anchorArrayText(written, array !== undefined) };
+    const range = `${written}:${columnLetters(reference.col + array.size.cols - 1)}${reference.row + array.size.rows}`;
+    return { text: range, range };
+  }
+
+  /** The array formula anchored at a cell: its size, and whether it failed (blocked spill, error result). */
+  private arrayAt(sheet: number, row: number, col: number): { size: BlockSize; error: boolean } | undefined {
+    // While the engine is being built nothing has spilled yet (settle() resolves A1# after).
+    if (this.hf === undefined) return undefined;
+    const size = this.spillSize(sheet, row, col);
+    if (!size) return undefined;
+    const vertex = (this.hf.dependencyGraph as unknown as { getCell(a: CellAddress): unknown }).getCell({ sheet, row, col }) as { array?: unknown };
+    return { size, error: arrayError(vertex.array) !== undefined };
   }
 
   private settle(changed?: CellAddress[]): void {

@@ -110,6 +110,34 @@ describe("workbench page", () => {
     expect(await page.evaluate(() => window.spanwiseWorkbench.getFormula("Study!H13"))).toBe("=SUM(H12#)");
   });
 
+  it("spills a formula that is a # reference alone, and shows #SPILL! for a range over a blocked anchor until it is cleared", async () => {
+    // Microsoft support, "Spilled range operator" (A2# is A2's whole spill) and Microsoft Learn,
+    // "Handle dynamic arrays and spilling using the Excel JavaScript API" (=A4:D4 spills).
+    const problems: string[] = [];
+    const onError = (error: Error) => problems.push(error.message);
+    page.on("pageerror", onError);
+    await typeInto(page, "H17", "=H12#");
+    const expected = direct(() => shear([["5 5"]], [["udl 2.5 D; point 10 at 3 L"]], [[0, 2.5, 5, 7.5, 10]]));
+    expect(await shown(page, 16, 7, 1, 5)).toEqual(expected);
+    expect(await page.evaluate(() => window.spanwiseWorkbench.getFormula("Study!H17"))).toBe("=H12#");
+
+    // H5 spills REACTIONS of "5 5" into H5:J7; a value in I6 blocks it.
+    await typeInto(page, "I6", "in the way");
+    await typeInto(page, "H19", "=H5:H5");
+    await typeInto(page, "I19", "=ROWS(H5#)");
+    for (const address of ["H5", "H19", "I19"]) expect(await page.textContent(`td[data-address="${address}"]`)).toBe("#SPILL!");
+    await page.click('td[data-address="H19"]');
+    expect(await page.textContent("#status")).toContain("No space for array result");
+
+    await page.click('td[data-address="I6"]');
+    await page.keyboard.press("Delete");
+    const table = direct(() => reactions([["5 5"]], [["udl 2.5 D; point 10 at 3 L"]]));
+    expect(await shown(page, 4, 7, 3, 3)).toEqual(table);
+    expect(await shown(page, 18, 7, 1, 2)).toEqual([[table[0][0], 3]]);
+    page.off("pageerror", onError);
+    expect(problems).toEqual([]);
+  });
+
   it("shows an error with its message in the status line", async () => {
     await typeInto(page, "H15", "=SPAN.MOMENT(H3,I3,40)");
     const expected = direct(() => moment([["5 5"]], [["udl 2.5 D; point 10 at 3 L"]], [[40]]))[0][0] as { error: string; message: string };
