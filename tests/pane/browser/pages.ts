@@ -7,7 +7,7 @@ import fs from "fs";
 import http from "http";
 import path from "path";
 import webpack from "webpack";
-import { chromium, type BrowserContext } from "playwright-core";
+import { chromium, type BrowserContext, type Frame, type Page } from "playwright-core";
 
 export const ROOT = path.resolve(__dirname, "..", "..", "..");
 export const ARTIFACTS = path.join(ROOT, "test-artifacts");
@@ -63,4 +63,42 @@ export async function openBrowser(name: string): Promise<BrowserContext> {
     viewport: { width: 1280, height: 900 },
     args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
   });
+}
+
+/** The pane page with the workbench in its frame, as the browser tests drive it. */
+export interface PaneOnWorkbench {
+  context: BrowserContext;
+  server: { url: string; close(): Promise<void> };
+  page: Page;
+  bench: Frame;
+}
+
+/** Builds the pages, serves them, and opens the pane (with the workbench frame) ready to use. */
+export async function openPaneOnWorkbench(name: string): Promise<PaneOnWorkbench> {
+  fs.mkdirSync(ARTIFACTS, { recursive: true });
+  await buildPages();
+  const server = await serve(OUT);
+  const context = await openBrowser(name);
+  const page = await context.newPage();
+  page.on("pageerror", (error) => console.error("page error:", error.message));
+  await page.goto(`${server.url}/taskpane.html`);
+  await page.waitForSelector("body[data-pane-ready='true']", { timeout: 60000 });
+  const bench = page.frames().find((f) => f.url().endsWith("/workbench.html"));
+  if (!bench) throw new Error("the workbench frame is missing");
+  return { context, server, page, bench };
+}
+
+/** Runs `body` in the workbench frame with `api` = window.spanwiseWorkbench and `args`. */
+export async function inWorkbench<T>(bench: Frame, body: string, ...args: unknown[]): Promise<T> {
+  return bench.evaluate(([code, a]) => new Function("api", "args", code)((window as any).spanwiseWorkbench, a), [body, args] as const) as Promise<T>;
+}
+
+/** Clicks a sheet tab and a cell as a user would, then waits until the pane has followed. */
+export async function clickCellIn(page: Page, bench: Frame, sheet: string, address: string): Promise<void> {
+  await bench.locator("#tabs button", { hasText: sheet }).click();
+  // The grid keeps only the rows in view in the DOM: scroll to the cell first, as a user would.
+  await inWorkbench(bench, "api.reveal(args[0])", `${sheet}!${address}`);
+  const before = await page.$eval("#pane", (p) => Number((p as HTMLElement).dataset.refreshed ?? 0));
+  await bench.locator(`td[data-address="${address}"]`).dispatchEvent("mousedown");
+  await page.waitForFunction((b) => Number((document.querySelector("#pane") as HTMLElement).dataset.refreshed ?? 0) > b, before);
 }

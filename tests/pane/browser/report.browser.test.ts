@@ -14,7 +14,7 @@ import type { BrowserContext, Frame, Page } from "playwright-core";
 import { short } from "../../../src/report/describe";
 import { CAUTION } from "../../../src/report/meta";
 import { pdfTextLines } from "../../report/pdfText";
-import { ARTIFACTS, OUT, buildPages, openBrowser, serve } from "./pages";
+import { ARTIFACTS, clickCellIn, inWorkbench, openPaneOnWorkbench } from "./pages";
 
 jest.setTimeout(240000);
 
@@ -27,16 +27,11 @@ let page: Page;
 let bench: Frame;
 
 async function workbench<T>(body: string, ...args: unknown[]): Promise<T> {
-  return bench.evaluate(([code, a]) => new Function("api", "args", code)((window as any).spanwiseWorkbench, a), [body, args] as const) as Promise<T>;
+  return inWorkbench<T>(bench, body, ...args);
 }
 
 async function clickCell(sheet: string, address: string): Promise<void> {
-  await bench.locator("#tabs button", { hasText: sheet }).click();
-  // The grid keeps only the rows in view in the DOM: scroll to the cell first, as a user would.
-  await workbench("api.reveal(args[0])", `${sheet}!${address}`);
-  const before = await page.$eval("#pane", (p) => Number((p as HTMLElement).dataset.refreshed ?? 0));
-  await bench.locator(`td[data-address="${address}"]`).dispatchEvent("mousedown");
-  await page.waitForFunction((b) => Number((document.querySelector("#pane") as HTMLElement).dataset.refreshed ?? 0) > b, before);
+  await clickCellIn(page, bench, sheet, address);
 }
 
 /** Clicks a report button and returns the downloaded file's name and bytes. */
@@ -50,17 +45,7 @@ async function download(button: string): Promise<{ name: string; bytes: Buffer }
 }
 
 beforeAll(async () => {
-  fs.mkdirSync(ARTIFACTS, { recursive: true });
-  await buildPages();
-  server = await serve(OUT);
-  context = await openBrowser("report");
-  page = await context.newPage();
-  page.on("pageerror", (error) => console.error("page error:", error.message));
-  await page.goto(`${server.url}/taskpane.html`);
-  await page.waitForSelector("body[data-pane-ready='true']", { timeout: 60000 });
-  const frame = page.frames().find((f) => f.url().endsWith("/workbench.html"));
-  if (!frame) throw new Error("the workbench frame is missing");
-  bench = frame;
+  ({ context, server, page, bench } = await openPaneOnWorkbench("report"));
 });
 
 afterAll(async () => {
