@@ -15,10 +15,10 @@ import { chromium, type BrowserContext, type Page } from "playwright-core";
 import webpack from "webpack";
 import { reactions } from "../../functions/functions";
 import { createStaticServer, listen } from "../../src/cli/staticServer";
-import { evaluateBook, readBook, storeResults } from "../../src/cli/xlsxBook";
 import type { CellResult } from "../../src/engine";
 import { direct } from "../engine/support/direct";
-import { LOADS, SPANS, partsOf, smallBook } from "./support/smallBook";
+import { evaluateBook, readBook } from "../../src/cli/xlsxBook";
+import { LOADS, SPANS, calcOutput, partsOf, smallBook } from "./support/smallBook";
 
 const ROOT = path.resolve(__dirname, "..", "..");
 const OUT = path.join(ROOT, "test-artifacts", "files-dist");
@@ -37,14 +37,6 @@ function buildWorkbench(): Promise<void> {
       else resolve();
     }),
   );
-}
-
-async function calcOutput(bytes: Uint8Array): Promise<Uint8Array> {
-  const book = await readBook(bytes);
-  const evaluated = evaluateBook(book);
-  await storeResults(book, evaluated);
-  evaluated.destroy();
-  return book.pkg.bytes();
 }
 
 /** The A1 range of a block of `rows` x `cols` from a top-left cell (columns A to Z). */

@@ -8,23 +8,14 @@
 import fs from "fs";
 import path from "path";
 import { reactions } from "../../functions/functions";
-import { evaluateBook, readBook, storeResults } from "../../src/cli/xlsxBook";
 import type { CellResult, SpanWorkbook } from "../../src/engine";
 import { WorkbenchDocument } from "../../src/workbench/files/document";
 import { SaveError, saveXlsx } from "../../src/workbench/files/saveXlsx";
 import { direct } from "../engine/support/direct";
-import { LOADS, SPANS, partsOf, smallBook } from "./support/smallBook";
+import { evaluateBook, readBook } from "../../src/cli/xlsxBook";
+import { LOADS, SPANS, calcOutput, partsOf, smallBook } from "./support/smallBook";
 
 const DEMO = path.resolve(__dirname, "..", "..", "assets", "spanwise-demo.xlsx");
-
-/** What `spanwise calc` writes for these bytes (its reader, evaluator and writer, in process). */
-async function calcOutput(bytes: Uint8Array): Promise<Uint8Array> {
-  const book = await readBook(bytes);
-  const evaluated = evaluateBook(book);
-  await storeResults(book, evaluated);
-  evaluated.destroy();
-  return book.pkg.bytes();
-}
 
 /** Every value of every sheet. */
 function values(book: SpanWorkbook): Record<string, CellResult[][]> {

@@ -18,6 +18,7 @@ import { beam, couple, linear, nodesOf, point, scalesOf, udl, type SupportWord }
 import { exactForceMethodSolve, type ExactSolution } from "../reference/exactForceMethod";
 import type { Check } from "../compare";
 import type { HandbookCase } from "./case";
+import { seededRandom } from "../seededRandom";
 
 export const REFERENCE_SOURCE =
   "independent computation: the force method (reactions, hinge slope jumps and end slope and deflection as unknowns; equilibrium, support, spring and hinge conditions; loads as singularity functions integrated exactly) carried out in BigInt fixed point with about 190 decimal places (src/verify/reference/exactForceMethod.ts), the reference of the test suite's exact audit";
@@ -48,20 +49,8 @@ function named(): { name: string; member: Member }[] {
   ];
 }
 
-/** A small fixed generator (mulberry32), so the seeded members are the same on every machine. */
-function generator(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 function seeded(count: number, seed: number): { name: string; member: Member }[] {
-  const next = generator(seed);
+  const next = seededRandom(seed);
   const pick = <T>(xs: readonly T[]): T => xs[Math.floor(next() * xs.length)];
   const round = (v: number, step: number): number => Math.round(v / step) * step;
   const out: { name: string; member: Member }[] = [];

@@ -17,17 +17,8 @@ import { extremes, solve, valueAt, type Load, type Member, type Quantity, type S
 
 export const QUANTITIES: Quantity[] = ["shear", "moment", "slope", "deflection"];
 
-/** Mulberry32: a small seeded generator (public-domain algorithm), so the list never changes. */
-export function generator(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** The seeded generator (mulberry32) the verification cases use too, so the list never changes. */
+export { seededRandom as generator } from "../../../src/verify/seededRandom";
 
 const SPANS = [1, 1.5, 2, 2.5, 3, 3.75, 4, 5, 6, 6.25, 7.5, 8];
 

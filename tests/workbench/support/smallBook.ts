@@ -5,6 +5,7 @@
  * MS-XLSX), for the workbench's open and save tests. Styles: cell format 1 is bold with 0.000.
  */
 import JSZip from "jszip";
+import { evaluateBook, readBook, storeResults } from "../../../src/cli/xlsxBook";
 
 export const SPANS = "6 8 6";
 export const LOADS = "udl 2.5 D; point 10 at 3 L";
@@ -74,4 +75,13 @@ export async function partsOf(bytes: Uint8Array): Promise<Record<string, string>
   const out: Record<string, string> = {};
   for (const name of Object.keys(zip.files).sort()) if (!zip.files[name].dir) out[name] = await zip.files[name].async("string");
   return out;
+}
+
+/** What `spanwise calc` writes for these bytes (its reader, evaluator and writer, in process). */
+export async function calcOutput(bytes: Uint8Array): Promise<Uint8Array> {
+  const book = await readBook(bytes);
+  const evaluated = evaluateBook(book);
+  await storeResults(book, evaluated);
+  evaluated.destroy();
+  return book.pkg.bytes();
 }
