@@ -10,7 +10,7 @@ import { numberTexts } from "./format";
 import { anchorKey, paintCell, type PaintContext } from "./grid/cells";
 import { clipboardText, parseTsv, toTsv } from "./grid/clipboard";
 import { ColumnWidths, ROW_HEADER_WIDTH, TextMeasure } from "./grid/columns";
-import { filledBlock, fillDownSource, fillRightSource } from "./grid/fill";
+import { filledBlock, fillDownSource, fillRightSource, seriesBlock } from "./grid/fill";
 import { tableHint } from "./grid/headerHint";
 import { History, type BlockStep, type Step } from "./grid/history";
 import { mapReferences, namesSheet } from "../engine/references";
@@ -234,10 +234,11 @@ export class Workbench {
     }
   }
 
-  /** Fills `target` from `source` (a block of the active sheet), formulas' relative references moved. */
-  fill(source: Block, target: Block): void {
+  /** Fills `target` from `source` (a block of the active sheet), formulas' relative references moved; `series` (the fill handle): numbers extended as linear series (grid/fill seriesBlock). */
+  fill(source: Block, target: Block, series?: "down" | "right"): void {
     const id = this.sheetId();
-    const block = filledBlock(source, target, (r, c) => this.book.getInput(id, r, c));
+    const inputAt = (r: number, c: number) => this.book.getInput(id, r, c);
+    const block = series ? seriesBlock(source, target, series, inputAt) : filledBlock(source, target, inputAt);
     this.writeBlock(this.activeSheet(), target.top, target.left, block, true);
   }
 
@@ -828,8 +829,9 @@ export class Workbench {
       if (drag?.kind === "fill" && drag.target) {
         const source = this.selectedBlock();
         const target = drag.target;
-        const rest = target.bottom > source.bottom ? { ...target, top: source.bottom + 1 } : { ...target, left: source.right + 1 };
-        this.fill(source, rest);
+        const down = target.bottom > source.bottom;
+        const rest = down ? { ...target, top: source.bottom + 1 } : { ...target, left: source.right + 1 };
+        this.fill(source, rest, down ? "down" : "right");
         this.select({ row: target.top, col: target.left }, { row: target.bottom, col: target.right });
       } else if (drag?.kind === "fill") this.markSelection();
     });
