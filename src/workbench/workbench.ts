@@ -108,6 +108,12 @@ export class Workbench {
   /** How long the grid took to build and show its first sheet (the workbook was evaluated before). */
   readonly firstRenderMs: number;
 
+  /** Which workbook the grid shows: 0 for the first, one more at each replaceBook (the pane keeps its per-workbook settings by it). */
+  private books = 0;
+  bookSerial(): number {
+    return this.books;
+  }
+
   /** The workbook the grid shows (replaced by replaceBook). */
   get book(): SpanWorkbook {
     return this.current;
@@ -123,6 +129,7 @@ export class Workbench {
     const index = sheet === undefined ? 0 : names.indexOf(sheet);
     if (index < 0) throw new Error(`no sheet named "${sheet}"`);
     this.current = book;
+    this.books++;
     this.active = index;
     this.history.clear();
     this.sheetNamesSeen = names.join("\u0000");
