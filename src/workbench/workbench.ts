@@ -14,7 +14,7 @@ import { filledBlock, fillDownSource, fillRightSource, seriesBlock } from "./gri
 import { tableHint } from "./grid/headerHint";
 import { History, type BlockStep, type Step } from "./grid/history";
 import { mapReferences, namesSheet } from "../engine/references";
-import { inputOf } from "./grid/inputs";
+import { inputOf, shownText } from "./grid/inputs";
 import { MAX_BLOCK_CELLS, blockCols, blockOf, blockRows, inBlock, parseNameBox, type Block, type Selection } from "./grid/selection";
 import { HEADER_HEIGHT, ROW_HEIGHT, rowWindow, scrollFor, type RowWindow } from "./grid/viewport";
 
@@ -738,7 +738,7 @@ export class Workbench {
     const spilledFrom = this.book.spillAnchorOf(id, anchor.row, anchor.col);
     const anchorFormula = spilledFrom ? this.book.getFormula(id, spilledFrom.row, spilledFrom.col) : undefined;
     this.shownInput = input === undefined || input === null ? "" : String(input);
-    this.el.formulaBar.value = this.shownInput;
+    this.el.formulaBar.value = document.activeElement === this.el.formulaBar ? this.shownInput : shownText(this.shownInput);
     this.el.formulaBar.placeholder = spilledFrom ? `spilled from ${cellText(spilledFrom)}: ${anchorFormula ?? ""}` : "";
     const value = this.book.getValue(id, anchor.row, anchor.col);
     const here = cellText(anchor);
@@ -845,6 +845,13 @@ export class Workbench {
     sheet.addEventListener("dblclick", (event) => {
       if ((event.target as HTMLElement).classList.contains("resize")) return;
       this.el.formulaBar.focus();
+    });
+    // The edit text (with a text cell's apostrophe) only while editing (grid/inputs shownText).
+    this.el.formulaBar.addEventListener("focus", () => {
+      if (this.el.formulaBar.value === shownText(this.shownInput)) this.el.formulaBar.value = this.shownInput;
+    });
+    this.el.formulaBar.addEventListener("blur", () => {
+      if (this.el.formulaBar.value === this.shownInput) this.el.formulaBar.value = shownText(this.shownInput);
     });
     this.el.formulaBar.addEventListener("keydown", (event) => {
       // stopPropagation: the grid's own keys (document) must not see the key that ends an edit.
@@ -966,8 +973,8 @@ export class Workbench {
       this.markSelection();
     } else if (event.key.length === 1 && !event.altKey) {
       event.preventDefault();
-      this.el.formulaBar.value = event.key;
       this.el.formulaBar.focus();
+      this.el.formulaBar.value = event.key;
     }
   }
 

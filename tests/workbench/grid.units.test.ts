@@ -11,7 +11,7 @@ import { clampWidth } from "../../src/workbench/grid/columns";
 import { filledBlock, fillDownSource, fillRightSource, seriesBlock } from "../../src/workbench/grid/fill";
 import { tableHint } from "../../src/workbench/grid/headerHint";
 import { History } from "../../src/workbench/grid/history";
-import { inputOf } from "../../src/workbench/grid/inputs";
+import { inputOf, shownText } from "../../src/workbench/grid/inputs";
 import { parseNameBox, type Block } from "../../src/workbench/grid/selection";
 import { ROW_HEIGHT, rowWindow, scrollFor } from "../../src/workbench/grid/viewport";
 
@@ -61,6 +61,17 @@ describe("inputOf", () => {
     ["'=A1", "'=A1"],
   ];
   it.each(cases)("%p is %p", (text, input) => expect(inputOf(text)).toEqual(input));
+});
+
+describe("formula bar text when not editing", () => {
+  const cases: [string, string][] = [
+    ["'5", "5"],
+    ["'=A1", "=A1"],
+    ["''x", "'x"],
+    ["text", "text"],
+    ["=A1", "=A1"],
+  ];
+  it.each(cases)("%p shows as %p", (edit, shown) => expect(shownText(edit)).toBe(shown));
 });
 
 describe("fill", () => {
