@@ -92,6 +92,12 @@ export interface SheetHost {
    */
   spanFormulas?(limit: number): Promise<FormulaCell[]>;
   writeSetting?(name: string, value: unknown): Promise<void>;
+  /**
+   * Which workbook the host shows, for what the pane keeps per workbook (the title block):
+   * a different value means another workbook. Optional: without it the pane lives in one
+   * workbook (the spreadsheet host starts a pane per document).
+   */
+  workbookKey?(): unknown;
 }
 
 /** "Sheet!A1" with the sheet name quoted when it needs it. */

@@ -62,6 +62,8 @@ export function reportName(title: TitleBlock, cell: string): string {
 
 export class ReportPanel {
   private title: TitleBlock | undefined;
+  /** The host's workbookKey when the title block was read. */
+  private titleBook: unknown;
   /** Why the workbook cannot keep the title block, when it cannot. */
   private notKept: string | undefined;
   /** The last report made, for the print button and for tests. */
@@ -83,9 +85,11 @@ export class ReportPanel {
     return found as T;
   }
 
-  /** The workbook's title block, read once (the pane lives in one workbook). */
+  /** The workbook's title block, read once per workbook (host.workbookKey: the workbench opens others in the same pane). */
   async titleBlock(): Promise<TitleBlock> {
-    if (this.title) return this.title;
+    const book = this.host.workbookKey?.();
+    if (this.title && book === this.titleBook) return this.title;
+    this.titleBook = book;
     const loaded = await loadTitle(this.host);
     this.title = loaded.title;
     this.notKept = loaded.kept ? undefined : loaded.reason;

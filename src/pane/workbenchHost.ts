@@ -11,6 +11,7 @@ export type WorkbenchLike = Pick<WorkbenchApi, "getSelection" | "getFormula" | "
   sheets?(): string[];
   spillRange?(address: string): string | undefined;
   resolveName?(name: string, scope?: string): string | undefined;
+  bookSerial?(): number;
 };
 
 function cellValue(value: unknown): CellValue {
@@ -33,9 +34,12 @@ export class WorkbenchHost implements SheetHost {
   /**
    * The workbench's equivalent of the document settings: kept beside its in-page workbook for
    * as long as the page holds it (the workbench has no add-in settings of its own). Values are
-   * stored as JSON text, so what is read back is a copy, as a host's settings would be.
+   * stored as JSON text, so what is read back is a copy, as a host's settings would be. They
+   * belong to one workbook: when the workbench shows another (a file opened, a new book),
+   * they start empty, as a spreadsheet's document settings do for another document.
    */
   private readonly settings = new Map<string, string>();
+  private settingsBook: number | undefined;
   constructor(private readonly api: WorkbenchLike) {}
 
   private write(address: string, block: CellInput[][]): void {
@@ -176,12 +180,26 @@ export class WorkbenchHost implements SheetHost {
     return out;
   }
 
+  workbookKey(): unknown {
+    return this.api.bookSerial?.();
+  }
+
+  /** The settings of the workbook shown now (cleared when it is another one than they were kept for). */
+  private bookSettings(): Map<string, string> {
+    const book = this.api.bookSerial?.();
+    if (book !== this.settingsBook) {
+      this.settings.clear();
+      this.settingsBook = book;
+    }
+    return this.settings;
+  }
+
   async readSetting(name: string): Promise<unknown> {
-    const text = this.settings.get(name);
+    const text = this.bookSettings().get(name);
     return text === undefined ? undefined : JSON.parse(text);
   }
 
   async writeSetting(name: string, value: unknown): Promise<void> {
-    this.settings.set(name, JSON.stringify(value));
+    this.bookSettings().set(name, JSON.stringify(value));
   }
 }

@@ -32,6 +32,8 @@ export interface WorkbenchApi {
   setFormula(address: string, formula: string): void;
   onSelectionChange(listener: (selection: SelectionInfo) => void): () => void;
   onChange(listener: () => void): () => void;
+  /** Which workbook the page shows: changes each time another book is opened or a new one started. */
+  bookSerial(): number;
   /** Draws a line chart under the grid; returns its element id. */
   addChart(spec: ChartSpec): string;
   /** The range a formula cell's result spills over ("B3:F12"), or undefined when it does not spill. */
@@ -122,6 +124,7 @@ export function createApi(bench: Workbench, charts: HTMLElement): WorkbenchApi {
       return bench.onSelectionChange(() => listener(info()));
     },
     onChange: (listener) => bench.onChange(listener),
+    bookSerial: () => bench.bookSerial(),
     addChart: (spec) => drawChart(charts, spec),
     spillRange(address) {
       const ref = parseRange(address);

@@ -10,11 +10,11 @@ import { numberTexts } from "./format";
 import { anchorKey, paintCell, type PaintContext } from "./grid/cells";
 import { clipboardText, parseTsv, toTsv } from "./grid/clipboard";
 import { ColumnWidths, ROW_HEADER_WIDTH, TextMeasure } from "./grid/columns";
-import { filledBlock, fillDownSource, fillRightSource } from "./grid/fill";
+import { filledBlock, fillDownSource, fillRightSource, seriesBlock } from "./grid/fill";
 import { tableHint } from "./grid/headerHint";
 import { History, type BlockStep, type Step } from "./grid/history";
 import { mapReferences, namesSheet } from "../engine/references";
-import { inputOf } from "./grid/inputs";
+import { inputOf, shownText } from "./grid/inputs";
 import { MAX_BLOCK_CELLS, blockCols, blockOf, blockRows, inBlock, parseNameBox, type Block, type Selection } from "./grid/selection";
 import { HEADER_HEIGHT, ROW_HEIGHT, rowWindow, scrollFor, type RowWindow } from "./grid/viewport";
 
@@ -108,6 +108,12 @@ export class Workbench {
   /** How long the grid took to build and show its first sheet (the workbook was evaluated before). */
   readonly firstRenderMs: number;
 
+  /** Which workbook the grid shows: 0 for the first, one more at each replaceBook (the pane keeps its per-workbook settings by it). */
+  private books = 0;
+  bookSerial(): number {
+    return this.books;
+  }
+
   /** The workbook the grid shows (replaced by replaceBook). */
   get book(): SpanWorkbook {
     return this.current;
@@ -123,6 +129,7 @@ export class Workbench {
     const index = sheet === undefined ? 0 : names.indexOf(sheet);
     if (index < 0) throw new Error(`no sheet named "${sheet}"`);
     this.current = book;
+    this.books++;
     this.active = index;
     this.history.clear();
     this.sheetNamesSeen = names.join("\u0000");
@@ -234,10 +241,11 @@ export class Workbench {
     }
   }
 
-  /** Fills `target` from `source` (a block of the active sheet), formulas' relative references moved. */
-  fill(source: Block, target: Block): void {
+  /** Fills `target` from `source` (a block of the active sheet), formulas' relative references moved; `series` (the fill handle): numbers extended as linear series (grid/fill seriesBlock). */
+  fill(source: Block, target: Block, series?: "down" | "right"): void {
     const id = this.sheetId();
-    const block = filledBlock(source, target, (r, c) => this.book.getInput(id, r, c));
+    const inputAt = (r: number, c: number) => this.book.getInput(id, r, c);
+    const block = series ? seriesBlock(source, target, series, inputAt) : filledBlock(source, target, inputAt);
     this.writeBlock(this.activeSheet(), target.top, target.left, block, true);
   }
 
@@ -730,7 +738,7 @@ export class Workbench {
     const spilledFrom = this.book.spillAnchorOf(id, anchor.row, anchor.col);
     const anchorFormula = spilledFrom ? this.book.getFormula(id, spilledFrom.row, spilledFrom.col) : undefined;
     this.shownInput = input === undefined || input === null ? "" : String(input);
-    this.el.formulaBar.value = this.shownInput;
+    this.el.formulaBar.value = document.activeElement === this.el.formulaBar ? this.shownInput : shownText(this.shownInput);
     this.el.formulaBar.placeholder = spilledFrom ? `spilled from ${cellText(spilledFrom)}: ${anchorFormula ?? ""}` : "";
     const value = this.book.getValue(id, anchor.row, anchor.col);
     const here = cellText(anchor);
@@ -828,14 +836,22 @@ export class Workbench {
       if (drag?.kind === "fill" && drag.target) {
         const source = this.selectedBlock();
         const target = drag.target;
-        const rest = target.bottom > source.bottom ? { ...target, top: source.bottom + 1 } : { ...target, left: source.right + 1 };
-        this.fill(source, rest);
+        const down = target.bottom > source.bottom;
+        const rest = down ? { ...target, top: source.bottom + 1 } : { ...target, left: source.right + 1 };
+        this.fill(source, rest, down ? "down" : "right");
         this.select({ row: target.top, col: target.left }, { row: target.bottom, col: target.right });
       } else if (drag?.kind === "fill") this.markSelection();
     });
     sheet.addEventListener("dblclick", (event) => {
       if ((event.target as HTMLElement).classList.contains("resize")) return;
       this.el.formulaBar.focus();
+    });
+    // The edit text (with a text cell's apostrophe) only while editing (grid/inputs shownText).
+    this.el.formulaBar.addEventListener("focus", () => {
+      if (this.el.formulaBar.value === shownText(this.shownInput)) this.el.formulaBar.value = this.shownInput;
+    });
+    this.el.formulaBar.addEventListener("blur", () => {
+      if (this.el.formulaBar.value === this.shownInput) this.el.formulaBar.value = shownText(this.shownInput);
     });
     this.el.formulaBar.addEventListener("keydown", (event) => {
       // stopPropagation: the grid's own keys (document) must not see the key that ends an edit.
@@ -957,8 +973,8 @@ export class Workbench {
       this.markSelection();
     } else if (event.key.length === 1 && !event.altKey) {
       event.preventDefault();
-      this.el.formulaBar.value = event.key;
       this.el.formulaBar.focus();
+      this.el.formulaBar.value = event.key;
     }
   }
 

@@ -109,6 +109,18 @@ describe("title block on the workbench and at the boundary", () => {
     expect(await loadTitle(host)).toEqual({ kept: true, title: TITLE, stored: true });
   });
 
+  it("the workbench's title block belongs to its workbook: another book opened starts with none, as another document does", async () => {
+    let serial = 0;
+    const host = new WorkbenchHost({ bookSerial: () => serial } as WorkbenchLike);
+    await saveTitle(host, TITLE);
+    expect(host.workbookKey()).toBe(0);
+    serial = 1; // what the workbench's replaceBook does when a file is opened or a new book started
+    expect(host.workbookKey()).toBe(1);
+    expect(await loadTitle(host)).toEqual({ kept: true, title: EMPTY_TITLE, stored: false });
+    await saveTitle(host, { ...TITLE, mark: "B2" });
+    expect((await loadTitle(host)).title.mark).toBe("B2");
+  });
+
   it.each([
     ["a JSON text", JSON.stringify(TITLE), TITLE],
     ["unknown fields and non-text values dropped", { ...TITLE, extra: "x", by: { evil: 1 }, job: 42 }, { ...TITLE, by: "", job: "42" }],

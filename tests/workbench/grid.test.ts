@@ -243,6 +243,40 @@ describe("rows", () => {
   });
 });
 
+describe("fill handle series and text cells", () => {
+  it("extends two numbers dragged down by the fill handle as a series (1, 2 -> 3, 4, 5)", async () => {
+    await page.click(".tabs button:has-text('Study')");
+    await api("api.setValues('Study!H40:H41', [[1], [2]])");
+    await click("H44");
+    await click("H40");
+    await click("H41", ["Shift"]);
+    const handle = await page.locator(".fill-handle").boundingBox();
+    const target = await page.locator('td[data-address="H44"]').boundingBox();
+    if (!handle || !target) throw new Error("no fill handle");
+    await page.mouse.move(handle.x + 3, handle.y + 3);
+    await page.mouse.down();
+    await page.mouse.move(target.x + 10, target.y + 10, { steps: 4 });
+    await page.mouse.up();
+    expect(await api("return api.getValues('Study!H40:H44')")).toEqual([[1], [2], [3], [4], [5]]);
+  });
+
+  it("shows a text cell's apostrophe in the formula bar only while editing, and the edit keeps it text", async () => {
+    await api("api.setValues('Study!H50', [[\"'5\"]])");
+    await click("H50");
+    expect(await page.inputValue("#formula-bar")).toBe("5");
+    await page.dblclick('td[data-address="H50"]');
+    expect(await page.inputValue("#formula-bar")).toBe("'5");
+    await page.keyboard.press("Enter");
+    expect(await api("return api.getValues('Study!H50')")).toEqual([["5"]]);
+    await click("H50");
+    expect(await page.inputValue("#formula-bar")).toBe("5");
+    await page.keyboard.type("7");
+    expect(await page.inputValue("#formula-bar")).toBe("7");
+    await page.keyboard.press("Enter");
+    expect(await api("return api.getValues('Study!H50')")).toEqual([[7]]);
+  });
+});
+
 describe("editing", () => {
   it("keeps a formula-bar edit when another cell is clicked, as a spreadsheet commits it", async () => {
     await page.click(".tabs button:has-text('Study')");

@@ -5,14 +5,14 @@
  * UnquoteTabDelimitedText": pasted tab-delimited `"A""B"` is the cell A"B), typed input, fill
  * tiling, the row window, the history and the table hints.
  */
-import { SHEET_LIMITS } from "../../src/engine";
+import { SHEET_LIMITS, type CellInput } from "../../src/engine";
 import { parseTsv, toTsv } from "../../src/workbench/grid/clipboard";
 import { clampWidth } from "../../src/workbench/grid/columns";
-import { filledBlock, fillDownSource, fillRightSource } from "../../src/workbench/grid/fill";
+import { filledBlock, fillDownSource, fillRightSource, seriesBlock } from "../../src/workbench/grid/fill";
 import { tableHint } from "../../src/workbench/grid/headerHint";
 import { History } from "../../src/workbench/grid/history";
-import { inputOf } from "../../src/workbench/grid/inputs";
-import { parseNameBox } from "../../src/workbench/grid/selection";
+import { inputOf, shownText } from "../../src/workbench/grid/inputs";
+import { parseNameBox, type Block } from "../../src/workbench/grid/selection";
 import { ROW_HEIGHT, rowWindow, scrollFor } from "../../src/workbench/grid/viewport";
 
 describe("parseTsv", () => {
@@ -63,6 +63,17 @@ describe("inputOf", () => {
   it.each(cases)("%p is %p", (text, input) => expect(inputOf(text)).toEqual(input));
 });
 
+describe("formula bar text when not editing", () => {
+  const cases: [string, string][] = [
+    ["'5", "5"],
+    ["'=A1", "=A1"],
+    ["''x", "'x"],
+    ["text", "text"],
+    ["=A1", "=A1"],
+  ];
+  it.each(cases)("%p shows as %p", (edit, shown) => expect(shownText(edit)).toBe(shown));
+});
+
 describe("fill", () => {
   const source = { top: 0, left: 0, bottom: 0, right: 1 };
   const inputs = [[3, "=A1*$B$1+B1"]];
@@ -76,6 +87,24 @@ describe("fill", () => {
     expect(shiftLimit()).toBe("=#REF!");
   });
   const shiftLimit = () => filledBlock({ top: 0, left: 0, bottom: 0, right: 0 }, { top: 1, left: 0, bottom: 1, right: 0 }, () => `=A${SHEET_LIMITS.rows}`)[0][0];
+
+  // Expected series: the arithmetic continuation (1, 2 -> 3, 4, 5) and, for uneven numbers, the
+  // least-squares line computed by hand (1, 3, 4 at x = 0, 1, 2: mean 8/3 at x = 1, slope 3/2,
+  // so 8/3 + 2 * 3/2 = 17/3 at x = 3).
+  const seriesCases: [string, CellInput[][], "down" | "right", Block, CellInput[][]][] = [
+    ["1, 2 dragged down", [[1], [2]], "down", { top: 2, left: 0, bottom: 4, right: 0 }, [[3], [4], [5]]],
+    ["10, 7.5 dragged down", [[10], [7.5]], "down", { top: 2, left: 0, bottom: 3, right: 0 }, [[5], [2.5]]],
+    ["1, 3, 4 (uneven) dragged down", [[1], [3], [4]], "down", { top: 3, left: 0, bottom: 3, right: 0 }, [[17 / 3]]],
+    ["2, 4 dragged right", [[2, 4]], "right", { top: 0, left: 2, bottom: 0, right: 3 }, [[6, 8]]],
+    ["a number and a formula column: the formula is copied moved", [[1, "=A1"], [2, "=A2"]], "down", { top: 2, left: 0, bottom: 3, right: 1 }, [[3, "=A3"], [4, "=A4"]]],
+    ["text and a number: copied", [["a"], [2]], "down", { top: 2, left: 0, bottom: 3, right: 0 }, [["a"], [2]]],
+    ["one number: copied", [[5]], "down", { top: 1, left: 0, bottom: 2, right: 0 }, [[5], [5]]],
+  ];
+  it.each(seriesCases)("fill handle: %s", (_, inputs, direction, target, expected) => {
+    const source = { top: 0, left: 0, bottom: inputs.length - 1, right: inputs[0].length - 1 };
+    const block = seriesBlock(source, target, direction, (r, c) => inputs[r]?.[c]);
+    expected.forEach((row, i) => row.forEach((v, j) => (typeof v === "number" ? expect(block[i][j]).toBeCloseTo(v, 12) : expect(block[i][j]).toBe(v))));
+  });
 
   it("Ctrl+D and Ctrl+R take the first row / column, or the one before a single cell", () => {
     expect(fillDownSource({ top: 4, left: 1, bottom: 9, right: 2 })).toEqual({ source: { top: 4, left: 1, bottom: 4, right: 2 }, target: { top: 5, left: 1, bottom: 9, right: 2 } });

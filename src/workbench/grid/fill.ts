@@ -1,7 +1,11 @@
 /**
  * Fill and paste of cell inputs: each target cell takes the input of the source cell it
  * repeats (the source tiled over the target), a formula with its relative references moved
- * by the offset ($ parts stay). Values are copied as they are (no series are extended).
+ * by the offset ($ parts stay). Ctrl+D / Ctrl+R and paste copy values as they are; the fill
+ * handle extends a series (seriesBlock): a column (dragging down) or row (dragging right) of
+ * two or more numbers continues its linear trend, as a common spreadsheet's fill handle does
+ * (1, 2 dragged down gives 3, 4, 5; from memory of the desktop spreadsheet's AutoFill, which
+ * for unevenly spaced numbers continues the least-squares line: the same rule here).
  */
 import { SHEET_LIMITS, type CellInput } from "../../engine";
 import { shiftFormula } from "../../engine/references";
@@ -41,4 +45,49 @@ export function fillRightSource(selection: Block): { source: Block; target: Bloc
   if (selection.right > selection.left) return { source: { ...selection, right: selection.left }, target: { ...selection, left: selection.left + 1 } };
   if (selection.left === 0) return undefined;
   return { source: { ...selection, left: selection.left - 1, right: selection.left - 1 }, target: selection };
+}
+
+/** The least-squares line through values at 0..n-1, evaluated at `x` (evenly spaced values: their continuation). */
+function trendAt(values: number[], x: number): number {
+  const n = values.length;
+  const meanX = (n - 1) / 2;
+  let meanY = 0;
+  for (const v of values) meanY += v / n;
+  let sxy = 0;
+  let sxx = 0;
+  values.forEach((v, i) => {
+    sxy += (i - meanX) * (v - meanY);
+    sxx += (i - meanX) * (i - meanX);
+  });
+  return meanY + (sxy / sxx) * (x - meanX);
+}
+
+/**
+ * The fill handle: `target` (the cells below or right of `source`, `direction` the drag) filled
+ * from `source`; each source column (down) or row (right) of two or more numbers is extended as
+ * a linear series, every other line is copied as filledBlock does.
+ */
+export function seriesBlock(source: Block, target: Block, direction: "down" | "right", inputAt: (row: number, col: number) => CellInput): CellInput[][] {
+  const block = filledBlock(source, target, inputAt);
+  const down = direction === "down";
+  const length = down ? blockRows(source) : blockCols(source);
+  if (length < 2) return block;
+  const lines = down ? blockCols(target) : blockRows(target);
+  for (let k = 0; k < lines; k++) {
+    const values: number[] = [];
+    for (let i = 0; i < length; i++) {
+      const input = down ? inputAt(source.top + i, target.left + k) : inputAt(target.top + k, source.left + i);
+      if (typeof input !== "number" || !Number.isFinite(input)) break;
+      values.push(input);
+    }
+    if (values.length < length) continue;
+    const start = down ? target.top - source.top : target.left - source.left;
+    const count = down ? blockRows(target) : blockCols(target);
+    for (let j = 0; j < count; j++) {
+      const value = trendAt(values, start + j);
+      if (down) block[j][k] = value;
+      else block[k][j] = value;
+    }
+  }
+  return block;
 }

@@ -4,10 +4,18 @@
  * "12%" and "12 m" stay text (no number is read from anything but plain decimal notation, so
  * no locale is guessed: a SPAN function given such text refuses it with a message). A leading
  * apostrophe keeps the rest as text ("'5" is the text 5, "'=A1" the text =A1), as in a spreadsheet.
+ * The formula bar shows that apostrophe only while the cell is edited (shownText), so a text
+ * cell reads the same wherever it came from (typed, or a file's text cell, which the reader
+ * guards with one: src/cli/xlsxBook.ts textInput), and editing it keeps it text.
  */
 import type { CellInput } from "../../engine";
 
 const DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+
+/** The formula bar's text for a cell's edit text when the cell is not being edited: a leading (guard) apostrophe hidden. */
+export function shownText(editText: string): string {
+  return editText.startsWith("'") ? editText.slice(1) : editText;
+}
 
 export function inputOf(text: string): CellInput {
   // The engine reads a leading apostrophe itself (the rest is text) and keeps it in the input.
