@@ -34,9 +34,11 @@ export const MAX_VIBRATION_WORK = 2_500;
  * Most elements one call may take, whatever the modes: the search grows faster than the
  * elements (tests/bench/limits.bench.ts, one loaded run: 2,000 elements and 5 modes cost about
  * what 200 elements and 50 modes do, 100 ms; 10,000 elements and 1 mode 480-680 ms; at a load
- * average of 3.3, 999 point masses on one span and 5 modes took 210 ms of CPU, hence 500).
+ * average of 3.3, 999 point masses on one span and 5 modes took 210 ms of CPU, and at 4,
+ * SPAN.MODESHAPE of 500 elements, mode 4 and 10,001 x cells 230 ms, while 200 elements and
+ * mode 11 took 110 ms; hence 250).
  */
-export const MAX_VIBRATION_ELEMENTS = 500;
+export const MAX_VIBRATION_ELEMENTS = 250;
 
 /** Bisection stops when the bracket is this fraction of the frequency (well inside 1e-12). */
 export const FREQUENCY_TOLERANCE = 2e-14;
