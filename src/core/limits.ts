@@ -11,6 +11,8 @@ import type { PatternMode } from "./pattern";
 export const LIMITS = {
   /** ENVELOPE x cells and INFLUENCE positions. */
   positions: 10001,
+  /** Cells of each range of UTILISATION (demand, capacity), CONVERT (value) and STIFFNESS (E, I). */
+  cells: 10001,
   /** MOVING axle loads (on one span the size limit allows 35, or 25 for absolute moment; more spans allow fewer). */
   axles: 35,
   /** ENVELOPE and PEAKS combinations, after named sets are expanded. */
@@ -26,15 +28,17 @@ export const LIMITS = {
 } as const;
 
 /**
- * The size of one call in work units (about 0.4 microseconds each on the benchmark machine):
- * a span or a load through one solve costs 10, through one peak search of PEAKS 12, and one x
+ * The size of one call in work units (about 1-2 microseconds each of process CPU on the shared
+ * benchmark machine at a load average of 3): a span or a load through one solve costs 10,
+ * through one peak search of PEAKS 20 (PEAKS cost about 1.3 times the other studies per unit
+ * at 12), and one x
  * cell of ENVELOPE 2 per case and live span it reads and 1 per arrangement it combines. A call larger than
  * WORK_LIMIT is refused before any work, since its size is known from the counts alone. The
  * weights and the limit come from tests/bench/limits.bench.ts, so that a call at the limit
  * answers within about 200 ms.
  */
-export const WORK_LIMIT = 400_000;
-export const WORK_WEIGHTS = { solve: 10, scan: 12, station: 1 } as const;
+export const WORK_LIMIT = 100_000;
+export const WORK_WEIGHTS = { solve: 10, scan: 20, station: 1 } as const;
 
 export type StudyKind = "ENVELOPE" | "PEAKS" | "INFLUENCE" | "MOVING" | "CASEREACTIONS";
 
@@ -62,7 +66,7 @@ function arrangementCost(pattern: PatternMode, spans: number): number {
  * The size of a call from its counts (s = spans + loads; live = spans when patterned, else 0;
  * arrangements a = 1 without a pattern, 2 for full, spans + 2 for standard):
  * - ENVELOPE: 10 (cases + live) s + positions (2 (cases + live) + combinations a);
- * - PEAKS: 10 (cases + live) s + 12 combinations a s;
+ * - PEAKS: 10 (cases + live) s + 20 combinations a s;
  * - INFLUENCE: 10 positions (spans + 1), one solve per position;
  * - MOVING at a section, node or support: 40 (spans + 2) (spans + 1) + 2 (spans + 2) axles^2
  *   (four solves per interval of the influence line, then sums of the axles' cubics);

@@ -24,16 +24,21 @@ export const MAX_MODES = 50;
  * Most elements x modes one call may take (elements: the spans cut at every mass boundary):
  * each mode costs about fifty factorisations of the whole member. At 100,000 (2,000 spans and
  * 50 modes) a call took 2.3-2.7 s on a heavily loaded machine (tests/bench/vibration.bench.ts),
- * so the limit is a tenth of that, to keep a call near the 200 ms the limits section promises.
+ * and at 5,000 (1,000 elements and 5 modes) SPAN.MODESHAPE with 10,001 x cells still took
+ * 310 ms of CPU at a load average of 3.3 (tests/bench/limits.bench.ts), so the limit is 2,500,
+ * to keep a call well within the 200 ms the limits section promises.
  */
-export const MAX_VIBRATION_WORK = 10_000;
+export const MAX_VIBRATION_WORK = 2_500;
 
 /**
  * Most elements one call may take, whatever the modes: the search grows faster than the
  * elements (tests/bench/limits.bench.ts, one loaded run: 2,000 elements and 5 modes cost about
- * what 200 elements and 50 modes do, 100 ms; 10,000 elements and 1 mode 480-680 ms).
+ * what 200 elements and 50 modes do, 100 ms; 10,000 elements and 1 mode 480-680 ms; at a load
+ * average of 3.3, 999 point masses on one span and 5 modes took 210 ms of CPU, and at 4,
+ * SPAN.MODESHAPE of 500 elements, mode 4 and 10,001 x cells 230 ms, while 200 elements and
+ * mode 11 took 110 ms; hence 250).
  */
-export const MAX_VIBRATION_ELEMENTS = 2_000;
+export const MAX_VIBRATION_ELEMENTS = 250;
 
 /** Bisection stops when the bracket is this fraction of the frequency (well inside 1e-12). */
 export const FREQUENCY_TOLERANCE = 2e-14;

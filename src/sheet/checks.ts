@@ -8,6 +8,8 @@
  */
 import {
   averageShearStress,
+  checkCount,
+  LIMITS,
   convert,
   extremes,
   fibreStresses,
@@ -224,6 +226,9 @@ function pairwise(a: unknown, b: unknown, nameA: string, nameB: string, f: (x: n
   const ra = rowsOf(a);
   const rb = rowsOf(b);
   const single = (r: unknown[][]) => r.length === 1 && r[0].length === 1;
+  const cells = (r: unknown[][]) => r.reduce((n, row) => n + row.length, 0);
+  checkCount(cells(ra), LIMITS.cells, nameA, "cells");
+  if (nameB !== nameA) checkCount(cells(rb), LIMITS.cells, nameB, "cells");
   const shape = single(ra) ? rb : ra;
   if (!single(ra) && !single(rb) && (ra.length !== rb.length || ra.some((row, i) => row.length !== rb[i].length))) {
     throw invalid(`${nameB}: give one cell or a range the same size as ${nameA}`);

@@ -13,8 +13,13 @@ import { invalid } from "../core";
 import { isBlank, isEmpty, numberFromText, readNumber } from "./cells";
 import { isAllBlank, listEntries, singleCell, splitList } from "./ranges";
 
-/** Most spans one member may have. */
-export const MAX_SPANS = 10000;
+/**
+ * Most spans one member may have (a real continuous member has far fewer). A span costs about
+ * twice a load to read and solve (tests/bench/limits.bench.ts: 10,000 spans and one load took
+ * 250 ms, one span and 10,000 loads 115 ms), so this limit with MAX_LOADS keeps a member at
+ * both limits near 70 ms.
+ */
+export const MAX_SPANS = 1000;
 
 function positive(entries: readonly unknown[], count: number, name: string, what: string): number[] {
   const values = new Array<number>(count);
@@ -32,7 +37,7 @@ export function readSpans(arg: unknown): number[] {
   let count = entries.length;
   while (count > 0 && isEmpty(entries[count - 1])) count--;
   if (count === 0) throw invalid("spans: give at least one span length");
-  if (count > MAX_SPANS) throw invalid(`spans: ${count} spans; a member has at most ${MAX_SPANS}`);
+  if (count > MAX_SPANS) throw invalid(`spans: at most ${MAX_SPANS} spans on one member, got ${count}`);
   return positive(entries, count, "spans", "a span length");
 }
 

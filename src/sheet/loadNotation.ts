@@ -229,7 +229,7 @@ export function parseLoadNotation(text: string): LoadRow[] {
       while (end > start && isSpace(text.charCodeAt(end - 1))) end--;
       from = to + 1;
       if (start === end) continue;
-      if (rows.length === MAX_LOADS) throw invalid(`loads text: more than ${MAX_LOADS} loads on one member; combine loads that act together`);
+      if (rows.length === MAX_LOADS) throw invalid(`loads text: at most ${MAX_LOADS} loads on one member, got more (combine loads that act together)`);
       rows.push(parsePlain(text, start, end, rows.length + 1) ?? parseOne(text.slice(start, end), rows.length + 1));
     }
     return rows;
@@ -237,7 +237,7 @@ export function parseLoadNotation(text: string): LoadRow[] {
   for (const piece of text.split(";")) {
     const trimmed = piece.trim();
     if (trimmed === "") continue;
-    if (rows.length === MAX_LOADS) throw invalid(`loads text: more than ${MAX_LOADS} loads on one member; combine loads that act together`);
+    if (rows.length === MAX_LOADS) throw invalid(`loads text: at most ${MAX_LOADS} loads on one member, got more (combine loads that act together)`);
     rows.push(parseOne(trimmed, rows.length + 1));
   }
   return rows;

@@ -90,7 +90,7 @@ export function readLoadTable(rows: unknown[][]): LoadRow[] {
     const cells = Array.isArray(rows[r]) ? rows[r] : [rows[r]];
     if (isBlankRow(cells)) continue;
     if (loads.length === MAX_LOADS) {
-      throw invalid(`load row ${r + 1}: more than ${MAX_LOADS} loads on one member; combine loads that act together`);
+      throw invalid(`loads: at most ${MAX_LOADS} loads on one member, got more (row ${r + 1} is one too many; combine loads that act together)`);
     }
     loads.push(readLoadRow(cells, r + 1));
   }

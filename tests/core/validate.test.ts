@@ -40,7 +40,7 @@ const cases: [string, () => Member, string][] = [
   [
     "more loads than a member takes",
     () => ({ ...base(), loads: Array.from({ length: MAX_LOADS + 1 }, (_, i) => ({ ...point(1, (i % 12) + 0.5), row: i + 1 })) }),
-    `loads: ${MAX_LOADS + 1} loads on one member; at most ${MAX_LOADS} are taken (combine loads that act together)`,
+    `loads: at most ${MAX_LOADS} loads on one member, got ${MAX_LOADS + 1} (combine loads that act together)`,
   ],
   ["zero EI", () => ({ ...base(), stiffness: [1, 0, 1] }), "EI of span 2: must be a positive number, got 0"],
   ["infinite EI", () => ({ ...base(), stiffness: [1, 1, Infinity] }), "EI of span 3: must be a positive number, got Infinity"],

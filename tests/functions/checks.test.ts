@@ -9,7 +9,7 @@
  */
 import fc from "fast-check";
 import * as fx from "../../functions/functions";
-import { tolerance } from "../../src/core";
+import { LIMITS, tolerance } from "../../src/core";
 import { isSheetSafe, thrown } from "./host";
 
 const FT = 0.3048;
@@ -179,6 +179,32 @@ describe("bad units and bad input give #VALUE! naming the argument", () => {
     const e = thrown(call);
     expect(e.code).toBe("#VALUE!");
     expect(e.message).toMatch(message);
+  });
+
+  // One past the cells limit (LIMITS.cells, src/core/limits.ts) is refused naming the argument; at it, every cell is answered.
+  const column = (n: number, value: number) => Array.from({ length: n }, () => [value]);
+  const over = LIMITS.cells + 1;
+  test.each([
+    ["UTILISATION demand", () => fx.utilisation(column(over, 1), [[2]]), `demand: at most ${LIMITS.cells} cells, got ${over}`],
+    ["UTILISATION capacity", () => fx.utilisation([[1]], column(over, 2)), `capacity: at most ${LIMITS.cells} cells, got ${over}`],
+    ["CONVERT value", () => fx.convertUnits(column(over, 1), "ft", "m"), `value: at most ${LIMITS.cells} cells, got ${over}`],
+    ["STIFFNESS E", () => fx.stiffness(column(over, 29000), [[510]]), `E: at most ${LIMITS.cells} cells, got ${over}`],
+    ["STIFFNESS I", () => fx.stiffness([[29000]], column(over, 510)), `I: at most ${LIMITS.cells} cells, got ${over}`],
+  ])("%s: one cell past the limit is #VALUE! naming it", (_name, call, message) => {
+    const e = thrown(call);
+    expect(e.code).toBe("#VALUE!");
+    expect(e.message).toBe(message);
+  });
+
+  test.each([
+    ["UTILISATION", () => fx.utilisation(column(LIMITS.cells, 1), column(LIMITS.cells, 4)), 0.25],
+    ["CONVERT", () => fx.convertUnits(column(LIMITS.cells, 1), "ft", "in"), 12],
+    ["STIFFNESS", () => fx.stiffness(column(LIMITS.cells, 3), column(LIMITS.cells, 5)), 15],
+  ])("%s at the cells limit answers every cell", (_name, call, expected) => {
+    const rows = call() as number[][];
+    expect(LIMITS.cells).toBe(10001);
+    expect(rows).toHaveLength(LIMITS.cells);
+    expect(rows[LIMITS.cells - 1][0]).toBeCloseTo(expected, 12);
   });
 
   test("deflection check without EI is #N/A", () => {
