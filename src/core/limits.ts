@@ -35,10 +35,12 @@ export const LIMITS = {
  * cell of ENVELOPE 2 per case and live span it reads and 1 per arrangement it combines. A call larger than
  * WORK_LIMIT is refused before any work, since its size is known from the counts alone. The
  * weights and the limit come from tests/bench/limits.bench.ts, so that a call at the limit
- * answers within about 200 ms.
+ * answers within about 200 ms. A solve that INFLUENCE makes per position, or CASEREACTIONS per case
+ * label, costs 15 (`resolve`): at 10 both took 1.7-2 µs of CPU per unit against 1.0-1.3 µs for the
+ * other studies (limits bench, 2026-12-02, load 5), and missed 200 ms at the limit.
  */
 export const WORK_LIMIT = 100_000;
-export const WORK_WEIGHTS = { solve: 10, scan: 20, station: 1 } as const;
+export const WORK_WEIGHTS = { solve: 10, scan: 20, station: 1, resolve: 15 } as const;
 
 export type StudyKind = "ENVELOPE" | "PEAKS" | "INFLUENCE" | "MOVING" | "CASEREACTIONS";
 
@@ -67,17 +69,17 @@ function arrangementCost(pattern: PatternMode, spans: number): number {
  * arrangements a = 1 without a pattern, 2 for full, spans + 2 for standard):
  * - ENVELOPE: 10 (cases + live) s + positions (2 (cases + live) + combinations a);
  * - PEAKS: 10 (cases + live) s + 20 combinations a s;
- * - INFLUENCE: 10 positions (spans + 1), one solve per position;
+ * - INFLUENCE: 15 positions (spans + 1), one solve per position;
  * - MOVING at a section, node or support: 40 (spans + 2) (spans + 1) + 2 (spans + 2) axles^2
  *   (four solves per interval of the influence line, then sums of the axles' cubics);
  * - MOVING absolute moment: 200 (spans + 2) axles (spans + axles): five solves per stretch
  *   between the positions where an axle meets a node, in both directions;
- * - CASEREACTIONS: 10 (cases spans + loads), a solve per case with that case's loads, plus
- *   20 (spans + loads) when the combination is given: it is read and solved again as the member
+ * - CASEREACTIONS: 15 (cases spans + loads), a solve per case with that case's loads, plus
+ *   30 (spans + loads) when the combination is given: it is read and solved again as the member
  *   functions do (about twice a case solve's cost, tests/bench/limits.bench.ts).
  */
 export function workOf(kind: StudyKind, c: StudyCounts): number {
-  const { solve, scan, station } = WORK_WEIGHTS;
+  const { solve, scan, station, resolve } = WORK_WEIGHTS;
   const size = c.spans + c.loads;
   const live = c.pattern === "none" ? 0 : c.spans;
   const arranged = c.combinations * arrangementCost(c.pattern, c.spans);
@@ -87,13 +89,13 @@ export function workOf(kind: StudyKind, c: StudyCounts): number {
     case "PEAKS":
       return solve * (c.cases + live) * size + scan * arranged * size;
     case "INFLUENCE":
-      return solve * c.positions * (c.spans + 1);
+      return resolve * c.positions * (c.spans + 1);
     case "MOVING":
       return c.absoluteMoment
         ? solve * 20 * (c.spans + 2) * c.axles * (c.spans + c.axles)
         : solve * 4 * (c.spans + 2) * (c.spans + 1) + 2 * (c.spans + 2) * c.axles * c.axles;
     case "CASEREACTIONS":
-      return solve * (c.cases * c.spans + c.loads) + (c.combinations > 0 ? 2 * solve * size : 0);
+      return resolve * (c.cases * c.spans + c.loads) + (c.combinations > 0 ? 2 * resolve * size : 0);
   }
 }
 
