@@ -36,7 +36,9 @@ describe("moving loads", () => {
     const train = trainFrom([14, 22, 22], [3, 1.4]);
     const r = movingLoad(member, train, { kind: "moment", x: 7 });
     const xs = Array.from({ length: 2201 }, (_, i) => (i * 22) / 2200);
-    const il = influenceLine(member, { kind: "moment", x: 7 }, xs);
+    // In blocks of 1,000 positions: one call takes at most the size limit (src/core/limits.ts).
+    const il: number[] = [];
+    for (let i = 0; i < xs.length; i += 1000) il.push(...influenceLine(member, { kind: "moment", x: 7 }, xs.slice(i, i + 1000)));
     const at = (x: number) => (x < 0 || x > 22 ? 0 : il[Math.round((x * 2200) / 22)]);
     let scanMin = Infinity;
     for (let k = -440; k <= 2200; k++) {
