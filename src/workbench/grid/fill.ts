@@ -47,19 +47,21 @@ export function fillRightSource(selection: Block): { source: Block; target: Bloc
   return { source: { ...selection, left: selection.left - 1, right: selection.left - 1 }, target: selection };
 }
 
-/** The least-squares line through values at 0..n-1, evaluated at `x` (evenly spaced values: their continuation). */
-function trendAt(values: number[], x: number): number {
+/** The least-squares line through values at x = 0..n-1 (evenly spaced values: their own line), as a function of x. */
+function trendOf(values: number[]): (x: number) => number {
   const n = values.length;
   const meanX = (n - 1) / 2;
-  let meanY = 0;
-  for (const v of values) meanY += v / n;
+  let sum = 0;
+  for (const v of values) sum += v;
+  const meanY = sum / n;
   let sxy = 0;
   let sxx = 0;
-  values.forEach((v, i) => {
-    sxy += (i - meanX) * (v - meanY);
+  for (let i = 0; i < n; i++) {
+    sxy += (i - meanX) * (values[i] - meanY);
     sxx += (i - meanX) * (i - meanX);
-  });
-  return meanY + (sxy / sxx) * (x - meanX);
+  }
+  const slope = sxy / sxx;
+  return (x) => meanY + slope * (x - meanX);
 }
 
 /**
@@ -81,10 +83,11 @@ export function seriesBlock(source: Block, target: Block, direction: "down" | "r
       values.push(input);
     }
     if (values.length < length) continue;
+    const trend = trendOf(values);
     const start = down ? target.top - source.top : target.left - source.left;
     const count = down ? blockRows(target) : blockCols(target);
     for (let j = 0; j < count; j++) {
-      const value = trendAt(values, start + j);
+      const value = trend(start + j);
       if (down) block[j][k] = value;
       else block[k][j] = value;
     }
