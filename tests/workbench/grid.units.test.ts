@@ -100,6 +100,16 @@ describe("fill", () => {
     ["text and a number: copied", [["a"], [2]], "down", { top: 2, left: 0, bottom: 3, right: 0 }, [["a"], [2]]],
     ["one number: copied", [[5]], "down", { top: 1, left: 0, bottom: 2, right: 0 }, [[5], [5]]],
   ];
+  // Decimal steps continue as the decimals typed, not their binary neighbours (exact equality).
+  it.each([
+    [[0.1, 0.2], [0.3, 0.4, 0.5, 0.6, 0.7]],
+    [[1.2, 1.4, 1.6], [1.8, 2, 2.2, 2.4, 2.6]],
+    [[0.05, 0.15], [0.25, 0.35, 0.45]],
+  ])("fill handle: %p continues exactly as %p", (values, expected) => {
+    const source = { top: 0, left: 0, bottom: values.length - 1, right: 0 };
+    const target = { top: values.length, left: 0, bottom: values.length + expected.length - 1, right: 0 };
+    expect(seriesBlock(source, target, "down", (r) => values[r]).map((row) => row[0])).toEqual(expected);
+  });
   it.each(seriesCases)("fill handle: %s", (_, inputs, direction, target, expected) => {
     const source = { top: 0, left: 0, bottom: inputs.length - 1, right: inputs[0].length - 1 };
     const block = seriesBlock(source, target, direction, (r, c) => inputs[r]?.[c]);

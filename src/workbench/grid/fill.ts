@@ -61,7 +61,10 @@ function trendOf(values: number[]): (x: number) => number {
     sxx += (i - meanX) * (i - meanX);
   }
   const slope = sxy / sxx;
-  return (x) => meanY + slope * (x - meanX);
+  // Rounded to 15 significant digits, the digits a typed number keeps (0.1, 0.2 continue as 0.3,
+  // not 0.30000000000000004, which would reach a span or x cell as typed; from memory of the
+  // desktop spreadsheet's 15-digit precision).
+  return (x) => Number((meanY + slope * (x - meanX)).toPrecision(15));
 }
 
 /**
