@@ -29,18 +29,18 @@ export const LIMITS = {
 
 /**
  * The size of one call in work units (about 1-2 microseconds each of process CPU on the shared
- * benchmark machine at a load average of 3): a span or a load through one solve costs 10,
- * through one peak search of PEAKS 20 (PEAKS cost about 1.3 times the other studies per unit
- * at 12), and one x
- * cell of ENVELOPE 2 per case and live span it reads and 1 per arrangement it combines. A call larger than
- * WORK_LIMIT is refused before any work, since its size is known from the counts alone. The
- * weights and the limit come from tests/bench/limits.bench.ts, so that a call at the limit
- * answers within about 200 ms. A solve that INFLUENCE makes per position, or CASEREACTIONS per case
- * label, costs 15 (`resolve`): at 10 both took 1.7-2 µs of CPU per unit against 1.0-1.3 µs for the
- * other studies (limits bench, 2026-12-02, load 5), and missed 200 ms at the limit.
+ * benchmark machine at a load average of 3): a span or a load through one solve costs 10
+ * (`solve`); through one peak search of PEAKS 20 (`scan`: at 12, PEAKS cost about 1.3 times the
+ * other studies per unit); through a solve INFLUENCE repeats per position, or CASEREACTIONS per
+ * case label, 15 (`repeatedSolve`: at 10 both took 1.7-2 µs of CPU per unit against 1.0-1.3 µs
+ * for the other studies, limits bench 2026-12-02 at load 5, and missed 200 ms at the limit); and
+ * one x cell of ENVELOPE 2 per case and live span it reads and 1 per arrangement it combines
+ * (`station`). A call larger than WORK_LIMIT is refused before any work, since its size is known
+ * from the counts alone. The weights and the limit come from tests/bench/limits.bench.ts, so
+ * that a call at the limit answers within about 200 ms.
  */
 export const WORK_LIMIT = 100_000;
-export const WORK_WEIGHTS = { solve: 10, scan: 20, station: 1, resolve: 15 } as const;
+export const WORK_WEIGHTS = { solve: 10, scan: 20, station: 1, repeatedSolve: 15 } as const;
 
 export type StudyKind = "ENVELOPE" | "PEAKS" | "INFLUENCE" | "MOVING" | "CASEREACTIONS";
 
@@ -79,7 +79,7 @@ function arrangementCost(pattern: PatternMode, spans: number): number {
  *   functions do (about twice a case solve's cost, tests/bench/limits.bench.ts).
  */
 export function workOf(kind: StudyKind, c: StudyCounts): number {
-  const { solve, scan, station, resolve } = WORK_WEIGHTS;
+  const { solve, scan, station, repeatedSolve } = WORK_WEIGHTS;
   const size = c.spans + c.loads;
   const live = c.pattern === "none" ? 0 : c.spans;
   const arranged = c.combinations * arrangementCost(c.pattern, c.spans);
@@ -89,13 +89,13 @@ export function workOf(kind: StudyKind, c: StudyCounts): number {
     case "PEAKS":
       return solve * (c.cases + live) * size + scan * arranged * size;
     case "INFLUENCE":
-      return resolve * c.positions * (c.spans + 1);
+      return repeatedSolve * c.positions * (c.spans + 1);
     case "MOVING":
       return c.absoluteMoment
         ? solve * 20 * (c.spans + 2) * c.axles * (c.spans + c.axles)
         : solve * 4 * (c.spans + 2) * (c.spans + 1) + 2 * (c.spans + 2) * c.axles * c.axles;
     case "CASEREACTIONS":
-      return resolve * (c.cases * c.spans + c.loads) + (c.combinations > 0 ? 2 * resolve * size : 0);
+      return repeatedSolve * (c.cases * c.spans + c.loads) + (c.combinations > 0 ? 2 * repeatedSolve * size : 0);
   }
 }
 
