@@ -14,7 +14,7 @@ import fs from "fs";
 import os from "os";
 import path from "path";
 import ExcelJS from "exceljs";
-import { printTable } from "./measure";
+import { median, printTable, reportTarget, type TargetResult } from "./measure";
 
 const ROOT = path.resolve(__dirname, "..", "..");
 const BIN = path.join(ROOT, "src", "cli", "bin", "spanwise.js");
@@ -28,13 +28,18 @@ function wallMs(args: string[], env: NodeJS.ProcessEnv = process.env): number {
   return ms;
 }
 
-function median(values: number[]): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  const mid = sorted.length >> 1;
-  return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
+export interface Startup {
+  /** Wall ms of each `node -e 0`, each built calc, and each pair's ratio (calc over the bare node after it). */
+  bare: number[];
+  fast: number[];
+  ratios: number[];
+  /** Wall ms of the calc compiling every module from source (empty when not asked for). */
+  slow: number[];
+  runs: number;
 }
 
-export async function run(): Promise<void> {
+/** The one-cell calc against `node -e 0`, `runs` pairs in turns; `sourceRuns` calcs compiled from source after them. */
+export async function measureStartup(runs: number, sourceRuns: number): Promise<Startup> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), "spanwise-startup-"));
   try {
     const book = path.join(dir, "one-cell.xlsx");
@@ -44,33 +49,41 @@ export async function run(): Promise<void> {
     const calc = [BIN, "calc", book, "--csv", "Sheet1"];
     const built = { ...process.env, SPANWISE_CLI_BUILD: "require" };
     const source = { ...process.env, SPANWISE_CLI_BUILD: "source" };
-    const runs = Number(process.env.STARTUP_RUNS ?? 9);
     wallMs(["-e", "0"]);
     wallMs(calc, built);
-    const bare: number[] = [];
-    const fast: number[] = [];
-    const ratios: number[] = [];
+    const out: Startup = { bare: [], fast: [], ratios: [], slow: [], runs };
     for (let i = 0; i < runs; i++) {
       const a = wallMs(calc, built);
       const b = wallMs(["-e", "0"]);
-      fast.push(a);
-      bare.push(b);
-      ratios.push(a / b);
+      out.fast.push(a);
+      out.bare.push(b);
+      out.ratios.push(a / b);
     }
-    const slow: number[] = [];
-    for (let i = 0; i < Math.min(3, runs); i++) slow.push(wallMs(calc, source));
-    const load = os.loadavg().map((v) => v.toFixed(2)).join(" ");
-    printTable(
-      ["command", "median wall (ms)", "min", "max", "x node -e 0 (median of pairs)"],
-      [
-        ["node -e 0", median(bare).toFixed(0), Math.min(...bare).toFixed(0), Math.max(...bare).toFixed(0), "1"],
-        ["spanwise calc, built", median(fast).toFixed(0), Math.min(...fast).toFixed(0), Math.max(...fast).toFixed(0), median(ratios).toFixed(1)],
-        ["spanwise calc, compiled from source", median(slow).toFixed(0), Math.min(...slow).toFixed(0), Math.max(...slow).toFixed(0), (median(slow) / median(bare)).toFixed(1)],
-      ],
-    );
-    const ratio = median(ratios);
-    console.log(`  one-cell calc = ${ratio.toFixed(1)} x node -e 0 (target under ${TARGET}: ${ratio < TARGET ? "met" : "NOT met"}); ${runs} pairs; load average ${load}; ${os.cpus().length} cores`);
+    for (let i = 0; i < sourceRuns; i++) out.slow.push(wallMs(calc, source));
+    return out;
   } finally {
     fs.rmSync(dir, { recursive: true, force: true });
   }
+}
+
+/** The start-up target's line from a measurement. */
+export function startupTarget(m: Startup): TargetResult {
+  return { target: "start-up", measured: `one-cell spanwise calc ${median(m.fast).toFixed(0)} ms vs node -e 0 ${median(m.bare).toFixed(0)} ms wall (medians, ${m.runs} pairs)`, ratio: median(m.ratios), ratioOf: "x node -e 0 (median of pairs)", limit: TARGET, below: true };
+}
+
+export async function run(): Promise<void> {
+  const runs = Number(process.env.STARTUP_RUNS ?? 9);
+  const { bare, fast, ratios, slow } = await measureStartup(runs, Math.min(3, runs));
+  const load = os.loadavg().map((v) => v.toFixed(2)).join(" ");
+  printTable(
+    ["command", "median wall (ms)", "min", "max", "x node -e 0 (median of pairs)"],
+    [
+      ["node -e 0", median(bare).toFixed(0), Math.min(...bare).toFixed(0), Math.max(...bare).toFixed(0), "1"],
+      ["spanwise calc, built", median(fast).toFixed(0), Math.min(...fast).toFixed(0), Math.max(...fast).toFixed(0), median(ratios).toFixed(1)],
+      ["spanwise calc, compiled from source", median(slow).toFixed(0), Math.min(...slow).toFixed(0), Math.max(...slow).toFixed(0), (median(slow) / median(bare)).toFixed(1)],
+    ],
+  );
+  const ratio = median(ratios);
+  console.log(`  one-cell calc = ${ratio.toFixed(1)} x node -e 0 (target under ${TARGET}: ${ratio < TARGET ? "met" : "NOT met"}); ${runs} pairs; load average ${load}; ${os.cpus().length} cores`);
+  reportTarget(startupTarget({ bare, fast, ratios, slow, runs }));
 }

@@ -1,0 +1,22 @@
+/**
+ * The functions bundle's size (issue 15's target: `functions.js` at most 70 KB minified,
+ * 1 KB = 1024 bytes), read from the production build users run (`npx webpack --mode
+ * production` writes dist/functions.js), without its source-map comment, as
+ * tests/project/bundleSize.test.ts counts it for the README's figure.
+ */
+import * as fs from "fs";
+import { DIST_FUNCTIONS, reportTarget, type TargetResult } from "./measure";
+
+/** Issue 15's bundle target, KB. */
+const BUNDLE_KB = 70;
+
+export function bundleTarget(file = DIST_FUNCTIONS): TargetResult {
+  if (!fs.existsSync(file)) throw new Error(`${file} is missing: run npx webpack --mode production first`);
+  const code = fs.readFileSync(file, "utf8").replace(/\n\/\/# sourceMappingURL=.*\s*$/, "");
+  const kb = Buffer.byteLength(code, "utf8") / 1024;
+  return { target: "bundle", measured: `dist/functions.js ${kb.toFixed(1)} KB minified (${Buffer.byteLength(code, "utf8")} bytes)`, ratio: kb / BUNDLE_KB, ratioOf: `of ${BUNDLE_KB} KB`, limit: 1 };
+}
+
+export function run(): void {
+  reportTarget(bundleTarget());
+}
