@@ -18,8 +18,9 @@
  * Each scenario prints the process CPU time of its repetitions after the warm-up (median and
  * slowest) and the slowest wall time; each function its worst scenario (by median) against the
  * 200 ms target: PASS when the median and the slowest are within it, else MISS. The machine is shared, so the load average is printed beside the numbers.
+ * Issue 15's arrangements case (PEAKS, full pattern on 12 spans, 14 combinations) also prints
+ * its target line, at most 20 ms per combination (`arrangementsScenario`, used by targets.bench.ts).
  */
-import { createRequire } from "module";
 import * as os from "os";
 import * as path from "path";
 import { performance } from "perf_hooks";
@@ -28,35 +29,17 @@ import * as vm from "vm";
 import { LIMITS, MAX_LOADS, MAX_CASES, MAX_MODES, MAX_VIBRATION_ELEMENTS, MAX_VIBRATION_WORK, WORK_LIMIT, workOf, type StudyCounts, type StudyKind } from "../../src/core";
 import { MAX_SPANS } from "../../src/sheet/lists";
 import { buildAddin } from "../functions/build";
+import { loadBundle, median, reportTarget, type TargetResult } from "./measure";
 
 type Fn = (...args: any[]) => any;
 const REPS = Number(process.env.LIMITS_REPS ?? 5);
 const TARGET_MS = 200;
-
-function loadBundle(dir: string): Record<string, Fn> {
-  const fns: Record<string, Fn> = {};
-  const g = globalThis as { CustomFunctions?: unknown };
-  const previous = g.CustomFunctions;
-  g.CustomFunctions = { associate: (name: string, fn: Fn) => (fns[name] = fn) };
-  try {
-    createRequire(__filename)(path.join(dir, "functions.js"));
-  } finally {
-    g.CustomFunctions = previous;
-  }
-  return fns;
-}
 
 // Collects garbage on request (the flag is set at run time, since the runner starts node plainly).
 v8.setFlagsFromString("--expose-gc");
 const gc = vm.runInNewContext("gc") as () => void;
 function collectGarbage(): void {
   gc();
-}
-
-function median(values: number[]): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  const mid = sorted.length >> 1;
-  return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
 }
 
 function maxOf(values: number[]): number {
@@ -95,6 +78,8 @@ interface Scenario {
   make: () => Call;
   /** The study's size against its budget, when it has one. */
   size?: [number, number];
+  /** Issue 15's target this scenario measures, from its timing. */
+  target?: (t: ScenarioTiming) => TargetResult;
 }
 
 type Call = (f: Record<string, Fn>) => unknown;
@@ -127,6 +112,60 @@ function largest(size: (n: number) => number, budget: number, cap: number): numb
     else hi = mid - 1;
   }
   return lo;
+}
+
+/** Issue 15's arrangements case: SPAN.PEAKS, pattern full on 12 spans, a UDL in each of 4 cases, the ASCE strength set. */
+const ARRANGEMENTS = { spans: 12, loads: 4, cases: 4, pattern: "full", combinations: 14 } as const;
+/** Issue 15's arrangements target: at most 20 ms per combination (the full search was 0.3 s). */
+const ARRANGEMENT_MS = 20;
+
+export function arrangementsScenario(): Scenario {
+  const n = ARRANGEMENTS.combinations;
+  return {
+    fn: "PEAKS",
+    what: `12 spans, 4 loads, full L, ASCE7-2.3.1 (${n} combinations)`,
+    size: study("PEAKS", ARRANGEMENTS),
+    make: () => bind("PEAKS", [spans(ARRANGEMENTS.spans), [["udl 2 D; udl 3 L; udl 1 S; udl 0.5 W"]], [["ASCE7-2.3.1"]], null, EI, "full L", null]),
+    target: (t) => {
+      const each = t.median / n;
+      return { target: "arrangements", measured: `SPAN.PEAKS, full pattern on 12 spans, ${n} combinations: ${t.median.toFixed(1)} ms CPU (median of ${t.reps}; wall up to ${t.wall.toFixed(1)} ms) = ${each.toFixed(2)} ms per combination`, ratio: each / ARRANGEMENT_MS, ratioOf: `of ${ARRANGEMENT_MS} ms per combination`, limit: 1 };
+    },
+  };
+}
+
+export interface ScenarioTiming {
+  /** Process CPU ms of the repetitions after the warm-up: median and slowest; the slowest wall ms. */
+  median: number;
+  worst: number;
+  wall: number;
+  reps: number;
+  /** The last repetition's answer. */
+  result: unknown;
+}
+
+/** Runs a scenario `reps` times (the first a warm-up, when there are several), each on arguments built before the clock and after a collection. */
+export function timeScenario(s: Scenario, fns: Record<string, Fn>, reps = REPS): ScenarioTiming {
+  const cpus: number[] = [];
+  const walls: number[] = [];
+  let result: unknown;
+  for (let rep = 0; rep < reps; rep++) {
+    const call = s.make();
+    collectGarbage();
+    const c0 = process.cpuUsage();
+    const t0 = performance.now();
+    try {
+      result = call(fns);
+    } catch (error) {
+      result = `ERROR ${(error as { message?: string }).message}`;
+    }
+    const w = performance.now() - t0;
+    const c = process.cpuUsage(c0);
+    // The first repetition warms the JIT; the others are reported.
+    if (rep === 0 && reps > 1) continue;
+    cpus.push((c.user + c.system) / 1000);
+    walls.push(w);
+  }
+  return { median: median(cpus), worst: maxOf(cpus), wall: maxOf(walls), reps: cpus.length, result };
 }
 
 function scenarios(): Scenario[] {
@@ -209,17 +248,13 @@ function scenarios(): Scenario[] {
 
   // PEAKS: the issue 15 case (full pattern on 12 spans, the ASCE strength set), then the size limit.
   {
-    const C = LIMITS.combinations;
-    out.push({ fn: "PEAKS", what: "12 spans, 4 loads, full L, ASCE7-2.3.1 (14 combinations)", size: study("PEAKS", { spans: 12, loads: 4, cases: 4, pattern: "full", combinations: 14 }), make: () => bind("PEAKS", [spans(12), [["udl 2 D; udl 3 L; udl 1 S; udl 0.5 W"]], [["ASCE7-2.3.1"]], null, EI, "full L", null]) });
+    out.push(arrangementsScenario());
+    // Per pattern, combinations first (up to their limit, with 4 loads), then loads (with those combinations).
     for (const pattern of ["full", "standard", "none"] as const) {
-      const L = largest((n) => study("PEAKS", { spans: 12, loads: n, cases: 4, pattern, combinations: C })[0], WORK_LIMIT, MAX_LOADS);
-      if (study("PEAKS", { spans: 12, loads: L, cases: 4, pattern, combinations: C })[0] > WORK_LIMIT) {
-        // Too large even with one load: the most combinations the size limit lets through with 4 loads.
-        const k = largest((m) => study("PEAKS", { spans: 12, loads: 4, cases: 4, pattern, combinations: m })[0], WORK_LIMIT, C);
-        out.push({ fn: "PEAKS", what: `12 spans, 4 loads, ${pattern} L, ${k} combinations`, size: study("PEAKS", { spans: 12, loads: 4, cases: 4, pattern, combinations: k }), make: () => bind("PEAKS", [spans(12), loads(4, 60), combinations(k), null, EI, `${pattern} L`, null]) });
-        continue;
-      }
-      out.push({ fn: "PEAKS", what: `12 spans, ${L} loads, ${pattern} L, ${C} combinations`, size: study("PEAKS", { spans: 12, loads: L, cases: 4, pattern, combinations: C }), make: () => bind("PEAKS", [spans(12), loads(L, 60), combinations(C), null, EI, `${pattern} L`, null]) });
+      const peaks = (loads: number, combinations: number) => study("PEAKS", { spans: 12, loads, cases: 4, pattern, combinations });
+      const k = largest((m) => peaks(4, m)[0], WORK_LIMIT, LIMITS.combinations);
+      const L = largest((n) => peaks(n, k)[0], WORK_LIMIT, MAX_LOADS);
+      out.push({ fn: "PEAKS", what: `12 spans, ${L} loads, ${pattern} L, ${k} combinations`, size: peaks(L, k), make: () => bind("PEAKS", [spans(12), loads(L, 60), combinations(k), null, EI, `${pattern} L`, null]) });
     }
     const one = { spans: MAX_SPANS, cases: 1, combinations: 1 };
     const L = largest((k) => study("PEAKS", { ...one, loads: k })[0], WORK_LIMIT, MAX_LOADS);
@@ -263,7 +298,7 @@ function outcome(value: unknown): string {
 
 export async function run(): Promise<void> {
   const dir = await buildAddin();
-  const fns = loadBundle(dir);
+  const fns = loadBundle(path.join(dir, "functions.js"));
   const names = Object.keys(fns);
   console.log(`production bundle ${path.join(dir, "functions.js")} (${names.length} functions)`);
   const before = os.loadavg();
@@ -272,32 +307,12 @@ export async function run(): Promise<void> {
   // LIMITS_ONLY=MOVING,PEAKS measures those functions only.
   const only = process.env.LIMITS_ONLY ? process.env.LIMITS_ONLY.split(",") : null;
   for (const s of scenarios().filter((c) => !only || only.includes(c.fn))) {
-    const cpus: number[] = [];
-    const walls: number[] = [];
-    let result: unknown;
-    for (let rep = 0; rep < REPS; rep++) {
-      const call = s.make();
-      collectGarbage();
-      const c0 = process.cpuUsage();
-      const t0 = performance.now();
-      try {
-        result = call(fns);
-      } catch (error) {
-        result = `ERROR ${(error as { message?: string }).message}`;
-      }
-      const w = performance.now() - t0;
-      const c = process.cpuUsage(c0);
-      // The first repetition warms the JIT; the others are reported.
-      if (rep === 0 && REPS > 1) continue;
-      cpus.push((c.user + c.system) / 1000);
-      walls.push(w);
-    }
-    const cpu = { median: median(cpus), worst: maxOf(cpus) };
-    const wall = maxOf(walls);
+    const t = timeScenario(s, fns);
     const size = s.size ? `  size ${s.size[0]} of ${s.size[1]}` : "";
-    console.log(`  ${s.fn.padEnd(15)} ${s.what.padEnd(58)} CPU median ${cpu.median.toFixed(1).padStart(6)} worst ${cpu.worst.toFixed(1).padStart(6)} ms  wall max ${wall.toFixed(1).padStart(7)} ms  ${outcome(result)}${size}`);
+    console.log(`  ${s.fn.padEnd(15)} ${s.what.padEnd(58)} CPU median ${t.median.toFixed(1).padStart(6)} worst ${t.worst.toFixed(1).padStart(6)} ms  wall max ${t.wall.toFixed(1).padStart(7)} ms  ${outcome(t.result)}${size}`);
+    if (s.target) reportTarget(s.target(t));
     const w = worst.get(s.fn);
-    if (!w || cpu.median > w.median) worst.set(s.fn, { ...cpu, wall, what: s.what });
+    if (!w || t.median > w.median) worst.set(s.fn, { median: t.median, worst: t.worst, wall: t.wall, what: s.what });
   }
   console.log(`\nworst scenario per function (by median; process CPU of ${Math.max(1, REPS - 1)} repetitions after a warm-up: median and slowest; target ${TARGET_MS} ms):`);
   for (const name of names) {
