@@ -246,7 +246,7 @@ export function solve(member: Member): Solution {
   const nodeX = nodePositions(member.spans);
   checkStability(member, nodeX);
   const assembly = assembleMember(member, nodeX, true);
-  const { layout, spanLoads } = assembly;
+  const { layout, loads } = assembly;
   const solved = solveInDouble(member, assembly) ?? preciseAnswer(member, assembly);
   const { d, ends } = solved;
   const nodeCount = nodeX.length;
@@ -271,7 +271,7 @@ export function solve(member: Member): Solution {
     start.moment = ends[at + 1];
     start.slope = slopeDof >= 0 ? d[slopeDof] : 0;
     start.deflection = deflectionDof >= 0 ? d[deflectionDof] : settlement === null ? 0 : prescribedDisplacement(layout, e, 0);
-    integrateSpan(start, spanLoads[e], member.spans[e], nodeX[e], nodeX[e + 1], 1 / layout.stiffness[e], pieces, layout.shearFlexibility[e]);
+    integrateSpan(start, loads, e, member.spans[e], nodeX[e], nodeX[e + 1], 1 / layout.stiffness[e], pieces, layout.shearFlexibility[e]);
   }
   const loadScale = loadScaleOf(member, layout.length) + settlementScale(member, layout);
   const reactions = reactionsOf(member, layout, d, loadScale);
