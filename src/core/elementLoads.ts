@@ -135,9 +135,18 @@ function splitInto(table: SpanLoadTable, nodeX: number[], spans: number[], loads
   // Grouped by span, each span's entries kept in the member's order (a stable counting sort).
   ensureTable(table, n, 0, spanCount);
   const start = table.start;
-  start.fill(0, 0, spanCount + 1);
-  for (let k = 0; k < n; k++) start[pendingSpan[k] + 1]++;
+  for (let e = 0; e <= spanCount; e++) start[e] = 0;
+  let sorted = true;
+  for (let k = 0; k < n; k++) {
+    start[pendingSpan[k] + 1]++;
+    if (k > 0 && pendingSpan[k] < pendingSpan[k - 1]) sorted = false;
+  }
   for (let e = 0; e < spanCount; e++) start[e + 1] += start[e];
+  if (sorted) {
+    // Loads listed left to right are grouped already: the pending arrays become the table's.
+    swapEntries(table, pending);
+    return table;
+  }
   for (let k = 0; k < n; k++) {
     const e = pendingSpan[k];
     // start[e] runs ahead while span e's entries are placed, and is restored below.
@@ -153,6 +162,25 @@ function splitInto(table: SpanLoadTable, nodeX: number[], spans: number[], loads
   for (let e = spanCount; e > 0; e--) start[e] = start[e - 1];
   start[0] = 0;
   return table;
+}
+
+/** Exchanges the entry arrays (not the span starts) of two tables. */
+function swapEntries(a: SpanLoadTable, b: SpanLoadTable): void {
+  const { kind, from, to, xFrom, xTo, q0, q1 } = a;
+  a.kind = b.kind;
+  a.from = b.from;
+  a.to = b.to;
+  a.xFrom = b.xFrom;
+  a.xTo = b.xTo;
+  a.q0 = b.q0;
+  a.q1 = b.q1;
+  b.kind = kind;
+  b.from = from;
+  b.to = to;
+  b.xFrom = xFrom;
+  b.xTo = xTo;
+  b.q0 = q0;
+  b.q1 = q1;
 }
 
 /** The loads of span e of a table as SpanLoad objects. */

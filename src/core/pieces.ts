@@ -136,11 +136,14 @@ export function integrateSpan(
   shearFlexibility = 0,
 ): void {
   const count = breakpoints(loads, e, span, xLeft, xRight);
-  force.fill(0, 0, count);
-  couple.fill(0, 0, count);
-  intensity.fill(0, 0, count);
-  rate.fill(0, 0, count);
-  opened.fill(0, 0, count);
+  // A loop, not five fill calls: a span has only a few breakpoints.
+  for (let k = 0; k < count; k++) {
+    force[k] = 0;
+    couple[k] = 0;
+    intensity[k] = 0;
+    rate[k] = 0;
+    opened[k] = 0;
+  }
   for (let j = loads.start[e]; j < loads.start[e + 1]; j++) {
     const kind = loads.kind[j];
     if (kind === FORCE) force[indexOf(count, loads.from[j])] += loads.q0[j];

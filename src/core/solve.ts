@@ -254,8 +254,10 @@ export function solve(member: Member): Solution {
     nodeForce = new Float64Array(Math.max(nodeCount, 2 * nodeForce.length));
     nodeMoment = new Float64Array(nodeForce.length);
   }
-  nodeForce.fill(0, 0, nodeCount);
-  nodeMoment.fill(0, 0, nodeCount);
+  for (let i = 0; i < nodeCount; i++) {
+    nodeForce[i] = 0;
+    nodeMoment[i] = 0;
+  }
   const pieces: Piece[] = [];
   const spanCount = member.spans.length;
   const { settlement } = layout;

@@ -145,8 +145,8 @@ export function assembleMember(member: Member, nodeX?: number[], reuse = false):
     rhs = scratchRhs = atLeast(scratchRhs, n);
     matrices = scratchMatrices = atLeast(scratchMatrices, 16 * spanCount);
     nodal = scratchNodal = atLeast(scratchNodal, 4 * spanCount);
-    band.fill(0, 0, n * stride);
-    rhs.fill(0, 0, n);
+    for (let i = n * stride - 1; i >= 0; i--) band[i] = 0;
+    for (let i = 0; i < n; i++) rhs[i] = 0;
   } else {
     band = new Float64Array(n * stride);
     rhs = new Float64Array(n);
