@@ -31,15 +31,25 @@ export function twoSum(a: number, b: number): DD {
   return { hi: s, lo: a - (s - v) + (b - v) };
 }
 
+/** The high half of a (Veltkamp's split, 26 bits); the low half is a - highPart(a), exactly. */
+export function highPart(a: number): number {
+  const ca = SPLITTER * a;
+  return ca - (ca - a);
+}
+
+/**
+ * The rounding error of p = a * b from the halves of a (ah, al) and b (bh, bl), so that a
+ * factor used in several products is split once: the same operations as productError.
+ */
+export function splitProductError(ah: number, al: number, bh: number, bl: number, p: number): number {
+  return ah * bh - p + ah * bl + al * bh + al * bl;
+}
+
 /** The rounding error of the product p = a * b (Dekker's split): a * b = p + productError(a, b, p) exactly. No allocation. */
 export function productError(a: number, b: number, p: number): number {
-  const ca = SPLITTER * a;
-  const ah = ca - (ca - a);
-  const al = a - ah;
-  const cb = SPLITTER * b;
-  const bh = cb - (cb - b);
-  const bl = b - bh;
-  return ah * bh - p + ah * bl + al * bh + al * bl;
+  const ah = highPart(a);
+  const bh = highPart(b);
+  return splitProductError(ah, a - ah, bh, b - bh, p);
 }
 
 /** a * b exactly, as a double-double (Dekker). */

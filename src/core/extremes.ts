@@ -1,6 +1,6 @@
 import { requireStiffness } from "./evaluate";
 import type { Extreme, Piece, Quantity, Solution } from "./model";
-import { coefficients, derivative, pieceValue } from "./polynomial";
+import { coefficients, derivative, momentAt, pieceValue, shearAt } from "./polynomial";
 import { rootsBetween } from "./roots";
 import { cleanZero, RELATIVE_ZERO } from "./tolerance";
 
@@ -57,50 +57,65 @@ function lowRoots(terms: number, c0: number, c1: number, c2: number, hi: number)
   return count;
 }
 
-/**
- * Roots of the quantity's derivative strictly inside a piece (0, span), into `roots` for shear
- * and moment (their derivatives are at most quadratic), or returned as a list for slope and
- * deflection; the count when written into `roots`.
- */
-function turningPoints(piece: Piece, quantity: Quantity, span: number): number | number[] {
-  const { shear0: v, q0, q1 } = piece;
-  // The derivative's coefficients, i * c[i] of the quantity's own (polynomial.coefficients).
-  if (quantity === "shear") return lowRoots(2, 1 * -q0, 2 * (-q1 / 2), 0, span);
-  if (quantity === "moment") return lowRoots(3, 1 * v, 2 * (-q0 / 2), 3 * (-q1 / 6), span);
-  return rootsBetween(derivative(coefficients(piece, quantity)), 0, span);
+/** Makes room for `more` candidates after the first n (keeping them); room for 4 a piece for the `left` pieces after. */
+function makeRoom(n: number, more: number, left: number): void {
+  if (n + more <= capacity) return;
+  const x = candidateX.subarray(0, n).slice();
+  const value = candidateValue.subarray(0, n).slice();
+  ensureCapacity(n + more + 4 * left);
+  candidateX.set(x);
+  candidateValue.set(value);
 }
 
 /**
  * Every place a quantity can peak, into the scratch lists; returns how many: both ends of
  * every piece (so both sides of every jump) and every interior root of its derivative, found
- * from the polynomials themselves, each value cleaned against the quantity's scale.
+ * from the polynomials themselves, each value cleaned against the quantity's scale. Shear and
+ * moment (derivatives at most quadratic) take their roots and values in scalars.
  */
 function gather(solution: Solution, quantity: Quantity): number {
   const { pieces } = solution;
   const scale = solution.scales[quantity];
   ensureCapacity(4 * pieces.length);
+  if (quantity === "moment" || quantity === "shear") return gatherLow(pieces, quantity === "moment", scale);
   let n = 0;
   for (let i = 0; i < pieces.length; i++) {
     const piece = pieces[i];
     const span = piece.x1 - piece.x0;
-    const turning = turningPoints(piece, quantity, span);
-    const inside = typeof turning === "number" ? turning : turning.length;
-    if (n + inside + 2 > capacity) {
-      const x = candidateX.subarray(0, n).slice();
-      const value = candidateValue.subarray(0, n).slice();
-      ensureCapacity(n + inside + 2 + 4 * (pieces.length - i));
-      candidateX.set(x);
-      candidateValue.set(value);
-    }
+    const turning = rootsBetween(derivative(coefficients(piece, quantity)), 0, span);
+    const inside = turning.length;
+    makeRoom(n, inside + 2, pieces.length - i);
     candidateX[n] = piece.x0;
     candidateValue[n++] = cleanZero(pieceValue(piece, quantity, 0), scale);
     for (let k = 0; k < inside; k++) {
-      const s = typeof turning === "number" ? roots[k] : turning[k];
+      const s = turning[k];
       candidateX[n] = piece.x0 + s;
       candidateValue[n++] = cleanZero(pieceValue(piece, quantity, s), scale);
     }
     candidateX[n] = piece.x1;
     candidateValue[n++] = cleanZero(pieceValue(piece, quantity, span), scale);
+  }
+  return n;
+}
+
+/** gather for moment (or shear): at most 2 interior roots a piece, so room for 4 a piece is always enough. */
+function gatherLow(pieces: Piece[], moment: boolean, scale: number): number {
+  let n = 0;
+  for (let i = 0; i < pieces.length; i++) {
+    const piece = pieces[i];
+    const { shear0: v, moment0: m, q0, q1 } = piece;
+    const span = piece.x1 - piece.x0;
+    // The derivative's coefficients, i * c[i] of the quantity's own (polynomial.coefficients).
+    const inside = moment ? lowRoots(3, 1 * v, 2 * (-q0 / 2), 3 * (-q1 / 6), span) : lowRoots(2, 1 * -q0, 2 * (-q1 / 2), 0, span);
+    candidateX[n] = piece.x0;
+    candidateValue[n++] = cleanZero(moment ? momentAt(m, v, q0, q1, 0) : shearAt(v, q0, q1, 0), scale);
+    for (let k = 0; k < inside; k++) {
+      const s = roots[k];
+      candidateX[n] = piece.x0 + s;
+      candidateValue[n++] = cleanZero(moment ? momentAt(m, v, q0, q1, s) : shearAt(v, q0, q1, s), scale);
+    }
+    candidateX[n] = piece.x1;
+    candidateValue[n++] = cleanZero(moment ? momentAt(m, v, q0, q1, span) : shearAt(v, q0, q1, span), scale);
   }
   return n;
 }

@@ -95,7 +95,7 @@ function shearFlexibilitiesInto(member: Member, out: Float64Array): void {
   const shear = member.shear;
   const spanCount = member.spans.length;
   if (shear === undefined || shear === null) {
-    out.fill(0, 0, spanCount);
+    for (let i = 0; i < spanCount; i++) out[i] = 0;
     return;
   }
   for (let i = 0; i < spanCount; i++) {

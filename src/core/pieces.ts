@@ -1,4 +1,4 @@
-import type { SpanLoad } from "./elementLoads";
+import { COUPLE, DISTRIBUTED, FORCE, type SpanLoadTable } from "./elementLoads";
 import type { Piece } from "./model";
 
 /** Values just right of a span's left node, before any load sitting on that node. */
@@ -47,9 +47,11 @@ const INSERTION_LIMIT = 24;
  * a load's own x), into `points` and `places`; returns their count. Candidates are the span's
  * ends and every load's positions, ordered stably (on equal t the first listed gives the x).
  */
-function breakpoints(loads: SpanLoad[], span: number, xLeft: number, xRight: number): number {
+function breakpoints(loads: SpanLoadTable, e: number, span: number, xLeft: number, xRight: number): number {
+  const first = loads.start[e];
+  const last = loads.start[e + 1];
   let n = 2;
-  for (let i = 0; i < loads.length; i++) n += loads[i].kind === "distributed" ? 2 : 1;
+  for (let j = first; j < last; j++) n += loads.kind[j] === DISTRIBUTED ? 2 : 1;
   ensureCapacity(n);
   const ts = candidateT;
   const xs = candidateX;
@@ -58,16 +60,12 @@ function breakpoints(loads: SpanLoad[], span: number, xLeft: number, xRight: num
   ts[1] = span;
   xs[1] = xRight;
   let m = 2;
-  for (let i = 0; i < loads.length; i++) {
-    const load = loads[i];
-    if (load.kind === "distributed") {
-      ts[m] = load.from;
-      xs[m++] = load.xFrom;
-      ts[m] = load.to;
-      xs[m++] = load.xTo;
-    } else {
-      ts[m] = load.at;
-      xs[m++] = load.x;
+  for (let j = first; j < last; j++) {
+    ts[m] = loads.from[j];
+    xs[m++] = loads.xFrom[j];
+    if (loads.kind[j] === DISTRIBUTED) {
+      ts[m] = loads.to[j];
+      xs[m++] = loads.xTo[j];
     }
   }
   if (m <= INSERTION_LIMIT) {
@@ -128,7 +126,8 @@ function indexOf(count: number, t: number): number {
  */
 export function integrateSpan(
   start: SpanStart,
-  loads: SpanLoad[],
+  loads: SpanLoadTable,
+  e: number,
   span: number,
   xLeft: number,
   xRight: number,
@@ -136,23 +135,28 @@ export function integrateSpan(
   out: Piece[],
   shearFlexibility = 0,
 ): void {
-  const count = breakpoints(loads, span, xLeft, xRight);
-  force.fill(0, 0, count);
-  couple.fill(0, 0, count);
-  intensity.fill(0, 0, count);
-  rate.fill(0, 0, count);
-  opened.fill(0, 0, count);
-  for (let i = 0; i < loads.length; i++) {
-    const load = loads[i];
-    if (load.kind === "force") force[indexOf(count, load.at)] += load.value;
-    else if (load.kind === "couple") couple[indexOf(count, load.at)] += load.value;
+  const count = breakpoints(loads, e, span, xLeft, xRight);
+  // A loop, not five fill calls: a span has only a few breakpoints.
+  for (let k = 0; k < count; k++) {
+    force[k] = 0;
+    couple[k] = 0;
+    intensity[k] = 0;
+    rate[k] = 0;
+    opened[k] = 0;
+  }
+  for (let j = loads.start[e]; j < loads.start[e + 1]; j++) {
+    const kind = loads.kind[j];
+    if (kind === FORCE) force[indexOf(count, loads.from[j])] += loads.q0[j];
+    else if (kind === COUPLE) couple[indexOf(count, loads.from[j])] += loads.q0[j];
     else {
-      const slope = (load.q1 - load.q0) / (load.to - load.from);
-      const from = indexOf(count, load.from);
-      const to = indexOf(count, load.to);
-      intensity[from] += load.q0;
+      const q0 = loads.q0[j];
+      const q1 = loads.q1[j];
+      const slope = (q1 - q0) / (loads.to[j] - loads.from[j]);
+      const from = indexOf(count, loads.from[j]);
+      const to = indexOf(count, loads.to[j]);
+      intensity[from] += q0;
       rate[from] += slope;
-      intensity[to] -= load.q1;
+      intensity[to] -= q1;
       rate[to] -= slope;
       opened[from] += 1;
       opened[to] -= 1;

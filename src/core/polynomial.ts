@@ -36,15 +36,34 @@ export function derivative(c: number[]): number[] {
   return d;
 }
 
+/**
+ * The quantities at s = x - x0 of a piece given by its fields (v = shear0, m = moment0,
+ * th = slope0, w = deflection0, f = flexibility, g = shearFlexibility): the one arithmetic of
+ * a piece's values, shared by pieceValue and the solver's sweeps over pieces (same operations,
+ * so the same bits, without a piece object or a quantity name).
+ */
+export function shearAt(v: number, q0: number, q1: number, s: number): number {
+  return v - s * (q0 + (q1 * s) / 2);
+}
+
+export function momentAt(m: number, v: number, q0: number, q1: number, s: number): number {
+  return m + s * (v - s * (q0 / 2 + (q1 * s) / 6));
+}
+
+export function slopeAt(th: number, m: number, v: number, q0: number, q1: number, f: number, s: number): number {
+  return th - f * s * (m + s * (v / 2 - s * (q0 / 6 + (q1 * s) / 24)));
+}
+
+export function deflectionAt(w: number, th: number, m: number, v: number, q0: number, q1: number, f: number, g: number, s: number): number {
+  const bending = w + th * s - f * (s * s) * (m / 2 + s * (v / 6 - s * (q0 / 24 + (q1 * s) / 120)));
+  return g > 0 ? bending + g * s * (v - s * (q0 / 2 + (q1 * s) / 6)) : bending;
+}
+
 /** The value of a quantity on a piece at s = x - x0, without building coefficient arrays. */
 export function pieceValue(piece: Piece, quantity: Quantity, s: number): number {
   const { shear0: v, moment0: m, q0, q1 } = piece;
-  if (quantity === "shear") return v - s * (q0 + (q1 * s) / 2);
-  if (quantity === "moment") return m + s * (v - s * (q0 / 2 + (q1 * s) / 6));
-  const f = piece.flexibility;
-  const s2 = s * s;
-  if (quantity === "slope") return piece.slope0 - f * s * (m + s * (v / 2 - s * (q0 / 6 + (q1 * s) / 24)));
-  const bending = piece.deflection0 + piece.slope0 * s - f * s2 * (m / 2 + s * (v / 6 - s * (q0 / 24 + (q1 * s) / 120)));
-  const g = piece.shearFlexibility;
-  return g > 0 ? bending + g * s * (v - s * (q0 / 2 + (q1 * s) / 6)) : bending;
+  if (quantity === "shear") return shearAt(v, q0, q1, s);
+  if (quantity === "moment") return momentAt(m, v, q0, q1, s);
+  if (quantity === "slope") return slopeAt(piece.slope0, m, v, q0, q1, piece.flexibility, s);
+  return deflectionAt(piece.deflection0, piece.slope0, m, v, q0, q1, piece.flexibility, piece.shearFlexibility, s);
 }

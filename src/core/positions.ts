@@ -77,11 +77,23 @@ export interface Located {
 }
 
 export function locate(nodeX: readonly number[], spans: readonly number[], x: number): Located {
+  return locateInto(nodeX, spans, x, { span: 0, t: 0, node: -1 });
+}
+
+/** locate, written into `out` (returned), so that a caller placing many loads builds no object per load. */
+export function locateInto(nodeX: readonly number[], spans: readonly number[], x: number, out: Located): Located {
   const node = nodeIndexAt(nodeX, x);
   const last = spans.length - 1;
-  if (node >= 0) return node > last ? { span: last, t: spans[last], node } : { span: node, t: 0, node };
+  out.node = node;
+  if (node >= 0) {
+    out.span = node > last ? last : node;
+    out.t = node > last ? spans[last] : 0;
+    return out;
+  }
   const span = spanIndexAt(nodeX, x);
-  return { span, t: Math.min(Math.max(x - nodeX[span], 0), spans[span]), node };
+  out.span = span;
+  out.t = Math.min(Math.max(x - nodeX[span], 0), spans[span]);
+  return out;
 }
 
 /**

@@ -9,7 +9,7 @@
  *   the final reactions against the loads, which the solver refuses to report when it fails.
  */
 import { factorBanded, solveFactored, type PivotStats } from "./banded";
-import { productError } from "./doubleDouble";
+import { highPart, productError, splitProductError } from "./doubleDouble";
 import type { Load, Reaction } from "./model";
 import type { StiffnessSystem } from "./stiffness";
 
@@ -44,25 +44,53 @@ export function residualOf(system: StiffnessSystem, d: Float64Array): Float64Arr
   return r;
 }
 
+/** The halves of an element's four local displacements (each is a factor of four products). */
+const localHigh = new Float64Array(4);
+const localLow = new Float64Array(4);
+
 /**
- * Row r of a 4x4 element matrix (row-major from `at` in k) times the element's displacements
- * (from `localAt` in local), minus its nodal load, in double-double.
+ * An element's four end forces K_e u - f (row r of the 4x4 matrix, row-major from `at` in k,
+ * times the local displacements `local`, minus nodal load r from `nodalAt`), each row summed
+ * in double-double, into `ends` from `endsAt`; and into `terms` (4 entries) the sum of the
+ * magnitudes of each row's terms (|f| + Σ|k u|), the size its rounding is relative to. Each
+ * displacement is split once for its four products.
  */
-export function endForce(k: ArrayLike<number>, r: number, local: ArrayLike<number>, nodalLoad: number, at = 0, localAt = 0): number {
-  let hi = -nodalLoad;
-  let lo = 0;
+export function elementEndForces(
+  k: ArrayLike<number>,
+  at: number,
+  local: ArrayLike<number>,
+  nodal: ArrayLike<number>,
+  nodalAt: number,
+  ends: Float64Array,
+  endsAt: number,
+  terms: Float64Array,
+): void {
   for (let c = 0; c < 4; c++) {
-    const a = k[at + r * 4 + c];
-    const b = local[localAt + c];
-    const p = a * b;
-    const pe = productError(a, b, p);
-    const s = hi + p;
-    const v = s - hi;
-    const se = hi - (s - v) + (p - v);
-    hi = s;
-    lo += se + pe;
+    const b = local[c];
+    const bh = highPart(b);
+    localHigh[c] = bh;
+    localLow[c] = b - bh;
   }
-  return hi + lo;
+  for (let r = 0; r < 4; r++) {
+    const f = nodal[nodalAt + r];
+    let hi = -f;
+    let lo = 0;
+    let sum = Math.abs(f);
+    for (let c = 0; c < 4; c++) {
+      const a = k[at + r * 4 + c];
+      const p = a * local[c];
+      const ah = highPart(a);
+      const pe = splitProductError(ah, a - ah, localHigh[c], localLow[c], p);
+      const s = hi + p;
+      const v = s - hi;
+      const se = hi - (s - v) + (p - v);
+      hi = s;
+      lo += se + pe;
+      sum += Math.abs(p);
+    }
+    ends[endsAt + r] = hi + lo;
+    terms[r] = sum;
+  }
 }
 
 const REFINEMENT_STEPS = 3;

@@ -2,9 +2,9 @@ import { isCollapsedPivot, type PivotStats } from "./banded";
 import { elementDof, nodePositions, prescribedDisplacement, rotationalSpring, type Layout } from "./layout";
 import { solvePrecise, worstStiffnessRatio } from "./precise";
 import type { Member, Piece, Quantity, Reaction, Solution } from "./model";
-import { pieceValue } from "./polynomial";
+import { deflectionAt, momentAt, shearAt, slopeAt } from "./polynomial";
 import { cleanZero, EQUILIBRIUM_TOLERANCE } from "./tolerance";
-import { endForce, solveRefined, staticsResidual } from "./refine";
+import { elementEndForces, solveRefined, staticsResidual } from "./refine";
 import { invalid } from "./errors";
 import { integrateSpan, type SpanStart } from "./pieces";
 import { checkStability } from "./stability";
@@ -67,25 +67,27 @@ function scalesOf(pieces: Piece[], forceTerms: number, momentTerms: number): Rec
     const p = pieces[i];
     const span = p.x1 - p.x0;
     const half = 0.5 * span;
+    const { shear0: v, moment0: m, slope0: th, deflection0: w, q0, q1, flexibility: f, shearFlexibility: g } = p;
+    // pieceValue's arithmetic without its quantity name (polynomial.ts): the same operations, so the same bits.
     // Shear is linear in a piece without a varying load, so its ends hold its largest value.
-    shear = Math.max(shear, Math.abs(pieceValue(p, "shear", 0)), Math.abs(pieceValue(p, "shear", span)));
-    if (p.q1 !== 0) shear = Math.max(shear, Math.abs(pieceValue(p, "shear", half)));
-    moment = Math.max(moment, Math.abs(pieceValue(p, "moment", 0)), Math.abs(pieceValue(p, "moment", span)));
-    moment = Math.max(moment, Math.abs(pieceValue(p, "moment", half)));
-    slope = Math.max(slope, Math.abs(pieceValue(p, "slope", 0)), Math.abs(pieceValue(p, "slope", span)));
-    slope = Math.max(slope, Math.abs(pieceValue(p, "slope", half)));
-    deflection = Math.max(deflection, Math.abs(pieceValue(p, "deflection", 0)), Math.abs(pieceValue(p, "deflection", span)));
-    deflection = Math.max(deflection, Math.abs(pieceValue(p, "deflection", half)));
+    shear = Math.max(shear, Math.abs(shearAt(v, q0, q1, 0)), Math.abs(shearAt(v, q0, q1, span)));
+    if (q1 !== 0) shear = Math.max(shear, Math.abs(shearAt(v, q0, q1, half)));
+    moment = Math.max(moment, Math.abs(momentAt(m, v, q0, q1, 0)), Math.abs(momentAt(m, v, q0, q1, span)));
+    moment = Math.max(moment, Math.abs(momentAt(m, v, q0, q1, half)));
+    slope = Math.max(slope, Math.abs(slopeAt(th, m, v, q0, q1, f, 0)), Math.abs(slopeAt(th, m, v, q0, q1, f, span)));
+    slope = Math.max(slope, Math.abs(slopeAt(th, m, v, q0, q1, f, half)));
+    deflection = Math.max(deflection, Math.abs(deflectionAt(w, th, m, v, q0, q1, f, g, 0)), Math.abs(deflectionAt(w, th, m, v, q0, q1, f, g, span)));
+    deflection = Math.max(deflection, Math.abs(deflectionAt(w, th, m, v, q0, q1, f, g, half)));
     // The sum of the magnitudes of each quantity's terms at the end of the piece: the size its rounding is relative to.
-    const m = Math.abs(p.moment0);
-    const load = Math.abs(p.shear0) + Math.abs(p.q0) * span + Math.abs(p.q1) * span * span;
-    const bending = p.flexibility * span * (m + load * span);
+    const bendingMoment = Math.abs(m);
+    const load = Math.abs(v) + Math.abs(q0) * span + Math.abs(q1) * span * span;
+    const bending = f * span * (bendingMoment + load * span);
     shearTerms = Math.max(shearTerms, load);
-    momentTermsOfPieces = Math.max(momentTermsOfPieces, m + load * span);
-    slopeTerms = Math.max(slopeTerms, Math.abs(p.slope0) + bending);
-    let deflectionTerm = Math.abs(p.deflection0) + Math.abs(p.slope0) * span + bending * span;
+    momentTermsOfPieces = Math.max(momentTermsOfPieces, bendingMoment + load * span);
+    slopeTerms = Math.max(slopeTerms, Math.abs(th) + bending);
+    let deflectionTerm = Math.abs(w) + Math.abs(th) * span + bending * span;
     // With shear deformation the deflection also sums V/(G·A_v) over the piece.
-    if (p.shearFlexibility > 0) deflectionTerm += p.shearFlexibility * span * load;
+    if (g > 0) deflectionTerm += g * span * load;
     deflectionTerms = Math.max(deflectionTerms, deflectionTerm);
   }
   return {
@@ -152,6 +154,7 @@ const answer: StiffnessAnswer = { d: EMPTY, ends: EMPTY, forceTerms: 0, momentTe
 const pivotStats: PivotStats = { smallestPivotRatio: 1 };
 let scratchEnds = new Float64Array(16);
 const local = new Float64Array(4);
+const rowTerms = new Float64Array(4);
 
 function endsBuffer(spanCount: number): Float64Array {
   if (scratchEnds.length < 4 * spanCount) scratchEnds = new Float64Array(Math.max(4 * spanCount, 2 * scratchEnds.length));
@@ -186,12 +189,10 @@ function solveInDouble(member: Member, assembly: Assembly): StiffnessAnswer | nu
       // A restrained DOF moves by its settlement (prescribed), else not at all.
       local[c] = dof >= 0 ? d[dof] : settlement === null ? 0 : prescribedDisplacement(layout, e, c);
     }
+    elementEndForces(matrices, km, local, nodalLoads, 4 * e, ends, 4 * e, rowTerms);
     for (let r = 0; r < 4; r++) {
-      const f = nodalLoads[4 * e + r];
-      const end = endForce(matrices, r, local, f, km);
-      ends[4 * e + r] = end;
-      let terms = Math.abs(f);
-      for (let c = 0; c < 4; c++) terms += Math.abs(matrices[km + r * 4 + c] * local[c]);
+      const end = ends[4 * e + r];
+      const terms = rowTerms[r];
       if (r % 2 === 0) {
         forceTerms = Math.max(forceTerms, terms);
         forces = Math.max(forces, Math.abs(end));
@@ -245,7 +246,7 @@ export function solve(member: Member): Solution {
   const nodeX = nodePositions(member.spans);
   checkStability(member, nodeX);
   const assembly = assembleMember(member, nodeX, true);
-  const { layout, spanLoads } = assembly;
+  const { layout, loads } = assembly;
   const solved = solveInDouble(member, assembly) ?? preciseAnswer(member, assembly);
   const { d, ends } = solved;
   const nodeCount = nodeX.length;
@@ -253,8 +254,10 @@ export function solve(member: Member): Solution {
     nodeForce = new Float64Array(Math.max(nodeCount, 2 * nodeForce.length));
     nodeMoment = new Float64Array(nodeForce.length);
   }
-  nodeForce.fill(0, 0, nodeCount);
-  nodeMoment.fill(0, 0, nodeCount);
+  for (let i = 0; i < nodeCount; i++) {
+    nodeForce[i] = 0;
+    nodeMoment[i] = 0;
+  }
   const pieces: Piece[] = [];
   const spanCount = member.spans.length;
   const { settlement } = layout;
@@ -270,7 +273,7 @@ export function solve(member: Member): Solution {
     start.moment = ends[at + 1];
     start.slope = slopeDof >= 0 ? d[slopeDof] : 0;
     start.deflection = deflectionDof >= 0 ? d[deflectionDof] : settlement === null ? 0 : prescribedDisplacement(layout, e, 0);
-    integrateSpan(start, spanLoads[e], member.spans[e], nodeX[e], nodeX[e + 1], 1 / layout.stiffness[e], pieces, layout.shearFlexibility[e]);
+    integrateSpan(start, loads, e, member.spans[e], nodeX[e], nodeX[e + 1], 1 / layout.stiffness[e], pieces, layout.shearFlexibility[e]);
   }
   const loadScale = loadScaleOf(member, layout.length) + settlementScale(member, layout);
   const reactions = reactionsOf(member, layout, d, loadScale);

@@ -1,4 +1,4 @@
-import { equivalentNodalLoads, loadsBySpan, type SpanLoad } from "./elementLoads";
+import { equivalentNodalLoads, loadsBySpan, splitLoads, type SpanLoad, type SpanLoadTable } from "./elementLoads";
 import { buildLayout, elementDof, prescribedDisplacement, rotationalSpring, type Layout } from "./layout";
 import type { Member } from "./model";
 
@@ -70,13 +70,28 @@ export function shearPhi(ei: number, span: number, shearFlexibility: number): nu
   return shearFlexibility > 0 ? (12 * ei * shearFlexibility) / (span * span) : 0;
 }
 
-export interface Assembly {
-  layout: Layout;
-  system: StiffnessSystem;
-  spanLoads: SpanLoad[][];
-  /** Per span, its element matrix (16 entries from 16 e) and its equivalent nodal loads (4 from 4 e). */
-  matrices: Float64Array;
-  nodalLoads: Float64Array;
+/**
+ * A member's assembled system. `loads` is the span-load table the solver reads (a scratch
+ * table, valid until the next assembly); `spanLoads`, the same loads as objects per span (the
+ * double-double solve's form), is built from the member on first use.
+ */
+export class Assembly {
+  private objects: SpanLoad[][] | null = null;
+
+  constructor(
+    readonly member: Member,
+    readonly layout: Layout,
+    readonly system: StiffnessSystem,
+    readonly loads: SpanLoadTable,
+    /** Per span, its element matrix (16 entries from 16 e) and its equivalent nodal loads (4 from 4 e). */
+    readonly matrices: Float64Array,
+    readonly nodalLoads: Float64Array,
+  ) {}
+
+  get spanLoads(): SpanLoad[][] {
+    if (this.objects === null) this.objects = loadsBySpan(this.layout.nodeX, this.member.spans, this.member.loads);
+    return this.objects;
+  }
 }
 
 function halfBandwidthOf(layout: Layout, spanCount: number): number {
@@ -100,6 +115,9 @@ let scratchBand: Float64Array = new Float64Array(64);
 let scratchRhs: Float64Array = new Float64Array(16);
 let scratchMatrices: Float64Array = new Float64Array(64);
 let scratchNodal: Float64Array = new Float64Array(16);
+
+/** One span's four DOF numbers (elementDof order), filled per span. */
+const dofs = new Int32Array(4);
 
 /** The scratch buffer, or a longer one (doubling) when it holds fewer than `length` entries. */
 function atLeast(buffer: Float64Array, length: number): Float64Array {
@@ -127,15 +145,15 @@ export function assembleMember(member: Member, nodeX?: number[], reuse = false):
     rhs = scratchRhs = atLeast(scratchRhs, n);
     matrices = scratchMatrices = atLeast(scratchMatrices, 16 * spanCount);
     nodal = scratchNodal = atLeast(scratchNodal, 4 * spanCount);
-    band.fill(0, 0, n * stride);
-    rhs.fill(0, 0, n);
+    for (let i = n * stride - 1; i >= 0; i--) band[i] = 0;
+    for (let i = 0; i < n; i++) rhs[i] = 0;
   } else {
     band = new Float64Array(n * stride);
     rhs = new Float64Array(n);
     matrices = new Float64Array(16 * spanCount);
     nodal = new Float64Array(4 * spanCount);
   }
-  const spanLoads = loadsBySpan(layout.nodeX, member.spans, member.loads);
+  const loads = splitLoads(layout.nodeX, member.spans, member.loads);
   const { settlement } = layout;
   for (let e = 0; e < spanCount; e++) {
     const span = member.spans[e];
@@ -143,15 +161,16 @@ export function assembleMember(member: Member, nodeX?: number[], reuse = false):
     const fm = 4 * e;
     const g = layout.shearFlexibility[e];
     elementMatrixInto(matrices, km, layout.stiffness[e], span, g);
-    equivalentNodalLoads(spanLoads[e], span, nodal, fm, shearPhi(layout.stiffness[e], span, g));
+    equivalentNodalLoads(loads, e, span, nodal, fm, shearPhi(layout.stiffness[e], span, g));
+    for (let r = 0; r < 4; r++) dofs[r] = elementDof(layout, e, r);
     for (let r = 0; r < 4; r++) {
-      const i = elementDof(layout, e, r);
+      const i = dofs[r];
       if (i < 0) continue;
       rhs[i] += nodal[fm + r];
       // A settling restrained node moves K·Δ to the right-hand side.
       if (settlement !== null) for (let c = 0; c < 4; c++) rhs[i] -= matrices[km + r * 4 + c] * prescribedDisplacement(layout, e, c);
       for (let c = 0; c < 4; c++) {
-        const j = elementDof(layout, e, c);
+        const j = dofs[c];
         if (j < i) continue;
         band[i * stride + (j - i)] += matrices[km + r * 4 + c];
       }
@@ -169,7 +188,7 @@ export function assembleMember(member: Member, nodeX?: number[], reuse = false):
     const rotational = rotationalSpring(support);
     if (rotational > 0) band[layout.rotationRightDof[node] * stride] += rotational;
   }
-  return { layout, system: { size: n, halfBandwidth, band, rhs }, spanLoads, matrices, nodalLoads: nodal };
+  return new Assembly(member, layout, { size: n, halfBandwidth, band, rhs }, loads, matrices, nodal);
 }
 
 /** The reduced stiffness system of a (validated) member. */

@@ -12,8 +12,14 @@ export { memberLength };
  */
 export const MAX_LOADS = 5000;
 
-const LOAD_KINDS = new Set(["point", "moment", "udl", "linear", "settle"]);
-const SUPPORT_KINDS = new Set(["pin", "fixed", "free", "hinge", "spring"]);
+/** The load kinds (comparisons, not a set lookup: checked for every load of every solve). */
+function isLoadKind(kind: unknown): boolean {
+  return kind === "point" || kind === "udl" || kind === "moment" || kind === "linear" || kind === "settle";
+}
+
+function isSupportKind(kind: unknown): boolean {
+  return kind === "pin" || kind === "fixed" || kind === "free" || kind === "hinge" || kind === "spring";
+}
 
 function isFiniteNumber(value: unknown): value is number {
   return typeof value === "number" && Number.isFinite(value);
@@ -46,7 +52,7 @@ function validateSupports(member: Member, length: number): void {
   }
   for (let i = 0; i < supports.length; i++) {
     const support = supports[i];
-    if (!support || !SUPPORT_KINDS.has(support.kind)) {
+    if (!support || !isSupportKind(support.kind)) {
       throw invalid(`${supportPlace(spans, i, length)}: unknown support ${show(support && support.kind)}; use pin, fixed, free, hinge or a spring stiffness`);
     }
     if (support.kind === "spring") {
@@ -90,7 +96,7 @@ function validateStiffness(member: Member): void {
 
 /** The common case, checked without building any message. */
 function isPlainLoad(load: Load, length: number): boolean {
-  if (!LOAD_KINDS.has(load.kind) || !isFiniteNumber(load.magnitude) || !isFiniteNumber(load.xStart)) return false;
+  if (!isLoadKind(load.kind) || !isFiniteNumber(load.magnitude) || !isFiniteNumber(load.xStart)) return false;
   if (!isOnMember(load.xStart, length)) return false;
   if (load.kind === "point" || load.kind === "moment") return true;
   if (load.kind === "settle") return false;
@@ -102,7 +108,7 @@ function validateLoad(load: Load, length: number): void {
   if (isPlainLoad(load, length)) return;
   const where = `load row ${load.row}`;
   const tol = positionTolerance(length);
-  if (!LOAD_KINDS.has(load.kind)) {
+  if (!isLoadKind(load.kind)) {
     throw invalid(`${where}: unknown load type ${show(load.kind)}; use point, moment, udl, linear or settle`);
   }
   if (!isFiniteNumber(load.magnitude)) throw invalid(`${where}: magnitude must be a finite number, got ${show(load.magnitude)}`);
