@@ -34,8 +34,12 @@ export function mapCode(text: string, change: (code: string) => string): string 
 
 export const REFERENCE = String.raw`(?:(?:'(?:[^']|'')+'|[A-Za-z_][\w.]*)!)?\$?[A-Za-z]{1,3}\$?\d+`;
 
+/** Every saved form below has one of these in it: text without them is already in typed form. */
+const SAVED_FORM = /_xl|anchorarray/i;
+
 /** Saved-workbook forms to typed forms. Accepts text with or without the leading `=`. */
 export function normalizeFormula(text: string): string {
+  if (!SAVED_FORM.test(text)) return text;
   return mapCode(text, (code) =>
     code
       .replace(/_xll\.SPAN[._]/gi, "SPAN.")
@@ -77,6 +81,7 @@ export function parseReference(reference: string): SpillReference {
 }
 
 export function hasSpillReference(text: string): boolean {
+  if (!text.includes("#")) return false;
   return pieces(text).some((piece) => piece.code && new RegExp(SPILL.source).test(piece.text));
 }
 

@@ -11,7 +11,8 @@
  */
 import { DetailedCellError, ErrorType, HyperFormula } from "hyperformula";
 import type { SpanFunctions } from "./catalogue";
-import { cellKey, attachContext, buildingWith, type CellAddress, type EngineContext } from "./learnedSizes";
+import { ReusedResults } from "./reusedResults";
+import { CallMap, cellKey, attachContext, buildingWith, type CellAddress, type EngineContext } from "./learnedSizes";
 import { columnLetters, expandSpillReferences, hasSpillReference, mapCode, normalizeFormula, parseReference, soleSpillReference, type SpillReference } from "./formulaText";
 import type { BlockSize } from "./resultSize";
 import { formulaAfterRows } from "./references";
@@ -115,10 +116,11 @@ export class SpanWorkbook {
   private newContext(options: WorkbookOptions): EngineContext {
     return {
       functions: options.functions ?? SPAN_EXPORTS,
-      learned: new Map(),
+      learned: new CallMap(),
       mismatched: new Map(),
-      computed: new Map(),
-      reserved: new Map(),
+      computed: new CallMap(),
+      reserved: new CallMap(),
+      answers: new ReusedResults(),
       onCall: options.onSpanCall,
       textAt: (address) => this.textAt(address),
     };
