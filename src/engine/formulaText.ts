@@ -10,8 +10,8 @@
  * String literals are never touched.
  */
 
-/** Splits formula text into code and "string literal" pieces, in order. */
-function pieces(text: string): { code: boolean; text: string }[] {
+/** Splits formula text into code and "string literal" pieces, in order (joined, they are the text). */
+export function formulaPieces(text: string): { code: boolean; text: string }[] {
   const out: { code: boolean; text: string }[] = [];
   const literal = /"(?:[^"]|"")*"?/g;
   let last = 0;
@@ -27,7 +27,7 @@ function pieces(text: string): { code: boolean; text: string }[] {
 
 /** Applies `change` to the parts of formula text outside string literals. */
 export function mapCode(text: string, change: (code: string) => string): string {
-  return pieces(text)
+  return formulaPieces(text)
     .map((piece) => (piece.code ? change(piece.text) : piece.text))
     .join("");
 }
@@ -82,7 +82,7 @@ export function parseReference(reference: string): SpillReference {
 
 export function hasSpillReference(text: string): boolean {
   if (!text.includes("#")) return false;
-  return pieces(text).some((piece) => piece.code && new RegExp(SPILL.source).test(piece.text));
+  return formulaPieces(text).some((piece) => piece.code && new RegExp(SPILL.source).test(piece.text));
 }
 
 /**

@@ -303,6 +303,18 @@ export class SpanWorkbook {
     return serialized as CellInput;
   }
 
+  /**
+   * What a block of cells holds as typed (`getInput` of each, null for an empty cell): the old
+   * contents of a block about to be written. Cells past the sheet's used area (`dimensions`,
+   * which covers every cell holding anything) are empty without asking.
+   */
+  inputBlock(sheet: number, top: number, left: number, rows: number, cols: number): CellInput[][] {
+    const used = this.dimensions(sheet);
+    return Array.from({ length: rows }, (_, r) =>
+      Array.from({ length: cols }, (_, c) => (top + r < used.rows && left + c < used.cols ? (this.getInput(sheet, top + r, left + c) ?? null) : null)),
+    );
+  }
+
   /** Size of the array a formula cell spills into, when it spills (more than one cell). */
   spillSize(sheet: number, row: number, col: number): BlockSize | undefined {
     // While the engine is being built nothing has spilled yet (settle() resolves A1# after).
