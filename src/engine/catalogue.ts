@@ -149,12 +149,19 @@ export const SPAN_FUNCTIONS: readonly SpanFunctionEntry[] = [
   ...RESULTS,
 ];
 
+const BY_NAME = new Map(SPAN_FUNCTIONS.map((entry) => [entry.sheetName, entry]));
+
 export function entryFor(sheetName: string): SpanFunctionEntry | undefined {
-  const upper = sheetName.toUpperCase();
-  return SPAN_FUNCTIONS.find((entry) => entry.sheetName === upper);
+  return BY_NAME.get(sheetName) ?? BY_NAME.get(sheetName.toUpperCase());
+}
+
+const REQUIRED = new Map(SPAN_FUNCTIONS.map((entry) => [entry, entry.arguments.filter((arg) => !arg.optional).length]));
+
+/** How many arguments a call must give: those not optional. */
+export function requiredArguments(entry: SpanFunctionEntry): number {
+  return REQUIRED.get(entry) ?? entry.arguments.filter((arg) => !arg.optional).length;
 }
 
 export function argumentRange(entry: SpanFunctionEntry): string {
-  const required = entry.arguments.filter((arg) => !arg.optional).length;
-  return `${required} to ${entry.arguments.length}`;
+  return `${requiredArguments(entry)} to ${entry.arguments.length}`;
 }

@@ -42,15 +42,24 @@ function engineScalar(value: unknown): EngineScalar {
   return String(value);
 }
 
-/** A function's 2-D result as an engine value: a single value for 1 x 1, otherwise a block. */
+/** A function's 2-D result as an engine value: a single value for 1 x 1, otherwise a block (short rows padded with ""). */
 export function engineResult(result: unknown): SimpleRangeValue | EngineScalar {
-  if (!Array.isArray(result) || result.length === 0 || !result.every((row) => Array.isArray(row) && row.length > 0)) {
-    return new CellError(ErrorType.VALUE, "the function returned no table");
+  if (!Array.isArray(result) || result.length === 0) return new CellError(ErrorType.VALUE, "the function returned no table");
+  const rows = result as unknown[];
+  let width = 0;
+  for (let r = 0; r < rows.length; r++) {
+    const row = rows[r];
+    if (!Array.isArray(row) || row.length === 0) return new CellError(ErrorType.VALUE, "the function returned no table");
+    if (row.length > width) width = row.length;
   }
-  const rows = result as unknown[][];
-  const width = rows.reduce((most, row) => Math.max(most, row.length), 0);
-  const data = rows.map((row) => Array.from({ length: width }, (_, col) => engineScalar(row[col])));
-  if (data.length === 1 && width === 1) return data[0][0];
+  if (rows.length === 1 && width === 1) return engineScalar((rows[0] as unknown[])[0]);
+  const data: EngineScalar[][] = [];
+  for (let r = 0; r < rows.length; r++) {
+    const row = rows[r] as unknown[];
+    const out: EngineScalar[] = [];
+    for (let col = 0; col < width; col++) out.push(engineScalar(row[col]));
+    data.push(out);
+  }
   return SimpleRangeValue.onlyValues(data as never);
 }
 

@@ -10,8 +10,8 @@
  * String literals are never touched.
  */
 
-/** Splits formula text into code and "string literal" pieces, in order. */
-function pieces(text: string): { code: boolean; text: string }[] {
+/** Splits formula text into code and "string literal" pieces, in order (joined, they are the text). */
+export function formulaPieces(text: string): { code: boolean; text: string }[] {
   const out: { code: boolean; text: string }[] = [];
   const literal = /"(?:[^"]|"")*"?/g;
   let last = 0;
@@ -27,15 +27,19 @@ function pieces(text: string): { code: boolean; text: string }[] {
 
 /** Applies `change` to the parts of formula text outside string literals. */
 export function mapCode(text: string, change: (code: string) => string): string {
-  return pieces(text)
+  return formulaPieces(text)
     .map((piece) => (piece.code ? change(piece.text) : piece.text))
     .join("");
 }
 
 export const REFERENCE = String.raw`(?:(?:'(?:[^']|'')+'|[A-Za-z_][\w.]*)!)?\$?[A-Za-z]{1,3}\$?\d+`;
 
+/** Every saved form below has one of these in it: text without them is already in typed form. */
+const SAVED_FORM = /_xl|anchorarray/i;
+
 /** Saved-workbook forms to typed forms. Accepts text with or without the leading `=`. */
 export function normalizeFormula(text: string): string {
+  if (!SAVED_FORM.test(text)) return text;
   return mapCode(text, (code) =>
     code
       .replace(/_xll\.SPAN[._]/gi, "SPAN.")
@@ -77,7 +81,8 @@ export function parseReference(reference: string): SpillReference {
 }
 
 export function hasSpillReference(text: string): boolean {
-  return pieces(text).some((piece) => piece.code && new RegExp(SPILL.source).test(piece.text));
+  if (!text.includes("#")) return false;
+  return formulaPieces(text).some((piece) => piece.code && new RegExp(SPILL.source).test(piece.text));
 }
 
 /**

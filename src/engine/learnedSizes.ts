@@ -5,6 +5,7 @@
  */
 import type { BlockSize } from "./resultSize";
 import type { SpanFunctions } from "./catalogue";
+import type { ReusedResults } from "./reusedResults";
 
 export interface CellAddress {
   sheet: number;
@@ -14,7 +15,7 @@ export interface CellAddress {
 
 export interface EngineContext {
   functions: SpanFunctions;
-  learned: Map<string, BlockSize>;
+  learned: CallMap<BlockSize>;
   /** Cells whose SPAN results came out in another size than reserved: set them again. */
   mismatched: Map<string, CellAddress>;
   /** Called once per SPAN evaluation (progress reporting). */
@@ -25,17 +26,48 @@ export interface EngineContext {
    * Results computed in a size other than reserved, kept until the cell is set again with the
    * learned size: the second evaluation hands them back instead of calling the function again.
    */
-  computed: Map<string, { args: string; result: unknown }>;
+  computed: CallMap<{ args: string; result: unknown }>;
   /** Spill sizes reserved from a prediction that read another cell (see spanPlugin.ts). */
-  reserved: Map<string, BlockSize>;
+  reserved: CallMap<BlockSize>;
+  /** Recent answers of each function by their arguments (reusedResults.ts). */
+  answers: ReusedResults;
 }
 
 export function cellKey(address: CellAddress): string {
   return `${address.sheet}!${address.row}!${address.col}`;
 }
 
-export function callKey(address: CellAddress, callText: string): string {
-  return `${cellKey(address)}|${callText}`;
+/**
+ * Values per SPAN call, a call being the cell that holds it and the text of the call: by cell,
+ * then by call text. The call texts are the interned strings of spanPlugin.ts, so looking one up
+ * hashes the short cell key only (a key joining both would be a new long string to hash on every
+ * evaluation); an empty map is not looked into at all.
+ */
+export class CallMap<V> {
+  private readonly cells = new Map<string, Map<string, V>>();
+
+  get(address: CellAddress, call: string): V | undefined {
+    return this.cells.size === 0 ? undefined : this.cells.get(cellKey(address))?.get(call);
+  }
+
+  has(address: CellAddress, call: string): boolean {
+    return this.cells.size !== 0 && this.cells.get(cellKey(address))?.has(call) === true;
+  }
+
+  set(address: CellAddress, call: string, value: V): void {
+    const key = cellKey(address);
+    let calls = this.cells.get(key);
+    if (!calls) this.cells.set(key, (calls = new Map()));
+    calls.set(call, value);
+  }
+
+  delete(address: CellAddress, call: string): void {
+    if (this.cells.size === 0) return;
+    const key = cellKey(address);
+    const calls = this.cells.get(key);
+    if (!calls || !calls.delete(call)) return;
+    if (calls.size === 0) this.cells.delete(key);
+  }
 }
 
 const contexts = new WeakMap<object, EngineContext>();

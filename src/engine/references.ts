@@ -11,7 +11,7 @@
  * normalized), so a filled `=SUM(H12#)` would become a fixed range; the workbook keeps the
  * typed text, and this rewrites that.
  */
-import { columnLetters, columnNumber, mapCode } from "./formulaText";
+import { columnLetters, columnNumber, formulaPieces } from "./formulaText";
 
 /** The sheet size references must stay within (the workbook's limits). */
 export interface SheetLimits {
@@ -33,31 +33,90 @@ export interface CellReference {
 /** Group 1: the character before (no lookbehind: pane-bundled code), 2: sheet prefix, 3-6: $col$row. */
 const CELL = /(^|[^\w$.!'"])((?:'(?:[^']|'')+'|[A-Za-z_][\w.]*)!)?(\$?)([A-Za-z]{1,3})(\$?)(\d+)(?![\w(.!])/g;
 
+/** A reference found in formula text, with the text around its cell part kept as written. */
+interface FoundReference {
+  ref: CellReference;
+  /** The character before the reference, and its sheet prefix with the "!" ("" when unqualified). */
+  lead: string;
+  colDollar: string;
+  rowDollar: string;
+}
+
+/** Formula text cut into the text between references (strings) and the references themselves. */
+type Template = (string | FoundReference)[];
+
+/** The references of a formula, found once: string literals and references off the sheet stay text. */
+function templateOf(formula: string, limits: SheetLimits): Template {
+  const parts: Template = [];
+  let text = "";
+  for (const piece of formulaPieces(formula)) {
+    if (!piece.code) {
+      text += piece.text;
+      continue;
+    }
+    const code = piece.text;
+    let last = 0;
+    for (const match of code.matchAll(CELL)) {
+      const [whole, before, prefix, colDollar, letters, rowDollar, digits] = match;
+      const at = match.index ?? 0;
+      const col = columnNumber(letters);
+      const row = Number(digits) - 1;
+      text += code.slice(last, at);
+      last = at + whole.length;
+      if (col >= limits.cols || row < 0 || row >= limits.rows) {
+        text += whole;
+        continue;
+      }
+      const role = code[last] === ":" ? "start" : before === ":" ? "end" : "single";
+      if (text !== "") parts.push(text);
+      text = "";
+      const ref: CellReference = { sheet: prefix?.slice(0, -1), row, col, rowAbsolute: rowDollar === "$", colAbsolute: colDollar === "$", role };
+      parts.push({ ref, lead: `${before}${prefix ?? ""}`, colDollar, rowDollar });
+    }
+    text += code.slice(last);
+  }
+  if (text !== "") parts.push(text);
+  return parts;
+}
+
+/** The formula written from its template, each reference where `map` puts it (`#REF!` for null or off the sheet). */
+function render(parts: Template, limits: SheetLimits, map: (ref: CellReference) => { row: number; col: number } | null): string {
+  let out = "";
+  for (const part of parts) {
+    if (typeof part === "string") {
+      out += part;
+      continue;
+    }
+    const moved = map(part.ref);
+    if (moved === null || moved.row < 0 || moved.col < 0 || moved.row >= limits.rows || moved.col >= limits.cols) out += `${part.lead}#REF!`;
+    else out += `${part.lead}${part.colDollar}${columnLetters(moved.col)}${part.rowDollar}${moved.row + 1}`;
+  }
+  return out;
+}
+
 /**
  * Rewrites every cell reference: `map` gives the new row and column (absolute markers kept),
  * or null for a reference that no longer exists (`#REF!`).
  */
 export function mapReferences(formula: string, limits: SheetLimits, map: (ref: CellReference) => { row: number; col: number } | null): string {
-  return mapCode(formula, (code) =>
-    code.replace(CELL, (whole, before: string, prefix: string | undefined, colDollar: string, letters: string, rowDollar: string, digits: string, at: number) => {
-      const col = columnNumber(letters);
-      const row = Number(digits) - 1;
-      if (col >= limits.cols || row < 0 || row >= limits.rows) return whole;
-      const end = at + whole.length;
-      const role = code[end] === ":" ? "start" : before === ":" ? "end" : "single";
-      const ref: CellReference = { sheet: prefix?.slice(0, -1), row, col, rowAbsolute: rowDollar === "$", colAbsolute: colDollar === "$", role };
-      const moved = map(ref);
-      if (moved === null) return `${before}${prefix ?? ""}#REF!`;
-      if (moved.row < 0 || moved.col < 0 || moved.row >= limits.rows || moved.col >= limits.cols) return `${before}${prefix ?? ""}#REF!`;
-      return `${before}${prefix ?? ""}${colDollar}${columnLetters(moved.col)}${rowDollar}${moved.row + 1}`;
-    }),
-  );
+  return render(templateOf(formula, limits), limits, map);
+}
+
+/**
+ * The formula as it reads copied `rows` down and `cols` right, for any offset: the references
+ * are found once (a fill writes one source formula into thousands of cells).
+ */
+export function formulaShifter(formula: string, limits: SheetLimits): (rows: number, cols: number) => string {
+  if (!formula.startsWith("=")) return () => formula;
+  const parts = templateOf(formula, limits);
+  return (rows, cols) =>
+    rows === 0 && cols === 0 ? formula : render(parts, limits, (ref) => ({ row: ref.rowAbsolute ? ref.row : ref.row + rows, col: ref.colAbsolute ? ref.col : ref.col + cols }));
 }
 
 /** The formula as it reads when copied `rows` down and `cols` right: relative parts move, `$` parts stay. */
 export function shiftFormula(formula: string, rows: number, cols: number, limits: SheetLimits): string {
   if (!formula.startsWith("=") || (rows === 0 && cols === 0)) return formula;
-  return mapReferences(formula, limits, (ref) => ({ row: ref.rowAbsolute ? ref.row : ref.row + rows, col: ref.colAbsolute ? ref.col : ref.col + cols }));
+  return formulaShifter(formula, limits)(rows, cols);
 }
 
 /** Does a reference's sheet prefix name this sheet (unqualified references name the formula's own sheet)? */

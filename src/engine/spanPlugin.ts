@@ -7,9 +7,9 @@
  */
 import { ArraySize, CellError, ErrorType, FunctionArgumentType, FunctionPlugin, HyperFormula } from "hyperformula";
 import type { ImplementedFunctions } from "hyperformula";
-import { argumentRange, entryFor, SPAN_FUNCTIONS, type SpanFunctionEntry } from "./catalogue";
+import { argumentRange, entryFor, requiredArguments, SPAN_FUNCTIONS, type SpanFunctionEntry } from "./catalogue";
 import { engineError, engineResult, firstError, hostArgument, resizeResult, resultSize } from "./cellValues";
-import { callKey, cellKey, contextOf, sameSize, type CellAddress, type EngineContext } from "./learnedSizes";
+import { cellKey, contextOf, sameSize, type CellAddress, type EngineContext } from "./learnedSizes";
 import { predictSize, type ArgumentNode, type BlockSize } from "./resultSize";
 
 interface CallNode {
@@ -38,27 +38,63 @@ function sizeMethodName(entry: SpanFunctionEntry): string {
 const callTexts = new WeakMap<CallNode, string>();
 
 /**
- * One string per distinct call text: the engine gives every cell its own syntax tree, but the
- * text (relative references) is the same down a column, so a schedule of 800,000 calls keeps
- * a few strings instead of 800,000 (about 300 bytes each). Only memory depends on this table:
- * it is emptied when it holds INTERNED_TEXTS texts.
+ * An argument's text, made once per argument node. The engine copies a call's node for every
+ * cell (it orders range ends afresh), but the argument nodes inside are shared by every cell
+ * whose formula reads the same relative to the cell (a column filled down), so most calls join
+ * texts already made instead of writing their arguments out again.
  */
-const internedTexts = new Map<string, string>();
-const INTERNED_TEXTS = 10_000;
+const argumentTexts = new WeakMap<object, string>();
 
-function callText(node: CallNode): string {
-  let text = callTexts.get(node);
+function argumentText(arg: object): string {
+  let text = argumentTexts.get(arg);
   if (text === undefined) {
-    const made = `${node.procedureName}${JSON.stringify(node.args)}`;
-    text = internedTexts.get(made);
-    if (text === undefined) {
-      if (internedTexts.size >= INTERNED_TEXTS) internedTexts.clear();
-      internedTexts.set(made, made);
-      text = made;
-    }
-    callTexts.set(node, text);
+    text = JSON.stringify(arg);
+    argumentTexts.set(arg, text);
   }
   return text;
+}
+
+/** Call texts by function name, then by each argument's text in turn (a trie of the texts made). */
+interface TextTrie {
+  text?: string;
+  next: Map<string, TextTrie>;
+}
+
+/**
+ * One string per distinct call text: the text (relative references) is the same down a column,
+ * so a schedule of 800,000 calls keeps a few strings instead of 800,000 (about 300 bytes each).
+ * A call's text is found by its function name and its argument texts, each the one string kept
+ * for its node (its hash computed once), so finding it hashes no long text. Only memory depends
+ * on this table: it is emptied when it holds INTERNED_TEXTS texts.
+ */
+const internedTexts = new Map<string, TextTrie>();
+let internedCount = 0;
+const INTERNED_TEXTS = 10_000;
+
+/** The function's name and its arguments as JSON (the same text as `JSON.stringify(node.args)`). */
+function callText(node: CallNode): string {
+  const cached = callTexts.get(node);
+  if (cached !== undefined) return cached;
+  if (internedCount >= INTERNED_TEXTS) {
+    internedTexts.clear();
+    internedCount = 0;
+  }
+  let at: TextTrie | undefined = internedTexts.get(node.procedureName);
+  if (!at) internedTexts.set(node.procedureName, (at = { next: new Map() }));
+  const texts: string[] = [];
+  for (const arg of node.args) {
+    const text = argumentText(arg);
+    texts.push(text);
+    let next: TextTrie | undefined = at.next.get(text);
+    if (!next) at.next.set(text, (next = { next: new Map() }));
+    at = next;
+  }
+  if (at.text === undefined) {
+    at.text = `${node.procedureName}[${texts.join(",")}]`;
+    internedCount++;
+  }
+  callTexts.set(node, at.text);
+  return at.text;
 }
 
 class SpanPlugin extends FunctionPlugin {
@@ -81,8 +117,8 @@ class SpanPlugin extends FunctionPlugin {
   }
 
   /** The size a call gets: learned from an earlier evaluation, else predicted from its text. */
-  private expectedSize(entry: SpanFunctionEntry, node: CallNode, state: CallState, readCells: boolean): { size: BlockSize; usedCells: boolean } {
-    const learned = this.context().learned.get(callKey(state.formulaAddress, callText(node)));
+  private expectedSize(entry: SpanFunctionEntry, node: CallNode, state: CallState, call: string, readCells: boolean): { size: BlockSize; usedCells: boolean } {
+    const learned = this.context().learned.get(state.formulaAddress, call);
     if (learned) return { size: learned, usedCells: false };
     const textAt = readCells ? this.context().textAt : undefined;
     let usedCells = false;
@@ -113,16 +149,16 @@ class SpanPlugin extends FunctionPlugin {
   predict(node: CallNode, state: CallState): ArraySize {
     const entry = entryFor(node.procedureName);
     if (!entry) return ArraySize.error();
-    const { size, usedCells } = this.expectedSize(entry, node, state, true);
+    const call = callText(node);
+    const { size, usedCells } = this.expectedSize(entry, node, state, call, true);
     const reserved = this.context().reserved;
-    const key = callKey(state.formulaAddress, callText(node));
-    if (usedCells || reserved.has(key)) reserved.set(key, size);
+    if (usedCells || reserved.has(state.formulaAddress, call)) reserved.set(state.formulaAddress, call, size);
     return new ArraySize(size.cols, size.rows);
   }
 
   /** The size reserved for the call when its formula was read. */
-  private reservedSize(entry: SpanFunctionEntry, node: CallNode, state: CallState, key: string): BlockSize {
-    return this.context().reserved.get(key) ?? this.expectedSize(entry, node, state, false).size;
+  private reservedSize(entry: SpanFunctionEntry, node: CallNode, state: CallState, call: string): BlockSize {
+    return this.context().reserved.get(state.formulaAddress, call) ?? this.expectedSize(entry, node, state, call, false).size;
   }
 
   evaluate(node: CallNode, state: CallState): unknown {
@@ -130,8 +166,7 @@ class SpanPlugin extends FunctionPlugin {
     if (!entry) return new CellError(ErrorType.NAME, `unknown function ${node.procedureName}`);
     const context = this.context();
     const given = node.args.length;
-    const required = entry.arguments.filter((arg) => !arg.optional).length;
-    if (given < required || given > entry.arguments.length) {
+    if (given < requiredArguments(entry) || given > entry.arguments.length) {
       return new CellError(ErrorType.NA, `${entry.sheetName} takes ${argumentRange(entry)} arguments, not ${given}`);
     }
     const args: unknown[] = [];
@@ -145,26 +180,28 @@ class SpanPlugin extends FunctionPlugin {
       args.push(hostArgument(value, spec.kind, skipped));
     }
     const call = callText(node);
-    const key = callKey(state.formulaAddress, call);
-    const kept = context.computed.get(key);
-    if (kept) context.computed.delete(key);
+    const address = state.formulaAddress;
+    const kept = context.computed.get(address, call);
+    if (kept) context.computed.delete(address, call);
     let result: ReturnType<typeof engineResult>;
     if (kept && kept.args === JSON.stringify(args)) result = kept.result as ReturnType<typeof engineResult>;
     else {
       context.onCall?.();
+      const answer = context.answers.answer(entry.exportName, args, () => context.functions[entry.exportName](...args));
+      if ("thrown" in answer) return engineError(answer.thrown);
       try {
-        result = engineResult(context.functions[entry.exportName](...args));
+        result = engineResult(answer.returned);
       } catch (thrown) {
         return engineError(thrown);
       }
     }
     const actual = resultSize(result);
     if (!actual) return result;
-    const expected = this.reservedSize(entry, node, state, key);
+    const expected = this.reservedSize(entry, node, state, call);
     if (sameSize(actual, expected)) return result;
-    context.learned.set(key, actual);
-    context.mismatched.set(cellKey(state.formulaAddress), state.formulaAddress);
-    context.computed.set(key, { args: JSON.stringify(args), result });
+    context.learned.set(address, call, actual);
+    context.mismatched.set(cellKey(address), address);
+    context.computed.set(address, call, { args: JSON.stringify(args), result });
     // The engine cannot grow a reserved spill: hand back the reserved size until the cell is set again.
     return resizeResult(result, expected);
   }

@@ -11,7 +11,8 @@
  */
 import { DetailedCellError, ErrorType, HyperFormula } from "hyperformula";
 import type { SpanFunctions } from "./catalogue";
-import { cellKey, attachContext, buildingWith, type CellAddress, type EngineContext } from "./learnedSizes";
+import { ReusedResults } from "./reusedResults";
+import { CallMap, cellKey, attachContext, buildingWith, type CellAddress, type EngineContext } from "./learnedSizes";
 import { columnLetters, expandSpillReferences, hasSpillReference, mapCode, normalizeFormula, parseReference, soleSpillReference, type SpillReference } from "./formulaText";
 import type { BlockSize } from "./resultSize";
 import { formulaAfterRows } from "./references";
@@ -115,10 +116,11 @@ export class SpanWorkbook {
   private newContext(options: WorkbookOptions): EngineContext {
     return {
       functions: options.functions ?? SPAN_EXPORTS,
-      learned: new Map(),
+      learned: new CallMap(),
       mismatched: new Map(),
-      computed: new Map(),
-      reserved: new Map(),
+      computed: new CallMap(),
+      reserved: new CallMap(),
+      answers: new ReusedResults(),
       onCall: options.onSpanCall,
       textAt: (address) => this.textAt(address),
     };
@@ -299,6 +301,18 @@ export class SpanWorkbook {
     if (serialized === null || serialized === undefined) return undefined;
     if (typeof serialized === "object") return String(serialized);
     return serialized as CellInput;
+  }
+
+  /**
+   * What a block of cells holds as typed (`getInput` of each, null for an empty cell): the old
+   * contents of a block about to be written. Cells past the sheet's used area (`dimensions`,
+   * which covers every cell holding anything) are empty without asking.
+   */
+  inputBlock(sheet: number, top: number, left: number, rows: number, cols: number): CellInput[][] {
+    const used = this.dimensions(sheet);
+    return Array.from({ length: rows }, (_, r) =>
+      Array.from({ length: cols }, (_, c) => (top + r < used.rows && left + c < used.cols ? (this.getInput(sheet, top + r, left + c) ?? null) : null)),
+    );
   }
 
   /** Size of the array a formula cell spills into, when it spills (more than one cell). */

@@ -428,7 +428,7 @@ export class Workbench {
     const square = Array.from(block, (row) => (row.length === cols ? Array.from(row) : [...Array.from(row), ...Array<CellInput>(cols - row.length).fill(null)]));
     let step: BlockStep | undefined;
     if (record) {
-      const before = Array.from({ length: rows }, (_, r) => Array.from({ length: cols }, (_, c) => this.book.getInput(id, top + r, left + c) ?? null));
+      const before = this.book.inputBlock(id, top, left, rows, cols);
       step = { kind: "block", sheet, top, left, before, after: square };
       if (record === true) this.history.record(step);
     }

@@ -154,4 +154,18 @@ describe("SpanWorkbook sizes, single evaluation and @", () => {
     expect(wb.getValue(0, 1, 3)).toBe(20);
     expect(wb.spillSize(0, 0, 2)).toBeUndefined();
   });
+
+  it("inputBlock gives each cell's getInput (null when empty), past the used area too", () => {
+    const wb = new SpanWorkbook([{ name: "S", cells: [[spans, loads, "=SPAN.REACTIONS(A1,B1)"], [7, "'12", "=SUM(C1#)", "=_xlfn.SINGLE(A1:A2)"]] }]);
+    wb.setCell(0, 30, 1, "late");
+    const used = wb.dimensions(0);
+    const rows = used.rows + 3;
+    const cols = used.cols + 2;
+    const expected = Array.from({ length: rows }, (_, r) => Array.from({ length: cols }, (_, c) => wb.getInput(0, r, c) ?? null));
+    expect(wb.inputBlock(0, 0, 0, rows, cols)).toEqual(expected);
+    expect(expected[1][2]).toBe("=SUM(C1#)");
+    expect(expected[2][2]).toBeNull(); // a spilled cell holds nothing as typed
+    expect(expected[30][1]).toBe("late");
+    expect(wb.inputBlock(0, used.rows, 0, 2, 2)).toEqual([[null, null], [null, null]]);
+  });
 });

@@ -8,18 +8,24 @@
  * for unevenly spaced numbers continues the least-squares line: the same rule here).
  */
 import { SHEET_LIMITS, type CellInput } from "../../engine";
-import { shiftFormula } from "../../engine/references";
+import { formulaShifter } from "../../engine/references";
 import { blockCols, blockRows, type Block } from "./selection";
 
 /** The inputs of `target`, filled from the inputs of `source` (read through `inputAt`). */
 export function filledBlock(source: Block, target: Block, inputAt: (row: number, col: number) => CellInput): CellInput[][] {
   const h = blockRows(source);
   const w = blockCols(source);
-  const cache = new Map<number, CellInput>();
-  const sourceInput = (r: number, c: number): CellInput => {
+  // Each source cell once: its input, and for a formula its references found once for every copy.
+  const cache = new Map<number, { input: CellInput; shift?: (rows: number, cols: number) => string }>();
+  const sourceCell = (r: number, c: number) => {
     const key = r * w + c;
-    if (!cache.has(key)) cache.set(key, inputAt(source.top + r, source.left + c) ?? null);
-    return cache.get(key);
+    let cell = cache.get(key);
+    if (!cell) {
+      const input = inputAt(source.top + r, source.left + c) ?? null;
+      cell = typeof input === "string" && input.startsWith("=") ? { input, shift: formulaShifter(input, SHEET_LIMITS) } : { input };
+      cache.set(key, cell);
+    }
+    return cell;
   };
   return Array.from({ length: blockRows(target) }, (_, i) => {
     const row = target.top + i;
@@ -27,8 +33,8 @@ export function filledBlock(source: Block, target: Block, inputAt: (row: number,
     return Array.from({ length: blockCols(target) }, (_, j) => {
       const col = target.left + j;
       const c = (((col - source.left) % w) + w) % w;
-      const input = sourceInput(r, c);
-      return typeof input === "string" && input.startsWith("=") ? shiftFormula(input, row - (source.top + r), col - (source.left + c), SHEET_LIMITS) : input;
+      const cell = sourceCell(r, c);
+      return cell.shift ? cell.shift(row - (source.top + r), col - (source.left + c)) : cell.input;
     });
   });
 }
