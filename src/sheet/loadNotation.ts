@@ -13,7 +13,7 @@
  * only when x start is not 0 and `to` only when x end is not the member end.
  */
 import { invalid, MAX_LOADS, type LoadKind } from "../core";
-import { decimalValue, numberFromText } from "./cells";
+import { decimalValue, numberFromText, SHORT_DIGITS, shortDecimal } from "./cells";
 import { isCaseLabel, type LoadRow } from "./loadRow";
 
 const KINDS = new Map<string, LoadKind>([
@@ -106,6 +106,9 @@ function parseOne(text: string, row: number): LoadRow {
 const MAX_WORDS = 10;
 const wordStart = new Int32Array(MAX_WORDS);
 const wordEnd = new Int32Array(MAX_WORDS);
+/** 1 when the word is a short decimal (shortDecimal) read while splitting, its value in wordValue; 0 otherwise. */
+const wordShort = new Uint8Array(MAX_WORDS);
+const wordValue = new Float64Array(MAX_WORDS);
 
 /** Whitespace as /\s/ and trim() see it, for ASCII text. */
 function isSpace(code: number): boolean {
@@ -139,7 +142,8 @@ function isLabel(text: string, start: number, end: number): boolean {
 
 /** The number word w of `text` is (decimalValue), NaN when there is no such word or it is not a number. */
 function numberOf(text: string, w: number, words: number): number {
-  return w < words ? decimalValue(text, wordStart[w], wordEnd[w]) : NaN;
+  if (w >= words) return NaN;
+  return wordShort[w] === 1 ? wordValue[w] : decimalValue(text, wordStart[w], wordEnd[w]);
 }
 
 /**
@@ -227,14 +231,34 @@ export function parseLoadNotation(text: string): LoadRow[] {
         c = ++i < n ? text.charCodeAt(i) : SEMICOLON;
         continue;
       }
+      // The word's digits are gathered as it is read: a short decimal (sign, digits, one point)
+      // then needs no second pass; any other word is read by decimalValue when a number is expected.
       const start = i;
+      let negative = false;
+      let mantissa = 0;
+      let digits = 0;
+      let fraction = -1;
+      let short = true;
       do {
-        if (c > 127) ascii = false;
+        if (c >= 48 && c <= 57) {
+          mantissa = mantissa * 10 + (c - 48);
+          digits++;
+          if (fraction >= 0) fraction++;
+        } else if (c === 46 && fraction < 0) fraction = 0;
+        else if ((c === 45 || c === 43) && i === start) negative = c === 45;
+        else {
+          short = false;
+          if (c > 127) ascii = false;
+        }
         c = ++i < n ? text.charCodeAt(i) : SEMICOLON;
       } while (c !== SEMICOLON && !isSpace(c));
       if (words < MAX_WORDS) {
         wordStart[words] = start;
         wordEnd[words] = i;
+        if (short && digits > 0 && digits <= SHORT_DIGITS) {
+          wordShort[words] = 1;
+          wordValue[words] = shortDecimal(negative, mantissa, fraction);
+        } else wordShort[words] = 0;
       }
       words++;
       lastEnd = i;
