@@ -32,9 +32,11 @@ function mix(hash: number, value: number): number {
 function hashCell(cell: unknown, hash: number): number {
   if (cell === null || cell === undefined) return mix(hash, 1);
   switch (typeof cell) {
-    case "number":
+    case "number": {
+      // The double's two words, the type tag folded into the high word (one mix per word).
       scratch[0] = cell === 0 ? 0 : cell;
-      return mix(mix(mix(hash, 2), scratchWords[0]), scratchWords[1]);
+      return mix(mix(hash, scratchWords[0]), scratchWords[1] ^ 0x2bd3);
+    }
     case "string": {
       // Two characters per multiply (text cells are most of a schedule row's cells), then one full mix.
       const n = cell.length;
