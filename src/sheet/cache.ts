@@ -28,44 +28,70 @@ function mix(hash: number, value: number): number {
   return h;
 }
 
-/** Hash of one argument's cells, or NaN when a cell cannot be keyed (error objects). */
-function hashOf(arg: unknown, hash: number): number {
-  if (arg === null || arg === undefined) return mix(hash, 1);
-  switch (typeof arg) {
-    case "number":
-      scratch[0] = arg === 0 ? 0 : arg;
-      return mix(mix(mix(hash, 2), scratchWords[0]), scratchWords[1]);
+/** Hash of one primitive cell (null, undefined, number, string, boolean), or NaN when it cannot be keyed. */
+function hashCell(cell: unknown, hash: number): number {
+  if (cell === null || cell === undefined) return mix(hash, 1);
+  switch (typeof cell) {
+    case "number": {
+      // The double's two words, the type tag folded into the high word (one mix per word).
+      scratch[0] = cell === 0 ? 0 : cell;
+      return mix(mix(hash, scratchWords[0]), scratchWords[1] ^ 0x2bd3);
+    }
     case "string": {
-      // One multiply per character (FNV-1a's step), then one full mix: text cells are most of a schedule row's cells.
-      let h = mix(hash, 3 + arg.length * 16);
-      for (let i = 0; i < arg.length; i++) h = Math.imul(h ^ arg.charCodeAt(i), 0x01000193);
+      // Two characters per multiply (text cells are most of a schedule row's cells), then one full mix.
+      const n = cell.length;
+      let h = mix(hash, 3 + n * 16);
+      let i = 0;
+      for (; i + 1 < n; i += 2) {
+        h = Math.imul(h ^ (cell.charCodeAt(i) | (cell.charCodeAt(i + 1) << 16)), 0x5bd1e995);
+        h = (h << 13) | (h >>> 19);
+      }
+      if (i < n) h = Math.imul(h ^ cell.charCodeAt(i), 0x5bd1e995);
       return mix(h, 0);
     }
     case "boolean":
-      return mix(hash, arg ? 4 : 5);
-    case "object": {
-      if (!Array.isArray(arg)) return NaN;
-      let h = mix(hash, 6 + arg.length * 16);
-      for (let i = 0; i < arg.length; i++) {
-        h = hashOf(arg[i], h);
-        if (h !== h) return NaN;
-      }
-      return mix(h, 7);
-    }
+      return mix(hash, cell ? 4 : 5);
     default:
       return NaN;
   }
 }
 
+/**
+ * Hash of one argument's cells, or NaN when a cell cannot be keyed (error objects). A range
+ * (rows of cells) is hashed in two plain loops; deeper nesting, which the host never passes,
+ * recurses.
+ */
+function hashOf(arg: unknown, hash: number): number {
+  if (!Array.isArray(arg)) return typeof arg === "object" && arg !== null ? NaN : hashCell(arg, hash);
+  let h = mix(hash, 6 + arg.length * 16);
+  for (let i = 0; i < arg.length; i++) {
+    const row: unknown = arg[i];
+    if (Array.isArray(row)) {
+      h = mix(h, 6 + row.length * 16);
+      for (let j = 0; j < row.length; j++) {
+        const cell: unknown = row[j];
+        h = typeof cell === "object" && cell !== null ? hashOf(cell, h) : hashCell(cell, h);
+        if (h !== h) return NaN;
+      }
+      h = mix(h, 7);
+    } else {
+      h = typeof row === "object" && row !== null ? NaN : hashCell(row, h);
+      if (h !== h) return NaN;
+    }
+  }
+  return mix(h, 7);
+}
+
 /** A 32-bit hash of the member arguments' cells, or null when they cannot be keyed. */
 export function memberHash(args: MemberArgs): number | null {
-  const parts = [args.spans, args.loads, args.supports, args.EI, args.combo, args.units ?? null];
-  let h = 0x9e3779b9 | 0;
-  for (let i = 0; i < parts.length; i++) {
-    h = hashOf(parts[i], mix(h, 11 + i));
-    if (h !== h) return null;
-  }
-  return h >>> 0;
+  // NaN (a cell that cannot be keyed) is checked after each argument: mix() would turn it into a number.
+  let h = hashOf(args.spans, mix(0x9e3779b9 | 0, 11));
+  if (h === h) h = hashOf(args.loads, mix(h, 12));
+  if (h === h) h = hashOf(args.supports, mix(h, 13));
+  if (h === h) h = hashOf(args.EI, mix(h, 14));
+  if (h === h) h = hashOf(args.combo, mix(h, 15));
+  if (h === h) h = hashOf(args.units ?? null, mix(h, 16));
+  return h !== h ? null : h >>> 0;
 }
 
 /** True when two arguments hold the same cells in the same shape (same types, same values). */
@@ -142,62 +168,122 @@ export const RECENT_MEMBERS = 8;
 /** Marks the start of an array in a flat copy (followed by its length); never a cell value. */
 const ARRAY_MARK: object = Object.freeze({});
 
-/** Writes an argument's cells into `cells` from index n (arrays as mark, length, items); the next index. */
-function flatten(arg: unknown, cells: unknown[], n: number): number {
-  if (Array.isArray(arg)) {
-    cells[n++] = ARRAY_MARK;
-    cells[n++] = arg.length;
-    for (let i = 0; i < arg.length; i++) n = flatten(arg[i], cells, n);
-    return n;
-  }
-  cells[n] = arg ?? null;
-  return n + 1;
-}
+/**
+ * Stands for a number cell in a flat copy; the number itself is in the slot's `numbers` at the
+ * same index (a typed buffer: no reference to the caller's boxed numbers is kept, so filling a
+ * slot costs no write barrier per number).
+ */
+const NUMBER_MARK: object = Object.freeze({});
 
-/** The index after the argument when `cells` from n hold exactly its cells (as sameCells judges), else -1. */
-function matchFlat(arg: unknown, cells: unknown[], n: number): number {
-  if (Array.isArray(arg)) {
-    if (cells[n] !== ARRAY_MARK || cells[n + 1] !== arg.length) return -1;
-    n += 2;
-    for (let i = 0; i < arg.length && n >= 0; i++) n = matchFlat(arg[i], cells, n);
-    return n;
-  }
-  return cells[n] === (arg ?? null) ? n + 1 : -1;
-}
-
-/** One recently solved member: its hash, a flat copy of its cells (a buffer reused slot by slot) and its solution. */
+/** One recently solved member: its hash, a flat copy of its cells (buffers reused slot by slot) and its solution. */
 export interface Recent {
   hash: number;
   cells: unknown[];
+  numbers: Float64Array;
   size: number;
   solution: Solution | undefined;
 }
 
-function flattenArgs(args: MemberArgs, cells: unknown[]): number {
-  let n = flatten(args.spans, cells, 0);
-  n = flatten(args.loads, cells, n);
-  n = flatten(args.supports, cells, n);
-  n = flatten(args.EI, cells, n);
-  n = flatten(args.combo, cells, n);
-  return flatten(args.units ?? null, cells, n);
+/** Writes one primitive cell at index n of the slot's flat copy; the next index. */
+function putCell(cell: unknown, slot: Recent, n: number): number {
+  if (typeof cell === "number") {
+    if (n >= slot.numbers.length) {
+      const grown = new Float64Array(Math.max(64, 2 * (n + 1)));
+      grown.set(slot.numbers);
+      slot.numbers = grown;
+    }
+    slot.cells[n] = NUMBER_MARK;
+    slot.numbers[n] = cell;
+  } else slot.cells[n] = cell ?? null;
+  return n + 1;
+}
+
+/** True when index n of the slot's flat copy holds exactly this primitive cell (===, as sameCells compares). */
+function sameCell(cell: unknown, slot: Recent, n: number): boolean {
+  if (typeof cell === "number") return slot.cells[n] === NUMBER_MARK && slot.numbers[n] === cell;
+  return slot.cells[n] === (cell ?? null);
+}
+
+/**
+ * Writes an argument's cells into the slot's flat copy from index n (arrays as mark, length,
+ * items); the next index. A range's rows are written in a plain loop; deeper nesting recurses.
+ */
+function flatten(arg: unknown, slot: Recent, n: number): number {
+  if (!Array.isArray(arg)) return putCell(arg, slot, n);
+  const { cells } = slot;
+  cells[n++] = ARRAY_MARK;
+  cells[n++] = arg.length;
+  for (let i = 0; i < arg.length; i++) {
+    const row: unknown = arg[i];
+    if (!Array.isArray(row)) {
+      n = putCell(row, slot, n);
+      continue;
+    }
+    cells[n++] = ARRAY_MARK;
+    cells[n++] = row.length;
+    for (let j = 0; j < row.length; j++) {
+      const cell: unknown = row[j];
+      n = Array.isArray(cell) ? flatten(cell, slot, n) : putCell(cell, slot, n);
+    }
+  }
+  return n;
+}
+
+/** The index after the argument when the slot's flat copy from n holds exactly its cells (as sameCells judges), else -1. */
+function matchFlat(arg: unknown, slot: Recent, n: number): number {
+  if (!Array.isArray(arg)) return sameCell(arg, slot, n) ? n + 1 : -1;
+  const { cells } = slot;
+  if (cells[n] !== ARRAY_MARK || cells[n + 1] !== arg.length) return -1;
+  n += 2;
+  for (let i = 0; i < arg.length; i++) {
+    const row: unknown = arg[i];
+    if (!Array.isArray(row)) {
+      if (!sameCell(row, slot, n++)) return -1;
+      continue;
+    }
+    if (cells[n] !== ARRAY_MARK || cells[n + 1] !== row.length) return -1;
+    n += 2;
+    for (let j = 0; j < row.length; j++) {
+      const cell: unknown = row[j];
+      if (Array.isArray(cell)) {
+        n = matchFlat(cell, slot, n);
+        if (n < 0) return -1;
+      } else if (!sameCell(cell, slot, n++)) return -1;
+    }
+  }
+  return n;
+}
+
+function flattenArgs(args: MemberArgs, slot: Recent): number {
+  let n = flatten(args.spans, slot, 0);
+  n = flatten(args.loads, slot, n);
+  n = flatten(args.supports, slot, n);
+  n = flatten(args.EI, slot, n);
+  n = flatten(args.combo, slot, n);
+  return flatten(args.units ?? null, slot, n);
 }
 
 function matchesRecent(args: MemberArgs, slot: Recent): boolean {
   if (slot.solution === undefined) return false;
-  const { cells } = slot;
-  let n = matchFlat(args.spans, cells, 0);
-  if (n >= 0) n = matchFlat(args.loads, cells, n);
-  if (n >= 0) n = matchFlat(args.supports, cells, n);
-  if (n >= 0) n = matchFlat(args.EI, cells, n);
-  if (n >= 0) n = matchFlat(args.combo, cells, n);
-  if (n >= 0) n = matchFlat(args.units ?? null, cells, n);
+  let n = matchFlat(args.spans, slot, 0);
+  if (n >= 0) n = matchFlat(args.loads, slot, n);
+  if (n >= 0) n = matchFlat(args.supports, slot, n);
+  if (n >= 0) n = matchFlat(args.EI, slot, n);
+  if (n >= 0) n = matchFlat(args.combo, slot, n);
+  if (n >= 0) n = matchFlat(args.units ?? null, slot, n);
   return n === slot.size;
+}
+
+function emptySlot(): Recent {
+  return { hash: 0, cells: [], numbers: new Float64Array(64), size: 0, solution: undefined };
 }
 
 /** A flat copy of member arguments and whether arguments match it: the recent tier's comparison, exported for tests. */
 export function flatCopy(args: MemberArgs): Recent {
-  const cells: unknown[] = [];
-  return { hash: 0, cells, size: flattenArgs(args, cells), solution: {} as Solution };
+  const copy = emptySlot();
+  copy.size = flattenArgs(args, copy);
+  copy.solution = {} as Solution;
+  return copy;
 }
 
 export function matchesFlatCopy(args: MemberArgs, copy: Recent): boolean {
@@ -248,7 +334,7 @@ export class MemberCache {
     readonly recentCapacity: number = RECENT_MEMBERS,
   ) {
     this.entries = new LruCache(capacity);
-    for (let i = 0; i < recentCapacity; i++) this.recent.push({ hash: 0, cells: [], size: 0, solution: undefined });
+    for (let i = 0; i < recentCapacity; i++) this.recent.push(emptySlot());
   }
 
   /** Members in the least-recently-used tier. */
@@ -328,7 +414,7 @@ export class MemberCache {
     const index = this.nextSlot;
     const slot = this.recent[index];
     slot.hash = hash;
-    slot.size = flattenArgs(args, slot.cells);
+    slot.size = flattenArgs(args, slot);
     slot.solution = solution;
     this.newest = index;
     this.nextSlot = (index + 1) % this.recent.length;

@@ -44,6 +44,20 @@ const EXACT_POWERS = [1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11
 /** Significant digits a mantissa may hold and stay an exact double (10^15 < 2^53). */
 const EXACT_DIGITS = 15;
 
+/** Most digits (leading zeros included) a decimal without exponent may have for shortDecimal. */
+export const SHORT_DIGITS = EXACT_DIGITS;
+
+/**
+ * The value of a decimal without exponent of at most SHORT_DIGITS digits, from its digits read
+ * as one integer `mantissa`, the count of digits after its point, and its sign: the same
+ * product or quotient of two exact doubles decimalValue computes for that text (so the same
+ * bits, -0 included), for readers that gather the digits while they split the text.
+ */
+export function shortDecimal(negative: boolean, mantissa: number, fraction: number): number {
+  const magnitude = fraction > 0 ? mantissa / EXACT_POWERS[fraction] : mantissa;
+  return negative ? -magnitude : magnitude;
+}
+
 /**
  * The value of text[start, end) when it is one plain decimal (NUMBER_TEXT: sign, digits with an
  * optional point, optional exponent) and finite, else NaN; read without building strings. With

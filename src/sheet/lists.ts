@@ -10,7 +10,7 @@
  * cell of two blank read as uniform EI).
  */
 import { invalid } from "../core";
-import { isBlank, isEmpty, numberFromText, readNumber } from "./cells";
+import { decimalValue, isBlank, isEmpty, numberFromText, readNumber } from "./cells";
 import { isAllBlank, listEntries, singleCell, splitList } from "./ranges";
 
 /**
@@ -31,8 +31,82 @@ function positive(entries: readonly unknown[], count: number, name: string, what
   return values;
 }
 
+/**
+ * The spans of one ASCII text cell of plain positive decimals separated by spaces or commas
+ * ("6 8 6", "6, 8.50, 1e1"), read in one pass without building strings; null for any other
+ * text (a character past ASCII, a word, a blank or non-positive entry, no entry, more than
+ * MAX_SPANS), which the full reader then reads or refuses with its message. When it gives
+ * spans, they are the spans the full reader gives.
+ */
+function plainSpansText(text: string): number[] | null {
+  const spans: number[] = [];
+  const n = text.length;
+  let i = 0;
+  while (i < n) {
+    let c = text.charCodeAt(i);
+    // Separators as splitList's /[\s,]+/ sees them in ASCII: whitespace (9-13, 32) and commas.
+    if (c === 32 || c === 44 || (c >= 9 && c <= 13)) {
+      i++;
+      continue;
+    }
+    const start = i;
+    do {
+      if (c > 127) return null;
+      c = ++i < n ? text.charCodeAt(i) : 32;
+    } while (!(c === 32 || c === 44 || (c >= 9 && c <= 13)));
+    const value = decimalValue(text, start, i);
+    if (!(value > 0) || spans.length === MAX_SPANS) return null;
+    spans.push(value);
+  }
+  return spans.length === 0 ? null : spans;
+}
+
+/**
+ * The spans of a range of plain cells: one row or one column of finite positive numbers with
+ * no blank after them; null for anything else (the full reader then reads or refuses it).
+ */
+function plainSpansRange(arg: unknown[]): number[] | null {
+  if (arg.length === 0 || arg.length > MAX_SPANS) return null;
+  const first: unknown = arg[0];
+  if (!Array.isArray(first)) return null;
+  if (arg.length === 1) {
+    const count = first.length;
+    if (count === 0 || count > MAX_SPANS) return null;
+    const spans = new Array<number>(count);
+    for (let i = 0; i < count; i++) {
+      const value: unknown = first[i];
+      if (typeof value !== "number" || !(value > 0) || value === Infinity) return null;
+      spans[i] = value;
+    }
+    return spans;
+  }
+  const spans = new Array<number>(arg.length);
+  for (let i = 0; i < arg.length; i++) {
+    const row: unknown = arg[i];
+    if (!Array.isArray(row) || row.length !== 1) return null;
+    const value: unknown = row[0];
+    if (typeof value !== "number" || !(value > 0) || value === Infinity) return null;
+    spans[i] = value;
+  }
+  return spans;
+}
+
 /** Span lengths, left to right, each positive; at most MAX_SPANS. */
 export function readSpans(arg: unknown): number[] {
+  // The common spellings first (see plainSpansText, plainSpansRange), each falling back to the full reader.
+  if (Array.isArray(arg)) {
+    const single = arg.length === 1 && Array.isArray(arg[0]) && arg[0].length === 1 ? (arg[0] as unknown[])[0] : undefined;
+    const plain = typeof single === "string" ? plainSpansText(single) : plainSpansRange(arg);
+    if (plain !== null) return plain;
+  } else if (typeof arg === "string") {
+    const plain = plainSpansText(arg);
+    if (plain !== null) return plain;
+  }
+  return readSpansFully(arg);
+}
+
+/** readSpans without the fast paths: every spelling, and every message. Exported for the tests that compare the two. */
+export function readSpansFully(arg: unknown): number[] {
   const entries = listEntries(arg, "spans");
   let count = entries.length;
   while (count > 0 && isEmpty(entries[count - 1])) count--;

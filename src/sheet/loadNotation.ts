@@ -13,7 +13,7 @@
  * only when x start is not 0 and `to` only when x end is not the member end.
  */
 import { invalid, MAX_LOADS, type LoadKind } from "../core";
-import { decimalValue, numberFromText } from "./cells";
+import { decimalValue, numberFromText, SHORT_DIGITS, shortDecimal } from "./cells";
 import { isCaseLabel, type LoadRow } from "./loadRow";
 
 const KINDS = new Map<string, LoadKind>([
@@ -106,6 +106,9 @@ function parseOne(text: string, row: number): LoadRow {
 const MAX_WORDS = 10;
 const wordStart = new Int32Array(MAX_WORDS);
 const wordEnd = new Int32Array(MAX_WORDS);
+/** 1 when the word is a short decimal (shortDecimal) read while splitting, its value in wordValue; 0 otherwise. */
+const wordShort = new Uint8Array(MAX_WORDS);
+const wordValue = new Float64Array(MAX_WORDS);
 
 /** Whitespace as /\s/ and trim() see it, for ASCII text. */
 function isSpace(code: number): boolean {
@@ -139,30 +142,22 @@ function isLabel(text: string, start: number, end: number): boolean {
 
 /** The number word w of `text` is (decimalValue), NaN when there is no such word or it is not a number. */
 function numberOf(text: string, w: number, words: number): number {
-  return w < words ? decimalValue(text, wordStart[w], wordEnd[w]) : NaN;
+  if (w >= words) return NaN;
+  return wordShort[w] === 1 ? wordValue[w] : decimalValue(text, wordStart[w], wordEnd[w]);
 }
 
 /**
- * One load of ASCII text[start, end) (no ';' inside) read without building strings (only its
- * case label is sliced), or null when it is not a plain, well-formed load: then parseOne reads
- * it, with its messages. When it gives a row, it is the row parseOne gives.
+ * The load whose `words` words are in wordStart/wordEnd (ASCII text, no ';' inside), read
+ * without building strings (only its case label is sliced), or null when it is not a plain,
+ * well-formed load: then parseOne reads it, with its messages. When it gives a row, it is the
+ * row parseOne gives.
  */
-function parsePlain(text: string, start: number, end: number, row: number): LoadRow | null {
-  let words = 0;
-  let i = start;
-  while (i < end) {
-    while (i < end && isSpace(text.charCodeAt(i))) i++;
-    if (i >= end) break;
-    if (words === MAX_WORDS) return null;
-    wordStart[words] = i;
-    while (i < end && !isSpace(text.charCodeAt(i))) i++;
-    wordEnd[words++] = i;
-  }
-  if (words < 2) return null;
+function plainRow(text: string, words: number, row: number): LoadRow | null {
+  if (words < 2 || words > MAX_WORDS) return null;
   let kind: LoadKind;
   if (isWord(text, 0, "point")) kind = "point";
-  else if (isWord(text, 0, "moment")) kind = "moment";
   else if (isWord(text, 0, "udl")) kind = "udl";
+  else if (isWord(text, 0, "moment")) kind = "moment";
   else if (isWord(text, 0, "linear")) kind = "linear";
   else if (isWord(text, 0, "settle")) kind = "settle";
   else return null;
@@ -209,31 +204,91 @@ function parsePlain(text: string, start: number, end: number, row: number): Load
   return { kind, magnitude, xStart, xEnd, magnitudeEnd, loadCase, row, fromText: true };
 }
 
-/** True when every character of the text is ASCII (so whitespace and case are the ASCII rules). */
-function isAscii(text: string): boolean {
-  for (let i = 0; i < text.length; i++) if (text.charCodeAt(i) > 127) return false;
-  return true;
-}
+/** Character code of ';', the loads' separator. */
+const SEMICOLON = 59;
 
-/** Parses the load notation into rows (numbered 1, 2, ... in order). Empty pieces are skipped. */
+/**
+ * Parses the load notation into rows (numbered 1, 2, ... in order). Empty pieces are skipped.
+ *
+ * One pass over the text: each piece (up to the next ';') is split into words as it is read,
+ * the first MAX_WORDS of them kept as offsets. An ASCII piece (whitespace and case are then
+ * the ASCII rules, as trim() and /\s/ apply them) is read by plainRow, or by parseOne when it
+ * is not plain; a piece with any other character is trimmed and read by parseOne, as
+ * text.split(";") and trim() give it. The pieces and their numbering are those of the split.
+ */
 export function parseLoadNotation(text: string): LoadRow[] {
   const rows: LoadRow[] = [];
-  if (isAscii(text)) {
-    let from = 0;
-    while (from <= text.length) {
-      let to = text.indexOf(";", from);
-      if (to < 0) to = text.length;
-      let start = from;
-      let end = to;
-      while (start < end && isSpace(text.charCodeAt(start))) start++;
-      while (end > start && isSpace(text.charCodeAt(end - 1))) end--;
-      from = to + 1;
-      if (start === end) continue;
-      if (rows.length === MAX_LOADS) throw invalid(`loads text: at most ${MAX_LOADS} loads on one member, got more (combine loads that act together)`);
-      rows.push(parsePlain(text, start, end, rows.length + 1) ?? parseOne(text.slice(start, end), rows.length + 1));
+  const n = text.length;
+  let i = 0;
+  for (;;) {
+    const from = i;
+    let words = 0;
+    let ascii = true;
+    let lastEnd = i;
+    let c = i < n ? text.charCodeAt(i) : SEMICOLON;
+    while (c !== SEMICOLON) {
+      if (isSpace(c)) {
+        c = ++i < n ? text.charCodeAt(i) : SEMICOLON;
+        continue;
+      }
+      // The word's digits are gathered as it is read: a short decimal (sign, digits, one point)
+      // then needs no second pass; any other word is read by decimalValue when a number is expected.
+      const start = i;
+      let negative = false;
+      let mantissa = 0;
+      let digits = 0;
+      let fraction = -1;
+      let short = true;
+      do {
+        if (c >= 48 && c <= 57) {
+          mantissa = mantissa * 10 + (c - 48);
+          digits++;
+          if (fraction >= 0) fraction++;
+        } else if (c === 46 && fraction < 0) fraction = 0;
+        else if ((c === 45 || c === 43) && i === start) negative = c === 45;
+        else {
+          short = false;
+          if (c > 127) ascii = false;
+        }
+        c = ++i < n ? text.charCodeAt(i) : SEMICOLON;
+      } while (c !== SEMICOLON && !isSpace(c));
+      if (words < MAX_WORDS) {
+        wordStart[words] = start;
+        wordEnd[words] = i;
+        if (short && digits > 0 && digits <= SHORT_DIGITS) {
+          wordShort[words] = 1;
+          wordValue[words] = shortDecimal(negative, mantissa, fraction);
+        } else wordShort[words] = 0;
+      }
+      words++;
+      lastEnd = i;
     }
-    return rows;
+    // text[from, i) is the piece; i is at its ';' or the end of the text.
+    if (ascii) {
+      if (words > 0) {
+        if (rows.length === MAX_LOADS) throw invalid(`loads text: at most ${MAX_LOADS} loads on one member, got more (combine loads that act together)`);
+        const start = wordStart[0];
+        rows.push(plainRow(text, words, rows.length + 1) ?? parseOne(text.slice(start, lastEnd), rows.length + 1));
+      }
+    } else {
+      const trimmed = text.slice(from, i).trim();
+      if (trimmed !== "") {
+        if (rows.length === MAX_LOADS) throw invalid(`loads text: at most ${MAX_LOADS} loads on one member, got more (combine loads that act together)`);
+        rows.push(parseOne(trimmed, rows.length + 1));
+      }
+    }
+    if (i >= n) return rows;
+    i++;
   }
+}
+
+/**
+ * parseLoadNotation without its one-pass reader: text.split(";"), each piece trimmed and read
+ * by parseOne. The reference the fast path must agree with (exported for the tests that
+ * compare the two; every result and message is the same).
+ */
+export function parseLoadNotationFully(text: string): LoadRow[] {
+  const rows: LoadRow[] = [];
   for (const piece of text.split(";")) {
     const trimmed = piece.trim();
     if (trimmed === "") continue;

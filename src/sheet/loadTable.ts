@@ -17,6 +17,9 @@ const KINDS = new Map<string, LoadKind>([
 ]);
 
 function isBlankRow(cells: unknown[]): boolean {
+  // A load type is text, so a row that starts with a non-blank text cell is not blank (no trim needed).
+  const first: unknown = cells[0];
+  if (typeof first === "string" && first.length > 0 && first.charCodeAt(0) > 32 && first.charCodeAt(0) < 127) return false;
   for (const cell of cells) if (!isBlank(cell)) return false;
   return true;
 }
@@ -33,15 +36,23 @@ function readKind(cell: unknown, row: number): LoadKind {
   return kind;
 }
 
-function requireBlank(cell: unknown, row: number, column: ColumnName, why: string): void {
-  if (isBlank(cell)) return;
+/** Why a column must be blank for a load of this kind (built only when refusing). */
+type BlankReason = "x end" | "magnitude at end" | "udl magnitude at end";
+
+function whyBlank(reason: BlankReason, kind: LoadKind): string {
+  if (reason === "x end") return `a ${kind === "point" ? "point load" : kind === "moment" ? "couple" : "settlement"} acts at x start only`;
+  return reason === "magnitude at end" ? "only a linear load has a magnitude at end" : "only a linear load has a magnitude at end (a udl is uniform)";
+}
+
+function requireBlank(cell: unknown, row: number, column: ColumnName, reason: BlankReason, kind: LoadKind): void {
+  if (cell === "" || cell === null || cell === undefined || cell === 0 || isBlank(cell)) return;
   const code = errorCodeOf(cell);
   if (code !== null) throw invalid(`${placeOf(row, false, column)}: the cell holds the error ${code}`);
-  throw invalid(`${placeOf(row, false, column)}: ${show(cell)} given, but ${why}; leave it blank`);
+  throw invalid(`${placeOf(row, false, column)}: ${show(cell)} given, but ${whyBlank(reason, kind)}; leave it blank`);
 }
 
 function readCase(cell: unknown, row: number): string {
-  if (isBlank(cell)) return "";
+  if (cell === "" || cell === null || cell === undefined || isBlank(cell)) return "";
   const where = (): string => placeOf(row, false, "case");
   const label = readText(cell, where);
   if (!isCaseLabel(label)) {
@@ -54,25 +65,26 @@ function readCase(cell: unknown, row: number): string {
 function numberCell(cells: unknown[], column: number, row: number, blank: number): number {
   const cell = cells[column];
   if (typeof cell === "number" && Number.isFinite(cell)) return cell;
+  // A blank cell reads as `blank`, as readNumber reads it (no closure built for the message).
+  if (cell === "" || cell === null || cell === undefined) return blank;
   return readNumber(cell, () => placeOf(row, false, COLUMNS[column]), blank);
 }
 
 /** Reads one non-blank table row (cells beyond the sixth must be blank). */
 export function readLoadRow(cells: unknown[], row: number): LoadRow {
   const kind = readKind(cells[0], row);
-  const number = (column: number, blank: number): number => numberCell(cells, column, row, blank);
-  const magnitude = number(1, 0);
-  const xStart = number(2, 0);
+  const magnitude = numberCell(cells, 1, row, 0);
+  const xStart = numberCell(cells, 2, row, 0);
   let xEnd: number | null = null;
   let magnitudeEnd = 0;
   if (kind === "point" || kind === "moment" || kind === "settle") {
-    requireBlank(cells[3], row, "x end", `a ${kind === "point" ? "point load" : kind === "moment" ? "couple" : "settlement"} acts at x start only`);
-    requireBlank(cells[4], row, "magnitude at end", "only a linear load has a magnitude at end");
+    requireBlank(cells[3], row, "x end", "x end", kind);
+    requireBlank(cells[4], row, "magnitude at end", "magnitude at end", kind);
   } else {
-    const end = number(3, 0);
+    const end = numberCell(cells, 3, row, 0);
     xEnd = end === 0 ? null : end;
-    if (kind === "linear") magnitudeEnd = number(4, 0);
-    else requireBlank(cells[4], row, "magnitude at end", "only a linear load has a magnitude at end (a udl is uniform)");
+    if (kind === "linear") magnitudeEnd = numberCell(cells, 4, row, 0);
+    else requireBlank(cells[4], row, "magnitude at end", "udl magnitude at end", kind);
   }
   const loadCase = readCase(cells[5], row);
   for (let c = 6; c < cells.length; c++) {

@@ -2,7 +2,7 @@
  * The shared leading arguments of every SPAN function (spans, loads, supports, EI, combo)
  * read into the solver's Member, with the combination applied.
  */
-import { applyCombination, checkCombinations, invalid, parseCombination, type Combination, type Member } from "../core";
+import { applyCombination, checkCombinations, invalid, parseCombination, type Combination, type Load, type Member } from "../core";
 import { errorCodeOf, isEmpty, show } from "./cells";
 import { readFlexure, readSpans } from "./lists";
 import type { LoadRow } from "./loadRow";
@@ -81,9 +81,8 @@ export function readMember(args: MemberArgs): Member {
   const comboText = readComboText(args.combo);
   const combination = comboText === "" ? null : parseCombination(comboText);
   checkMemberCombination(rows, combination);
-  const loads = applyCombination(
-    rows.map((row) => toLoad(row, length)),
-    combination,
-  );
+  const read = new Array<Load>(rows.length);
+  for (let i = 0; i < rows.length; i++) read[i] = toLoad(rows[i], length);
+  const loads = applyCombination(read, combination);
   return shear === null ? { spans, supports, stiffness, loads } : { spans, supports, stiffness, loads, shear };
 }

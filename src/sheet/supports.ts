@@ -91,7 +91,11 @@ function groupWords(tokens: string[]): string[] {
 /** Reads the supports argument for a member of `spanCount` spans. */
 export function readSupports(arg: unknown, spanCount: number): Support[] {
   const needed = spanCount + 1;
-  if (isAllBlank(arg)) return new Array<Support>(needed).fill(PIN);
+  if (isAllBlank(arg)) {
+    const pins = new Array<Support>(needed);
+    for (let i = 0; i < needed; i++) pins[i] = PIN;
+    return pins;
+  }
   const fromText = typeof singleCell(arg) === "string";
   const entries = fromText ? groupWords(listEntries(arg, "supports") as string[]) : listEntries(arg, "supports");
   let count = entries.length;

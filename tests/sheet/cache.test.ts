@@ -37,8 +37,31 @@ describe("memberHash and sameCells", () => {
     expect(sameCells([[NaN]], [[NaN]])).toBe(false);
   });
 
-  test("error objects are not keyed", () => {
+  test("error objects are not keyed, in any argument and at any depth", () => {
     expect(memberHash(args({ spans: [[{ code: "#N/A" }]] }))).toBeNull();
+    expect(memberHash(args({ combo: { code: "#N/A" } }))).toBeNull();
+    expect(memberHash(args({ units: [[{ code: "#REF!" }]] }))).toBeNull();
+    expect(memberHash(args({ loads: [{ code: "#N/A" }] }))).toBeNull();
+    expect(memberHash(args({ loads: [[["udl", { code: "#N/A" }]]] }))).toBeNull();
+    expect(memberHash(args({ supports: [[() => 1]] }))).toBeNull();
+  });
+
+  test("one-dimensional, bare and deeper-nested arguments hash and compare by their cells", () => {
+    for (const spans of [[6, 8], 6, "6 8", [[[6, 8]]], [[6], [8]], [[[6], [8]]]]) {
+      expect(memberHash(args({ spans }))).toBe(memberHash(args({ spans: JSON.parse(JSON.stringify(spans)) })));
+    }
+    expect(memberHash(args({ spans: [[[6, 8]]] }))).not.toBe(memberHash(args({ spans: [[[6, 9]]] })));
+    expect(memberHash(args({ spans: [[6, 8]] }))).not.toBe(memberHash(args({ spans: [6, 8] })));
+    expect(memberHash(args({ spans: [[6], [8]] }))).not.toBe(memberHash(args({ spans: [[6, 8]] })));
+    // Text of odd and even lengths, differing in one character anywhere.
+    const text = "udl 3.37 to 4.99; point 11.10 at 4.20; udl 3.63 from 4.99";
+    const hashes = new Set<number | null>();
+    for (let i = 0; i <= text.length; i++) {
+      const cut = text.slice(0, i);
+      hashes.add(memberHash(args({ loads: [[cut]] })));
+      if (i < text.length) hashes.add(memberHash(args({ loads: [[`${cut}#${text.slice(i + 1)}`]] })));
+    }
+    expect(hashes.size).toBe(2 * text.length + 1);
   });
 });
 
@@ -71,6 +94,42 @@ describe("MemberCache", () => {
     expect(matchesFlatCopy(args(), copy)).toBe(true);
     expect(matchesFlatCopy(args(change), copy)).toBe(false);
     expect(matchesFlatCopy(args(), flatCopy(args(change)))).toBe(false);
+  });
+
+  test("recent tier: numbers are compared as === compares them (-0 is 0, NaN never matches), never as text", () => {
+    expect(matchesFlatCopy(args({ spans: [[-0, 8]] }), flatCopy(args({ spans: [[0, 8]] })))).toBe(true);
+    expect(matchesFlatCopy(args({ spans: [[NaN, 8]] }), flatCopy(args({ spans: [[NaN, 8]] })))).toBe(false);
+    expect(matchesFlatCopy(args({ spans: [["6", 8]] }), flatCopy(args({ spans: [[6, 8]] })))).toBe(false);
+    expect(matchesFlatCopy(args({ spans: [[6, 8]] }), flatCopy(args({ spans: [["6", 8]] })))).toBe(false);
+    expect(matchesFlatCopy(args({ spans: [[null, 8]] }), flatCopy(args({ spans: [[undefined, 8]] })))).toBe(true);
+    expect(matchesFlatCopy(args({ spans: [[0, 8]] }), flatCopy(args({ spans: [[null, 8]] })))).toBe(false);
+  });
+
+  test("recent tier: a member of many number cells (past the slot's first number buffer) matches exactly", () => {
+    const big = (last: number): MemberArgs => args({ loads: Array.from({ length: 40 }, (_, i) => ["point", i + 0.5, i === 39 ? last : i / 4, "", "", "D"]) });
+    const copy = flatCopy(big(9.75));
+    expect(matchesFlatCopy(big(9.75), copy)).toBe(true);
+    expect(matchesFlatCopy(big(9.76), copy)).toBe(false);
+    const cache = new MemberCache(4);
+    cache.find(big(1));
+    cache.keep(big(1), solution);
+    cache.find(args());
+    cache.keep(args(), solution);
+    const other = {} as core.Solution;
+    cache.find(big(2));
+    cache.keep(big(2), other);
+    expect(cache.find(big(1))).toBe(solution);
+    expect(cache.find(big(2))).toBe(other);
+    expect(cache.find(big(3))).toBeUndefined();
+  });
+
+  test("recent tier: deeper-nested and one-dimensional arguments match exactly", () => {
+    for (const spans of [[[[6, 8]]], [6, 8], 6, [[6], [8]]]) {
+      expect(matchesFlatCopy(args({ spans }), flatCopy(args({ spans: JSON.parse(JSON.stringify(spans)) })))).toBe(true);
+    }
+    expect(matchesFlatCopy(args({ spans: [[[6, 8]]] }), flatCopy(args({ spans: [[[6, 9]]] })))).toBe(false);
+    expect(matchesFlatCopy(args({ spans: [[[6, 8]]] }), flatCopy(args({ spans: [[6, 8]] })))).toBe(false);
+    expect(matchesFlatCopy(args({ spans: [6, 8] }), flatCopy(args({ spans: [[6, 8]] })))).toBe(false);
   });
 
   test("recent tier: a longer or shorter member never matches a copy's prefix", () => {

@@ -1,5 +1,5 @@
 import * as fc from "fast-check";
-import { decimalValue, errorCodeOf, isBlank, isEmpty, NUMBER_TEXT, numberFromText, readNumber, readText, show } from "../../src/sheet/cells";
+import { decimalValue, errorCodeOf, isBlank, isEmpty, NUMBER_TEXT, numberFromText, readNumber, readText, SHORT_DIGITS, shortDecimal, show } from "../../src/sheet/cells";
 
 const where = () => "load row 2, column 3 (x start)";
 
@@ -93,6 +93,35 @@ describe("numberFromText reads without building strings, and equals the pattern 
   test("a slice of a longer text reads as the slice alone", () => {
     expect(decimalValue("at 2.75;", 3, 7)).toBe(2.75);
     expect(Number.isNaN(decimalValue("at 2.75;", 3, 8))).toBe(true);
+  });
+});
+
+describe("shortDecimal (digits gathered by a reader that splits text) equals decimalValue bit for bit", () => {
+  /** The digits of a short decimal as a reader gathers them: sign, the digits as one integer, digits after the point. */
+  function gathered(text: string): number {
+    const negative = text.startsWith("-");
+    const body = /^[+-]/.test(text) ? text.slice(1) : text;
+    const point = body.indexOf(".");
+    const mantissa = Number(body.replace(".", "") || "0");
+    return shortDecimal(negative, mantissa, point < 0 ? 0 : body.length - point - 1);
+  }
+
+  test.each(["0", "-0", "+0", "-0.0", "0.", ".0", "-.5", "2.50", "8.25", "0.1", "0.3", "-7.45", "000000000000001", "123456789012345", "12345678.9012345", "0.00000000000001", "99999999999999.9"])(
+    "%p",
+    (text) => {
+      expect(Object.is(gathered(text), decimalValue(text, 0, text.length))).toBe(true);
+    },
+  );
+
+  test(`random decimals of at most ${SHORT_DIGITS} digits agree`, () => {
+    const text = fc
+      .tuple(fc.constantFrom("", "+", "-"), fc.stringMatching(/^[0-9]{1,15}$/), fc.integer({ min: -1, max: 15 }))
+      .filter(([, digits, point]) => point <= digits.length)
+      .map(([sign, digits, point]) => `${sign}${point < 0 ? digits : `${digits.slice(0, point)}.${digits.slice(point)}`}`);
+    fc.assert(
+      fc.property(text, (t) => Object.is(gathered(t), decimalValue(t, 0, t.length))),
+      { numRuns: 20000, seed: 16 },
+    );
   });
 });
 

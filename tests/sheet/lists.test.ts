@@ -1,4 +1,4 @@
-import { readFlexure, MAX_SPANS, readSpans, readStiffness } from "../../src/sheet/lists";
+import { readFlexure, MAX_SPANS, readSpans, readSpansFully, readStiffness } from "../../src/sheet/lists";
 
 describe("readSpans", () => {
   test.each([
@@ -97,5 +97,44 @@ describe("readFlexure: EI with the shear stiffness G·A_v after the word shear",
   test("2,000 spans, each with its shear stiffness, in one text cell", () => {
     const text = "2e5 shear 8e4 ".repeat(2000);
     expect(readFlexure(text, 2000).shear).toHaveLength(2000);
+  });
+});
+
+/** The spans read (by `read`), or the message of the error thrown. */
+function spansOutcome(arg: unknown, read: (arg: unknown) => number[]): unknown {
+  try {
+    return read(arg);
+  } catch (error) {
+    return `error: ${(error as Error).message}`;
+  }
+}
+
+describe("readSpans' fast paths (one plain text cell, a plain row or column of numbers) give what the full reader gives", () => {
+  const many = (count: number, sep = " "): string => Array.from({ length: count }, (_, i) => String(1 + (i % 7))).join(sep);
+  test.each([
+    "6 8 6", "6,8,6", " 6 , 8 ", "6,,8", ",6,", "2.50 3.00", "002.500", "1e1 2E-1", "1E+1", "+5", "-0", "0", "0.0", "-3", "6 -2", "6 x", "6 8 6 m", "6m 8m", "6 kN",
+    "", "  ", ",", " , ", "6\t8\n6\r4\v2\f1", "6;8", "6\u00a08", "6\u30008", "\ufeff6", "6\u0001", "#N/A", "#6", " #N/A ", "1e400", "5e-400", "0x10", "1_0", ".5 5.",
+    "5..0", ".", "e5", "1e", "12345678901234567890", "0.1234567890123456789", "١", "６", "Infinity", "NaN", many(MAX_SPANS), many(MAX_SPANS + 1), many(MAX_SPANS, ","),
+  ])("text %p, as one cell and as a bare string", (text) => {
+    expect(spansOutcome([[text]], readSpans)).toEqual(spansOutcome([[text]], readSpansFully));
+    expect(spansOutcome(text, readSpans)).toEqual(spansOutcome(text, readSpansFully));
+    expect(spansOutcome([text], readSpans)).toEqual(spansOutcome([text], readSpansFully));
+  });
+
+  const row = (count: number): number[][] => [Array.from({ length: count }, (_, i) => 1 + (i % 7))];
+  test.each([
+    [[[6, 8, 6]]], [[[6], [8], [6]]], [[[6, 8, ""]]], [[[6, 8, null]]], [[[6, "", 8]]], [[[6, 0]]], [[[0]]], [[[-0]]], [[[-2]]], [[[NaN]]], [[[Infinity]]], [[[-Infinity]]],
+    [[[6, "8"]]], [[["6"], [8]]], [[[6, true]]], [[[6], [8, 9]]], [[[6, 8], [6, 8]]], [[]], [[[]]], [[[null]]], [[[""]]], [[[6], []]], [[[6], [""]]], [[[6], [0]]], [[[2.5e-300]]],
+    [[[1.7976931348623157e308]]], [[6, 8]], [6], [null], [undefined], [[[6, { code: "#DIV/0!" }]]], [row(MAX_SPANS)], [row(MAX_SPANS + 1)],
+    [Array.from({ length: MAX_SPANS + 1 }, () => [5])],
+  ])("range %#", (arg) => {
+    expect(spansOutcome(arg, readSpans)).toEqual(spansOutcome(arg, readSpansFully));
+  });
+
+  test("the fast paths return a fresh array (the caller's row is never the member's spans)", () => {
+    const given = [[6, 8]];
+    const spans = readSpans(given);
+    expect(spans).toEqual([6, 8]);
+    expect(spans).not.toBe(given[0]);
   });
 });

@@ -1,5 +1,6 @@
 import fc from "fast-check";
-import { formatLoad, formatLoadNotation, parseLoadNotation } from "../../src/sheet/loadNotation";
+import { MAX_LOADS } from "../../src/core";
+import { formatLoad, formatLoadNotation, parseLoadNotation, parseLoadNotationFully } from "../../src/sheet/loadNotation";
 import { readLoadRow } from "../../src/sheet/loadTable";
 import type { LoadRow } from "../../src/sheet/loadRow";
 
@@ -117,24 +118,23 @@ describe("round trip (property)", () => {
   });
 });
 
-/** The rows parsed, or the message of the error thrown. */
-function outcome(text: string): unknown {
+/** The rows parsed (by `read`, parseLoadNotation unless told), or the message of the error thrown. */
+function outcome(text: string, read: (text: string) => unknown = parseLoadNotation): unknown {
   try {
-    return parseLoadNotation(text);
+    return read(text);
   } catch (error) {
     return `error: ${(error as Error).message}`;
   }
 }
 
 describe("the plain-ASCII reader (no strings built) gives what the general reader gives", () => {
-  // A piece of only a no-break space is skipped, but its non-ASCII character sends the whole
-  // text through the general reader (split, trim, the word tokens): the two must agree.
-  const general = (text: string): unknown => outcome(`${text};\u00a0`);
+  // The general reader: text.split(";"), each piece trimmed and read by parseOne's word tokens.
+  const general = (text: string): unknown => outcome(text, parseLoadNotationFully);
   const word = fc.constantFrom(
     "point", "POINT", "Moment", "udl", "UdL", "linear", "settle", "SETTLE", "at", "AT", "to", "To", "from", "FROM", "D", "L", "Lr", "S2", "2S", "x", "-",
-    "0", "-0", "2.5", "10", "1e3", ".5", "5.", "1e", "3..2", "+4", "12345678901234567", "udl5", "at3",
+    "0", "-0", "2.5", "10", "1e3", ".5", "5.", "1e", "3..2", "+4", "12345678901234567", "udl5", "at3", "2.50", "1E+3", "kN", "pöint", "５",
   );
-  const separator = fc.constantFrom(" ", "  ", "\t", " \n ");
+  const separator = fc.constantFrom(" ", "  ", "\t", " \n ", "\u00a0");
   const load = fc.array(fc.tuple(word, separator), { minLength: 0, maxLength: 9 }).map((parts) => parts.map(([w, s]) => w + s).join(""));
   const text = fc.array(fc.tuple(load, fc.constantFrom(";", " ; ", ";;")), { minLength: 1, maxLength: 4 }).map((loads) => loads.map(([l, s]) => l + s).join(""));
 
@@ -144,6 +144,33 @@ describe("the plain-ASCII reader (no strings built) gives what the general reade
       expect(outcome(t)).toEqual(general(t));
     },
   );
+
+  // The one-pass reader splits, trims and reads each piece itself, and sends a piece with any
+  // character past ASCII to the general reader alone: blanks, decimals, exponents, negative
+  // zero, whitespace of every kind, units labels and typos, each compared with the general
+  // reader (the same rows, or the same message).
+  test.each([
+    "", ";", " ; ;", "\t\n", "udl 10", "UDL 10", "Udl 10 D", "P 20 @ 2.5", "point 20 @ 2.5", "point 20 at 2.5", "point 20 at 2.50", "point 2.50 at 002.500",
+    "point -0 at -0", "udl -0 from -0 to -0", "point 1e3 at 2E0", "point 1E+3 at 2e-0", "point 1e at 2", "point 1e400 at 2", "point 5e-400 at 2", "point 0x10 at 2",
+    "point .5 at 5.", "point 5 at 1.5.2", "point 5 at ,5", "point 5,5 at 2", "point 12345678901234567890 at 0.1234567890123456789", "point 5 at 2 1D", "point 5 at 2 D L",
+    "point 5 at", "point 5 at x", "point 5", "point", "udl", "udl 10 kN/m", "udl 10 kN", "moment 5 at 3 kNm", "point 5 kN at 2 m", "udl 10 from 2 m to 4 m",
+    "udl 10 from 0 to", "udl 10 to 0", "udl 10 from D", "udl 10 from 2 D to 3", "udl 3 from 1 to 2 to 3", "udl 3 to 2 from 1", "linear 1 to 2 from 0 to 4 D", "linear 1 2",
+    "linear 1 to", "linear 1 to x", "settle 0.01 at 6", "settle 0.01 at 6 to 7", "udl\t10\nfrom\r1\vto\f4 D", "  point   5   at   2   ;  ", "point 5 at 2;;udl 1;",
+    "pointt 5 at 2", "poin 5 at 2", "udl5", "udl 5from 1", "udl 5 from1", "linear 1 to 2 from 0 to 4 D E", "linear 1 to 2 from 0 to 4 D E F G H I J K",
+    "point 5 at 2\u00a0", "point\u00a05 at 2", "udl 3; \u00a0 ; point 5 at 2", "\u00a0;udl 3 from 1", "point ５ at 2", "pöint 5 at 2", "point 5 at 2 Ł", "udl 1\u2028to 2",
+    "point 5 at 2; pöint 5 at 2; udl 1", "udl 1; point 5 at 2\u3000D; udl 2 L", "\ufeffudl 1", "udl 1\u0001", "udl\u00001",
+  ])("%p", (t) => {
+    expect(outcome(t)).toEqual(general(t));
+  });
+
+  test("at most MAX_LOADS loads, the same message past it, with pieces of any kind", () => {
+    for (const piece of ["udl 1", "pöint 1 at 0", "udl\u00a01"]) {
+      for (const count of [MAX_LOADS, MAX_LOADS + 1]) {
+        const t = Array.from({ length: count }, (_, i) => (i === count - 1 ? piece : "point 1 at 0")).join("; ");
+        expect(outcome(t)).toEqual(general(t));
+      }
+    }
+  });
 
   // Mostly rejections (compared by message); the next test covers the accepting paths.
   test("random word sequences: the same rows or the same message", () => {
