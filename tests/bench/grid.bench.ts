@@ -81,14 +81,15 @@ export async function run(): Promise<void> {
     const diagram = await timed(page, "api.setFormula('Member!N1', '=SPAN.DIAGRAM(B3:C3,A10:F14,2000,B4:D4,B5,B6)')");
     line("a 2,000-row SPAN.DIAGRAM table spilled (one formula, 2,000 x 5 cells)", diagram);
     await page.evaluate(() => (window as any).spanwiseWorkbench.activateSheet("Schedule"));
-    // Median of 3 fills, each undone before the next (the undo is not timed).
-    const fills: Timed[] = [];
+    const filled = await timed(page, "api.fill('Schedule!A6:O6', 'Schedule!A7:O2005')");
+    line("2,000 x 15 schedule rows filled down from one (SPAN formulas, one member; the first fill of the page)", filled);
+    // The same fill again, undone before each (the undo not timed): the engine's caches and the compiled code are warm.
+    const again: Timed[] = [];
     for (let i = 0; i < 3; i++) {
-      if (i > 0) await page.evaluate(() => (window as any).spanwiseWorkbench.undo());
-      fills.push(await timed(page, "api.fill('Schedule!A6:O6', 'Schedule!A7:O2005')"));
+      await page.evaluate(() => (window as any).spanwiseWorkbench.undo());
+      again.push(await timed(page, "api.fill('Schedule!A6:O6', 'Schedule!A7:O2005')"));
     }
-    const filled = [...fills].sort((a, b) => a.totalMs - b.totalMs)[1];
-    line("2,000 x 15 schedule rows filled down from one (SPAN formulas, one member; median of 3)", filled);
+    line("  the same fill repeated after an undo (median of 3)", [...again].sort((a, b) => a.totalMs - b.totalMs)[1]);
     const spans = await timed(page, "api.setValues('Schedule!B6:B2005', Array.from({ length: 2000 }, (_, r) => [String((3 + (r % 400) * 0.01).toFixed(2))]))");
     line("2,000 distinct spans pasted into the schedule (every row recalculated)", spans);
     const edits: Timed[] = [];
