@@ -109,8 +109,33 @@ export function mapReferences(formula: string, limits: SheetLimits, map: (ref: C
 export function formulaShifter(formula: string, limits: SheetLimits): (rows: number, cols: number) => string {
   if (!formula.startsWith("=")) return () => formula;
   const parts = templateOf(formula, limits);
-  return (rows, cols) =>
-    rows === 0 && cols === 0 ? formula : render(parts, limits, (ref) => ({ row: ref.rowAbsolute ? ref.row : ref.row + rows, col: ref.colAbsolute ? ref.col : ref.col + cols }));
+  // Each reference's text up to its row number, for the last column offset asked (a fill down
+  // asks one): undefined where the column falls off the sheet. The same text render writes.
+  let heads: (string | undefined)[] = [];
+  let headsFor: number | undefined;
+  return (rows, cols) => {
+    if (rows === 0 && cols === 0) return formula;
+    if (headsFor !== cols) {
+      heads = parts.map((part) => {
+        if (typeof part === "string") return part;
+        const col = part.ref.colAbsolute ? part.ref.col : part.ref.col + cols;
+        return col < 0 || col >= limits.cols ? undefined : `${part.lead}${part.colDollar}${columnLetters(col)}${part.rowDollar}`;
+      });
+      headsFor = cols;
+    }
+    let out = "";
+    for (let i = 0; i < parts.length; i++) {
+      const part = parts[i];
+      if (typeof part === "string") {
+        out += part;
+        continue;
+      }
+      const head = heads[i];
+      const row = part.ref.rowAbsolute ? part.ref.row : part.ref.row + rows;
+      out += head === undefined || row < 0 || row >= limits.rows ? `${part.lead}#REF!` : `${head}${row + 1}`;
+    }
+    return out;
+  };
 }
 
 /** The formula as it reads when copied `rows` down and `cols` right: relative parts move, `$` parts stay. */

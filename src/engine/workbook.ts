@@ -204,6 +204,11 @@ export class SpanWorkbook {
   private write(sheet: number, top: number, left: number, block: readonly (readonly CellInput[])[], changed?: CellAddress[]): void {
     // Array.from, not block.map: a block from another frame (the pane writing into the workbench)
     // would map into that frame's arrays, which the engine does not take for arrays.
+    // Formulas kept as typed in the block are forgotten first (one pass over the few kept, not a key per cell).
+    const bottom = top + block.length;
+    const right = left + block.reduce((most, row) => Math.max(most, row.length), 0);
+    for (const [key, { address }] of this.typed)
+      if (address.sheet === sheet && address.row >= top && address.row < bottom && address.col >= left && address.col < right && address.col < left + block[address.row - top].length) this.typed.delete(key);
     const prepared = Array.from(block, (row, r) => Array.from(row, (input, c) => this.prepare({ sheet, row: top + r, col: left + c }, input)));
     const width = prepared[0]?.length ?? 0;
     if (width === 0) return;
@@ -379,6 +384,7 @@ export class SpanWorkbook {
   /** Sets scattered cells (row, column, input) in one batch, then recalculates once. */
   setScattered(sheet: number, cells: readonly (readonly [number, number, CellInput])[]): void {
     if (cells.length === 0) return;
+    for (const [row, col] of cells) this.typed.delete(cellKey({ sheet, row, col }));
     const prepared = cells.map(([row, col, input]) => [row, col, this.prepare({ sheet, row, col }, input)] as const);
     this.hf.batch(() => prepared.forEach(([row, col, input]) => this.hf.setCellContents({ sheet, row, col }, [[input]] as never)));
     this.retryBlocked();
@@ -410,14 +416,13 @@ export class SpanWorkbook {
     this.hf.destroy();
   }
 
+  /** The input as the engine takes it; a formula the engine holds in another text is kept as typed (its old entry is gone: see write). */
   private prepare(address: CellAddress, input: CellInput): CellInput {
-    const key = cellKey(address);
-    this.typed.delete(key);
     if (typeof input !== "string" || !input.startsWith("=")) return input ?? null;
     const normalized = normalizeFormula(input);
     if (normalized === input && !hasSpillReference(input)) return input;
     const engineText = this.engineText(address, input);
-    this.typed.set(key, { address, text: input, engineText });
+    this.typed.set(cellKey(address), { address, text: input, engineText });
     return engineText;
   }
 

@@ -437,8 +437,16 @@ export class Workbench {
     const computed = performance.now();
     // The shown sheet's changed cells, whichever sheet was written (formulas refer across sheets).
     const shown = this.sheetId();
+    // Only keys repaint asks for: cells of rendered rows, and anchors of rendered spilled cells
+    // (keys of 30,000 changed cells would cost more than the repaint itself).
+    const anchorRows = new Set<number>();
+    for (const cells of this.rendered.values())
+      for (const td of cells) {
+        const anchor = td.dataset.anchor;
+        if (anchor !== undefined) anchorRows.add(Number(anchor.slice(0, anchor.indexOf(","))));
+      }
     const keys = new Set<string>();
-    for (const a of changed) if (a.sheet === shown) keys.add(anchorKey(a.row, a.col));
+    for (const a of changed) if (a.sheet === shown && (this.rendered.has(a.row) || anchorRows.has(a.row))) keys.add(anchorKey(a.row, a.col));
     if (id === shown) for (let r = 0; r < rows; r++) if (this.rendered.has(top + r)) for (let c = 0; c < cols; c++) keys.add(anchorKey(top + r, left + c));
     if (keys.size > 0 || id === shown) this.repaint(keys);
     this.showSelection();

@@ -4,7 +4,8 @@
  * move, `$` parts stay; Microsoft support, "Switch between relative, absolute, and mixed
  * references"), worked by hand.
  */
-import { formulaAfterRows, mapReferences, shiftFormula } from "../../src/engine/references";
+import fc from "fast-check";
+import { formulaAfterRows, formulaShifter, mapReferences, shiftFormula } from "../../src/engine/references";
 import { SHEET_LIMITS, SpanWorkbook } from "../../src/engine";
 
 describe("shiftFormula (fill and paste)", () => {
@@ -87,5 +88,39 @@ describe("SpanWorkbook rows and reported changes", () => {
     expect(book.getValue(0, 3, 0)).toBe(null);
     const grown = book.setCellsReporting(0, 0, 0, [[4]]).map((a) => `${a.row},${a.col}`);
     expect(grown).toEqual(expect.arrayContaining(["1,0", "2,0", "3,0", "4,0"]));
+  });
+});
+
+describe("formulaShifter (one source formula, many offsets)", () => {
+  // Formulas from pieces: references near both sheet edges (so some copies fall off: #REF!),
+  // $ parts, sheet prefixes, ranges, strings that look like references, and plain text.
+  const col = fc.oneof(fc.constantFrom("A", "B", "Z", "AA", "XFD", "XFC"), fc.constantFrom("C", "SR"));
+  const row = fc.oneof(fc.integer({ min: 1, max: 30 }), fc.integer({ min: SHEET_LIMITS.rows - 3, max: SHEET_LIMITS.rows }));
+  const cell = fc.tuple(fc.boolean(), col, fc.boolean(), row).map(([cd, c, rd, r]) => `${cd ? "$" : ""}${c}${rd ? "$" : ""}${r}`);
+  const piece = fc.oneof(
+    cell,
+    fc.tuple(cell, cell).map(([a, b]) => `${a}:${b}`),
+    cell.map((c) => `Other!${c}`),
+    cell.map((c) => `'My sheet'!${c}`),
+    cell.map((c) => `"${c}"`),
+    fc.constantFrom("+", "*", ",", "SUM(", ")", "INDEX(", " ", "1.5", "A1#"),
+  );
+  const formula = fc.array(piece, { minLength: 1, maxLength: 8 }).map((ps) => `=${ps.join("")}`);
+  const offset = fc.tuple(fc.integer({ min: -40, max: 40 }), fc.integer({ min: -3, max: 3 }));
+
+  it("writes, for every offset in turn, the text mapReferences writes", () => {
+    fc.assert(
+      fc.property(formula, fc.array(offset, { minLength: 1, maxLength: 6 }), (f, offsets) => {
+        const shift = formulaShifter(f, SHEET_LIMITS);
+        for (const [rows, cols] of offsets) {
+          const expected =
+            rows === 0 && cols === 0
+              ? f
+              : mapReferences(f, SHEET_LIMITS, (ref) => ({ row: ref.rowAbsolute ? ref.row : ref.row + rows, col: ref.colAbsolute ? ref.col : ref.col + cols }));
+          expect(shift(rows, cols)).toBe(expected);
+        }
+      }),
+      { numRuns: 3000 },
+    );
   });
 });

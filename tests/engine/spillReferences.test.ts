@@ -154,3 +154,26 @@ describe("a blocked spill", () => {
     expect(block(wb.getSheetValues(0), 1, 1, good.length, 3)).toEqual(good);
   });
 });
+
+describe("formulas kept as typed (A1#) when a block is written over them", () => {
+  it("forgets exactly the cells the block covers, ragged rows included, on this sheet only", () => {
+    // Row 3 (index 2): A1# formulas in A..D; the same on sheet T.
+    const kept = [[SPANS, GOOD], [null, "=SPAN.REACTIONS(A1,B1)"], [], [], [], [], ["=B2#", "=SUM(B2#)", "=ROWS(B2#)", "=B2#"]];
+    const wb = new SpanWorkbook([{ name: "S", cells: kept }, { name: "T", cells: [["=S!B2#"]] }]);
+    expect(wb.getFormula(0, 6, 1)).toBe("=SUM(B2#)");
+    // A ragged block: its first row reaches columns A..B of row 7 only, its second A..D of row 8.
+    wb.setCells(0, 6, 0, [[7, "=ROWS(B2#)+1"], [1, 2, 3, 4]]);
+    expect(wb.getFormula(0, 6, 0)).toBeUndefined();
+    expect(wb.getInput(0, 6, 0)).toBe(7);
+    expect(wb.getFormula(0, 6, 1)).toBe("=ROWS(B2#)+1");
+    expect(wb.getValue(0, 6, 1)).toBe(5);
+    expect(wb.getInput(0, 7, 3)).toBe(4);
+    expect(wb.getFormula(0, 6, 2)).toBe("=ROWS(B2#)");
+    expect(wb.getFormula(0, 6, 3)).toBe("=B2#");
+    expect(wb.getFormula(1, 0, 0)).toBe("=S!B2#");
+    // Scattered writes forget what they cover too.
+    wb.setScattered(0, [[6, 3, null]]);
+    expect(wb.getFormula(0, 6, 3)).toBeUndefined();
+    expect(wb.getFormula(0, 6, 2)).toBe("=ROWS(B2#)");
+  });
+});
