@@ -24,9 +24,10 @@ export interface EngineContext {
   textAt?: (address: CellAddress) => string | undefined;
   /**
    * Results computed in a size other than reserved, kept until the cell is set again with the
-   * learned size: the second evaluation hands them back instead of calling the function again.
+   * learned size: the second evaluation hands them back instead of calling the function again
+   * when its arguments are the same (reusedResults.ts `sameArgs`, the one rule for that).
    */
-  computed: CallMap<{ args: string; result: unknown }>;
+  computed: CallMap<{ args: readonly unknown[]; result: unknown }>;
   /** Spill sizes reserved from a prediction that read another cell (see spanPlugin.ts). */
   reserved: CallMap<BlockSize>;
   /** Recent answers of each function by their arguments (reusedResults.ts). */

@@ -37,7 +37,8 @@ export function sameValue(a: unknown, b: unknown): boolean {
   return true;
 }
 
-function sameArgs(a: readonly unknown[], b: readonly unknown[]): boolean {
+/** True when two calls' arguments are the same (sameValue for each): the one rule for reusing an answer. */
+export function sameArgs(a: readonly unknown[], b: readonly unknown[]): boolean {
   if (a.length !== b.length) return false;
   for (let i = 0; i < a.length; i++) if (!sameValue(a[i], b[i])) return false;
   return true;
@@ -46,6 +47,11 @@ function sameArgs(a: readonly unknown[], b: readonly unknown[]): boolean {
 /** A copy of a host-shaped value (arrays copied; cells are primitives). */
 function copyOf(value: unknown): unknown {
   return Array.isArray(value) ? value.map(copyOf) : value;
+}
+
+/** A copy of a call's arguments, to compare later calls with (sameArgs). */
+export function copyArgs(args: readonly unknown[]): unknown[] {
+  return args.map(copyOf);
 }
 
 export class ReusedResults {
@@ -68,7 +74,7 @@ export class ReusedResults {
         return found.answer;
       }
     } else this.byFunction.set(name, (kept = []));
-    const copied = args.map(copyOf);
+    const copied = copyArgs(args);
     let answer: Answer;
     try {
       answer = { returned: call() };

@@ -11,6 +11,7 @@ import { argumentRange, entryFor, requiredArguments, SPAN_FUNCTIONS, type SpanFu
 import { engineError, engineResult, firstError, hostArgument, resizeResult, resultSize } from "./cellValues";
 import { cellKey, contextOf, sameSize, type CellAddress, type EngineContext } from "./learnedSizes";
 import { predictSize, type ArgumentNode, type BlockSize } from "./resultSize";
+import { copyArgs, sameArgs } from "./reusedResults";
 
 interface CallNode {
   procedureName: string;
@@ -184,7 +185,7 @@ class SpanPlugin extends FunctionPlugin {
     const kept = context.computed.get(address, call);
     if (kept) context.computed.delete(address, call);
     let result: ReturnType<typeof engineResult>;
-    if (kept && kept.args === JSON.stringify(args)) result = kept.result as ReturnType<typeof engineResult>;
+    if (kept && sameArgs(kept.args, args)) result = kept.result as ReturnType<typeof engineResult>;
     else {
       context.onCall?.();
       const answer = context.answers.answer(entry.exportName, args, () => context.functions[entry.exportName](...args));
@@ -201,7 +202,7 @@ class SpanPlugin extends FunctionPlugin {
     if (sameSize(actual, expected)) return result;
     context.learned.set(address, call, actual);
     context.mismatched.set(cellKey(address), address);
-    context.computed.set(address, call, { args: JSON.stringify(args), result });
+    context.computed.set(address, call, { args: copyArgs(args), result });
     // The engine cannot grow a reserved spill: hand back the reserved size until the cell is set again.
     return resizeResult(result, expected);
   }
