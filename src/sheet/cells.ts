@@ -14,7 +14,10 @@ export const NUMBER_TEXT = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
 /** True for a cell with nothing in it: "", whitespace-only text, null or undefined (not 0). */
 export function isEmpty(value: unknown): boolean {
   if (value === null || value === undefined || value === "") return true;
-  return typeof value === "string" && value.trim() === "";
+  if (typeof value !== "string") return false;
+  // A text starting with a printable ASCII character is not blank (no trimmed copy needed).
+  const first = value.charCodeAt(0);
+  return !(first > 32 && first < 127) && value.trim() === "";
 }
 
 /** True for a cell that counts as blank where a blank and a zero mean the same: empty or 0. */

@@ -17,9 +17,6 @@ const KINDS = new Map<string, LoadKind>([
 ]);
 
 function isBlankRow(cells: unknown[]): boolean {
-  // A load type is text, so a row that starts with a non-blank text cell is not blank (no trim needed).
-  const first: unknown = cells[0];
-  if (typeof first === "string" && first.length > 0 && first.charCodeAt(0) > 32 && first.charCodeAt(0) < 127) return false;
   for (const cell of cells) if (!isBlank(cell)) return false;
   return true;
 }
@@ -45,14 +42,14 @@ function whyBlank(reason: BlankReason, kind: LoadKind): string {
 }
 
 function requireBlank(cell: unknown, row: number, column: ColumnName, reason: BlankReason, kind: LoadKind): void {
-  if (cell === "" || cell === null || cell === undefined || cell === 0 || isBlank(cell)) return;
+  if (isBlank(cell)) return;
   const code = errorCodeOf(cell);
   if (code !== null) throw invalid(`${placeOf(row, false, column)}: the cell holds the error ${code}`);
   throw invalid(`${placeOf(row, false, column)}: ${show(cell)} given, but ${whyBlank(reason, kind)}; leave it blank`);
 }
 
 function readCase(cell: unknown, row: number): string {
-  if (cell === "" || cell === null || cell === undefined || isBlank(cell)) return "";
+  if (isBlank(cell)) return "";
   const where = (): string => placeOf(row, false, "case");
   const label = readText(cell, where);
   if (!isCaseLabel(label)) {
