@@ -79,6 +79,16 @@ function templateOf(formula: string, limits: SheetLimits): Template {
   return parts;
 }
 
+/** A reference's text up to its row number when it moves to column `col`; undefined off the sheet. */
+function referenceHead(part: FoundReference, col: number, limits: SheetLimits): string | undefined {
+  return col < 0 || col >= limits.cols ? undefined : `${part.lead}${part.colDollar}${columnLetters(col)}${part.rowDollar}`;
+}
+
+/** A moved reference's text from its head (referenceHead) and new row: `#REF!` when either is off the sheet. */
+function referenceText(part: FoundReference, head: string | undefined, row: number, limits: SheetLimits): string {
+  return head === undefined || row < 0 || row >= limits.rows ? `${part.lead}#REF!` : `${head}${row + 1}`;
+}
+
 /** The formula written from its template, each reference where `map` puts it (`#REF!` for null or off the sheet). */
 function render(parts: Template, limits: SheetLimits, map: (ref: CellReference) => { row: number; col: number } | null): string {
   let out = "";
@@ -88,8 +98,7 @@ function render(parts: Template, limits: SheetLimits, map: (ref: CellReference) 
       continue;
     }
     const moved = map(part.ref);
-    if (moved === null || moved.row < 0 || moved.col < 0 || moved.row >= limits.rows || moved.col >= limits.cols) out += `${part.lead}#REF!`;
-    else out += `${part.lead}${part.colDollar}${columnLetters(moved.col)}${part.rowDollar}${moved.row + 1}`;
+    out += moved === null ? `${part.lead}#REF!` : referenceText(part, referenceHead(part, moved.col, limits), moved.row, limits);
   }
   return out;
 }
@@ -109,18 +118,13 @@ export function mapReferences(formula: string, limits: SheetLimits, map: (ref: C
 export function formulaShifter(formula: string, limits: SheetLimits): (rows: number, cols: number) => string {
   if (!formula.startsWith("=")) return () => formula;
   const parts = templateOf(formula, limits);
-  // Each reference's text up to its row number, for the last column offset asked (a fill down
-  // asks one): undefined where the column falls off the sheet. The same text render writes.
+  // Each reference's head (referenceHead) for the last column offset asked (a fill down asks one).
   let heads: (string | undefined)[] = [];
   let headsFor: number | undefined;
   return (rows, cols) => {
     if (rows === 0 && cols === 0) return formula;
     if (headsFor !== cols) {
-      heads = parts.map((part) => {
-        if (typeof part === "string") return part;
-        const col = part.ref.colAbsolute ? part.ref.col : part.ref.col + cols;
-        return col < 0 || col >= limits.cols ? undefined : `${part.lead}${part.colDollar}${columnLetters(col)}${part.rowDollar}`;
-      });
+      heads = parts.map((part) => (typeof part === "string" ? part : referenceHead(part, part.ref.colAbsolute ? part.ref.col : part.ref.col + cols, limits)));
       headsFor = cols;
     }
     let out = "";
@@ -130,9 +134,7 @@ export function formulaShifter(formula: string, limits: SheetLimits): (rows: num
         out += part;
         continue;
       }
-      const head = heads[i];
-      const row = part.ref.rowAbsolute ? part.ref.row : part.ref.row + rows;
-      out += head === undefined || row < 0 || row >= limits.rows ? `${part.lead}#REF!` : `${head}${row + 1}`;
+      out += referenceText(part, heads[i], part.ref.rowAbsolute ? part.ref.row : part.ref.row + rows, limits);
     }
     return out;
   };
