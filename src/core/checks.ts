@@ -10,6 +10,7 @@
 import { invalid } from "./errors";
 import { extremes } from "./extremes";
 import type { Extreme, Solution } from "./model";
+import { pieceEndX, pieceStartX, slicePieces } from "./pieceTable";
 import { positionTolerance } from "./positions";
 
 function positive(value: number, what: string): void {
@@ -117,10 +118,11 @@ export function spanDeflections(solution: Solution, limits: number[]): SpanDefle
   for (let i = 0; i < spanCount; i++) {
     const a = solution.nodeX[i];
     const b = solution.nodeX[i + 1];
-    while (next < solution.pieces.length && solution.pieces[next].x0 < a - tol) next++;
+    const all = solution.pieces;
+    while (next < all.count && pieceStartX(all, next) < a - tol) next++;
     let end = next;
-    while (end < solution.pieces.length && solution.pieces[end].x1 <= b + tol) end++;
-    const pieces = solution.pieces.slice(next, end);
+    while (end < all.count && pieceEndX(all, end) <= b + tol) end++;
+    const pieces = slicePieces(all, next, end);
     next = end;
     const peak = largestMagnitude(extremes({ ...solution, pieces }, "deflection"));
     const length = b - a;

@@ -1,5 +1,6 @@
 import { invalid } from "./errors";
 import type { DiagramRow, Piece, Quantity, Solution } from "./model";
+import { pieceList } from "./pieceTable";
 import { coefficients, derivative, pieceValue } from "./polynomial";
 import { rootsBetween } from "./roots";
 import { cleanZero, POSITION_TOLERANCE, RELATIVE_ZERO } from "./tolerance";
@@ -27,8 +28,7 @@ const BOUNDARY = 2;
  * sorted. Piece ends that are boundaries are not listed: the boundaries are stations of
  * their own, with the higher priority.
  */
-function peakStations(solution: Solution, quantities: readonly Quantity[]): Float64Array {
-  const { pieces } = solution;
+function peakStations(pieces: Piece[], quantities: readonly Quantity[]): Float64Array {
   let out = new Float64Array(Math.max(16, pieces.length * 2));
   let n = 0;
   const push = (x: number): void => {
@@ -62,10 +62,11 @@ function peakStations(solution: Solution, quantities: readonly Quantity[]): Floa
  */
 export function diagram(solution: Solution, points: number): DiagramRow[] {
   if (!Number.isInteger(points) || points < 2) throw invalid(`points must be a whole number of at least 2, got ${points}`);
-  const { length, pieces } = solution;
+  const { length } = solution;
+  const pieces = pieceList(solution.pieces);
   const tol = POSITION_TOLERANCE * length;
   const quantities: Quantity[] = solution.hasStiffness ? ["shear", "moment", "slope", "deflection"] : ["shear", "moment"];
-  const peaks = peakStations(solution, quantities);
+  const peaks = peakStations(pieces, quantities);
   const even = (i: number): number => (i === points - 1 ? length : (length * i) / (points - 1));
 
   const stations: number[] = [];

@@ -1,16 +1,17 @@
 import { unavailable } from "./errors";
 import { checkedPosition, positionTolerance } from "./positions";
-import type { Piece, Quantity, Solution } from "./model";
+import type { PieceTable, Quantity, Solution } from "./model";
+import { pieceEndX, pieceOf, pieceStartX, scratchPiece } from "./pieceTable";
 import { pieceValue } from "./polynomial";
 import { cleanZero } from "./tolerance";
 
 /** Index of the piece holding the value just right of x (the last piece at the member end). */
-export function pieceIndexAt(pieces: Piece[], x: number): number {
+export function pieceIndexAt(pieces: PieceTable, x: number): number {
   let lo = 0;
-  let hi = pieces.length - 1;
+  let hi = pieces.count - 1;
   while (lo < hi) {
     const mid = (lo + hi + 1) >> 1;
-    if (pieces[mid].x0 <= x) lo = mid;
+    if (pieceStartX(pieces, mid) <= x) lo = mid;
     else hi = mid - 1;
   }
   return lo;
@@ -23,12 +24,15 @@ export function requireStiffness(solution: Solution, quantity: Quantity): void {
 }
 
 /** Moves x onto the member end or a piece boundary when it is within rounding of one. */
-function snapToPiece(pieces: Piece[], index: number, x: number, tol: number): [number, number] {
-  const piece = pieces[index];
-  if (index + 1 < pieces.length && pieces[index + 1].x0 - x <= tol) return [index + 1, pieces[index + 1].x0];
-  if (x - piece.x0 <= tol) return [index, piece.x0];
+function snapToPiece(pieces: PieceTable, index: number, x: number, tol: number): [number, number] {
+  if (index + 1 < pieces.count && pieceStartX(pieces, index + 1) - x <= tol) return [index + 1, pieceStartX(pieces, index + 1)];
+  const x0 = pieceStartX(pieces, index);
+  if (x - x0 <= tol) return [index, x0];
   return [index, x];
 }
+
+/** The piece valueAt evaluates, reused (evaluation is synchronous). */
+const scratch = scratchPiece();
 
 /**
  * The value of a quantity at x: the value just right of x where it jumps, and just left at
@@ -41,9 +45,9 @@ export function valueAt(solution: Solution, quantity: Quantity, x: number): numb
   const tol = positionTolerance(solution.length);
   const { pieces } = solution;
   const [index, snapped] = snapToPiece(pieces, pieceIndexAt(pieces, position), position, tol);
-  const piece = pieces[index];
-  const s = solution.length - snapped <= tol ? piece.x1 - piece.x0 : snapped - piece.x0;
-  return cleanZero(pieceValue(piece, quantity, s), solution.scales[quantity]);
+  const x0 = pieceStartX(pieces, index);
+  const s = solution.length - snapped <= tol ? pieceEndX(pieces, index) - x0 : snapped - x0;
+  return cleanZero(pieceValue(pieceOf(pieces, index, scratch), quantity, s), solution.scales[quantity]);
 }
 
 /** valueAt for many positions. */

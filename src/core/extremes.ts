@@ -1,5 +1,6 @@
 import { requireStiffness } from "./evaluate";
-import type { Extreme, Piece, Quantity, Solution } from "./model";
+import type { Extreme, PieceTable, Quantity, Solution } from "./model";
+import { MOMENT0, PIECE_FIELDS, pieceOf, Q0, Q1, scratchPiece, SHEAR0, X0, X1 } from "./pieceTable";
 import { coefficients, derivative, momentAt, pieceValue, shearAt } from "./polynomial";
 import { rootsBetween } from "./roots";
 import { cleanZero, RELATIVE_ZERO } from "./tolerance";
@@ -14,6 +15,7 @@ let capacity = 0;
 let candidateX = new Float64Array(0);
 let candidateValue = new Float64Array(0);
 const roots = new Float64Array(2);
+const piece = scratchPiece();
 
 function ensureCapacity(n: number): void {
   if (capacity >= n) return;
@@ -76,15 +78,15 @@ function makeRoom(n: number, more: number, left: number): void {
 function gather(solution: Solution, quantity: Quantity): number {
   const { pieces } = solution;
   const scale = solution.scales[quantity];
-  ensureCapacity(4 * pieces.length);
+  ensureCapacity(4 * pieces.count);
   if (quantity === "moment" || quantity === "shear") return gatherLow(pieces, quantity === "moment", scale);
   let n = 0;
-  for (let i = 0; i < pieces.length; i++) {
-    const piece = pieces[i];
+  for (let i = 0; i < pieces.count; i++) {
+    pieceOf(pieces, i, piece);
     const span = piece.x1 - piece.x0;
     const turning = rootsBetween(derivative(coefficients(piece, quantity)), 0, span);
     const inside = turning.length;
-    makeRoom(n, inside + 2, pieces.length - i);
+    makeRoom(n, inside + 2, pieces.count - i);
     candidateX[n] = piece.x0;
     candidateValue[n++] = cleanZero(pieceValue(piece, quantity, 0), scale);
     for (let k = 0; k < inside; k++) {
@@ -99,22 +101,27 @@ function gather(solution: Solution, quantity: Quantity): number {
 }
 
 /** gather for moment (or shear): at most 2 interior roots a piece, so room for 4 a piece is always enough. */
-function gatherLow(pieces: Piece[], moment: boolean, scale: number): number {
+function gatherLow(pieces: PieceTable, moment: boolean, scale: number): number {
+  const d = pieces.data;
   let n = 0;
-  for (let i = 0; i < pieces.length; i++) {
-    const piece = pieces[i];
-    const { shear0: v, moment0: m, q0, q1 } = piece;
-    const span = piece.x1 - piece.x0;
+  for (let o = 0; o < pieces.count * PIECE_FIELDS; o += PIECE_FIELDS) {
+    const v = d[o + SHEAR0];
+    const m = d[o + MOMENT0];
+    const q0 = d[o + Q0];
+    const q1 = d[o + Q1];
+    const x0 = d[o + X0];
+    const x1 = d[o + X1];
+    const span = x1 - x0;
     // The derivative's coefficients, i * c[i] of the quantity's own (polynomial.coefficients).
     const inside = moment ? lowRoots(3, 1 * v, 2 * (-q0 / 2), 3 * (-q1 / 6), span) : lowRoots(2, 1 * -q0, 2 * (-q1 / 2), 0, span);
-    candidateX[n] = piece.x0;
+    candidateX[n] = x0;
     candidateValue[n++] = cleanZero(moment ? momentAt(m, v, q0, q1, 0) : shearAt(v, q0, q1, 0), scale);
     for (let k = 0; k < inside; k++) {
       const s = roots[k];
-      candidateX[n] = piece.x0 + s;
+      candidateX[n] = x0 + s;
       candidateValue[n++] = cleanZero(moment ? momentAt(m, v, q0, q1, s) : shearAt(v, q0, q1, s), scale);
     }
-    candidateX[n] = piece.x1;
+    candidateX[n] = x1;
     candidateValue[n++] = cleanZero(moment ? momentAt(m, v, q0, q1, span) : shearAt(v, q0, q1, span), scale);
   }
   return n;

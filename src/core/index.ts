@@ -1,5 +1,6 @@
 /** The solver's whole public surface. Pure: plain data in, plain data out. */
-export type { Member, Support, Load, LoadKind, Quantity, Reaction, Piece, Solution, Extreme, DiagramRow } from "./model";
+export type { Member, Support, Load, LoadKind, Quantity, Reaction, Piece, PieceTable, Solution, Extreme, DiagramRow } from "./model";
+export { pieceOf, pieceList, pieceTableOf } from "./pieceTable";
 export { SpanError, invalid, unavailable, isSpanError } from "./errors";
 export type { ErrorCode } from "./errors";
 export { validateMember, MAX_LOADS } from "./validate";

@@ -87,12 +87,27 @@ export interface Piece {
   shearFlexibility: number;
 }
 
+/**
+ * A member's pieces, left to right, as one list of numbers rather than an object each (a
+ * member at the spans limit has thousands of pieces; a list of plain numbers is one object
+ * the garbage collector never looks inside, where each piece object held ten boxed numbers):
+ * piece i's fields are `data[i * PIECE_FIELDS + field]`, in the order of Piece's fields
+ * (pieceTable.ts names them and converts to and from Piece objects). A plain list, not a
+ * Float64Array: the engine keeps a typed array of more than 64 bytes outside its heap, and
+ * allocating one for every solve of a schedule's small members measured slower (see the
+ * README, issue 15 notes).
+ */
+export interface PieceTable {
+  count: number;
+  data: number[];
+}
+
 /** A solved member: exact piecewise polynomials plus reactions. */
 export interface Solution {
   length: number;
   nodeX: number[];
   reactions: Reaction[];
-  pieces: Piece[];
+  pieces: PieceTable;
   /** false when the member was solved without EI (slope and deflection unavailable). */
   hasStiffness: boolean;
   /** Largest load effect scale, used for tolerances (sum of |force| plus |couple|/length, plus each settlement Δ times the stiffness meeting its node). */

@@ -5,7 +5,8 @@ import type { Member, Quantity, Solution } from "./model";
 import { describeArrangement, governingSpans, standardArrangements } from "./pattern";
 import { coefficients } from "./polynomial";
 import { rootsBetween } from "./roots";
-import { addScaled, checkStudy, FIELDS, loadPiece, mergeBreaks, peaksOf, prepareStudy, resample, scaleOfSum, scratchPiece, type Study } from "./superposition";
+import { addScaled, checkStudy, FIELDS, loadPiece, mergeBreaks, peaksOf, prepareStudy, resample, scaleOfSum, type Study } from "./superposition";
+import { pieceList, scratchPiece } from "./pieceTable";
 import { cleanZero, ROUNDING_NOISE } from "./tolerance";
 
 export interface GoverningPeak {
@@ -41,7 +42,7 @@ function signChanges(parts: (Solution | null)[], quantity: Quantity): number[] {
   const out: number[] = [];
   for (const part of parts) {
     if (!part) continue;
-    for (const p of part.pieces) for (const s of rootsBetween(coefficients(p, quantity), 0, p.x1 - p.x0)) out.push(p.x0 + s);
+    for (const p of pieceList(part.pieces)) for (const s of rootsBetween(coefficients(p, quantity), 0, p.x1 - p.x0)) out.push(p.x0 + s);
   }
   return out;
 }

@@ -1,5 +1,6 @@
 import { COUPLE, DISTRIBUTED, FORCE, type SpanLoadTable } from "./elementLoads";
-import type { Piece } from "./model";
+import type { PieceTable } from "./model";
+import { DEFLECTION0, FLEXIBILITY, MOMENT0, PIECE_FIELDS, Q0, Q1, SHEAR0, SHEAR_FLEXIBILITY, SLOPE0, X0, X1 } from "./pieceTable";
 
 /** Values just right of a span's left node, before any load sitting on that node. */
 export interface SpanStart {
@@ -24,6 +25,16 @@ let rate = new Float64Array(0);
 let opened = new Int32Array(0);
 let candidateT = new Float64Array(0);
 let candidateX = new Float64Array(0);
+/**
+ * The pieces integrated so far in this solve, PIECE_FIELDS numbers each (takePieces copies
+ * them out). A list of unboxed doubles (filled with a fraction, so it holds doubles from the
+ * start, and grown by pushing), so that the copy is one flat copy.
+ */
+const rows: number[] = [];
+function growRows(size: number): void {
+  while (rows.length < size) rows.push(0.5);
+}
+growRows(16 * PIECE_FIELDS);
 
 function ensureCapacity(n: number): void {
   if (capacity >= n) return;
@@ -121,8 +132,9 @@ function indexOf(count: number, t: number): number {
  * by each clockwise couple, slope falls by the area under M/EI and deflection rises by the
  * area under the slope plus, with shear deformation (`shearFlexibility` = 1/(G·A_v) > 0), the
  * area under V/(G·A_v). Pieces start and end at the nodes' and loads' own x (xLeft, xRight:
- * the span's nodes). Appends the span's pieces to `out`. The loads are swept once in
- * order of position, so the cost grows as n log n in the number of loads.
+ * the span's nodes). Writes the span's pieces after the first `written` of this solve's
+ * scratch rows and returns the new count (takePieces copies them out). The loads are swept
+ * once in order of position, so the cost grows as n log n in the number of loads.
  */
 export function integrateSpan(
   start: SpanStart,
@@ -132,10 +144,13 @@ export function integrateSpan(
   xLeft: number,
   xRight: number,
   flexibility: number,
-  out: Piece[],
-  shearFlexibility = 0,
-): void {
+  shearFlexibility: number,
+  written: number,
+): number {
   const count = breakpoints(loads, e, span, xLeft, xRight);
+  const needed = (written + count - 1) * PIECE_FIELDS;
+  if (rows.length < needed) growRows(Math.max(needed, 2 * rows.length));
+  let o = written * PIECE_FIELDS;
   // A loop, not five fill calls: a span has only a few breakpoints.
   for (let k = 0; k < count; k++) {
     force[k] = 0;
@@ -181,19 +196,17 @@ export function integrateSpan(
       q0 = 0;
       q1 = 0;
     }
-    const piece: Piece = {
-      x0: places[k],
-      x1: places[k + 1],
-      shear0: shear,
-      moment0: moment,
-      slope0: slope,
-      deflection0: deflection,
-      q0,
-      q1,
-      flexibility,
-      shearFlexibility,
-    };
-    out.push(piece);
+    rows[o + X0] = places[k];
+    rows[o + X1] = places[k + 1];
+    rows[o + SHEAR0] = shear;
+    rows[o + MOMENT0] = moment;
+    rows[o + SLOPE0] = slope;
+    rows[o + DEFLECTION0] = deflection;
+    rows[o + Q0] = q0;
+    rows[o + Q1] = q1;
+    rows[o + FLEXIBILITY] = flexibility;
+    rows[o + SHEAR_FLEXIBILITY] = shearFlexibility;
+    o += PIECE_FIELDS;
     const s = t1 - t0;
     const s2 = s * s;
     const s3 = s2 * s;
@@ -211,4 +224,10 @@ export function integrateSpan(
     // The running intensity is carried to the next piece's start along its own slope.
     q0 += q1 * s;
   }
+  return written + count - 1;
+}
+
+/** The first `count` pieces integrated in this solve, as the solution's own table (a copy of the scratch rows). */
+export function takePieces(count: number): PieceTable {
+  return { count, data: rows.slice(0, count * PIECE_FIELDS) };
 }

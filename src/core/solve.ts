@@ -1,12 +1,13 @@
 import { isCollapsedPivot, type PivotStats } from "./banded";
 import { elementDof, nodePositions, prescribedDisplacement, rotationalSpring, type Layout } from "./layout";
 import { solvePrecise, worstStiffnessRatio } from "./precise";
-import type { Member, Piece, Quantity, Reaction, Solution } from "./model";
+import type { Member, PieceTable, Quantity, Reaction, Solution } from "./model";
 import { deflectionAt, momentAt, shearAt, slopeAt } from "./polynomial";
 import { cleanZero, EQUILIBRIUM_TOLERANCE } from "./tolerance";
 import { elementEndForces, solveRefined, staticsResidual } from "./refine";
 import { invalid } from "./errors";
-import { integrateSpan, type SpanStart } from "./pieces";
+import { integrateSpan, takePieces, type SpanStart } from "./pieces";
+import { DEFLECTION0, FLEXIBILITY, MOMENT0, PIECE_FIELDS, Q0, Q1, SHEAR0, SHEAR_FLEXIBILITY, SLOPE0, X0, X1 } from "./pieceTable";
 import { checkStability } from "./stability";
 import { assembleMember, type Assembly } from "./stiffness";
 import { validateMember } from "./validate";
@@ -54,7 +55,7 @@ function settlementScale(member: Member, layout: Layout): number {
  * that is zero throughout (to rounding) is not judged against its own noise. cleanZero against
  * this scale zeroes only values below 1e-11 of it. One sweep over the pieces for all four.
  */
-function scalesOf(pieces: Piece[], forceTerms: number, momentTerms: number): Record<Quantity, number> {
+function scalesOf(pieces: PieceTable, forceTerms: number, momentTerms: number): Record<Quantity, number> {
   let shear = 0;
   let moment = 0;
   let slope = 0;
@@ -63,11 +64,18 @@ function scalesOf(pieces: Piece[], forceTerms: number, momentTerms: number): Rec
   let momentTermsOfPieces = 0;
   let slopeTerms = 0;
   let deflectionTerms = 0;
-  for (let i = 0; i < pieces.length; i++) {
-    const p = pieces[i];
-    const span = p.x1 - p.x0;
+  const d = pieces.data;
+  for (let o = 0; o < pieces.count * PIECE_FIELDS; o += PIECE_FIELDS) {
+    const span = d[o + X1] - d[o + X0];
     const half = 0.5 * span;
-    const { shear0: v, moment0: m, slope0: th, deflection0: w, q0, q1, flexibility: f, shearFlexibility: g } = p;
+    const v = d[o + SHEAR0];
+    const m = d[o + MOMENT0];
+    const th = d[o + SLOPE0];
+    const w = d[o + DEFLECTION0];
+    const q0 = d[o + Q0];
+    const q1 = d[o + Q1];
+    const f = d[o + FLEXIBILITY];
+    const g = d[o + SHEAR_FLEXIBILITY];
     // pieceValue's arithmetic without its quantity name (polynomial.ts): the same operations, so the same bits.
     // Shear is linear in a piece without a varying load, so its ends hold its largest value.
     shear = Math.max(shear, Math.abs(shearAt(v, q0, q1, 0)), Math.abs(shearAt(v, q0, q1, span)));
@@ -99,12 +107,12 @@ function scalesOf(pieces: Piece[], forceTerms: number, momentTerms: number): Rec
 }
 
 /** Numbers that overflowed (or underflowed into 0/0) must never reach the sheet. */
-function requireFinite(d: Float64Array, size: number, pieces: Piece[], reactions: Reaction[], scales: Record<Quantity, number>): void {
+function requireFinite(d: Float64Array, size: number, pieces: PieceTable, reactions: Reaction[], scales: Record<Quantity, number>): void {
   let ok = Number.isFinite(scales.shear) && Number.isFinite(scales.moment) && Number.isFinite(scales.slope) && Number.isFinite(scales.deflection);
   for (let i = 0; ok && i < size; i++) ok = Number.isFinite(d[i]);
-  for (let i = 0; ok && i < pieces.length; i++) {
-    const p = pieces[i];
-    ok = Number.isFinite(p.shear0) && Number.isFinite(p.moment0) && Number.isFinite(p.slope0) && Number.isFinite(p.deflection0) && Number.isFinite(p.flexibility);
+  const p = pieces.data;
+  for (let o = 0; ok && o < pieces.count * PIECE_FIELDS; o += PIECE_FIELDS) {
+    ok = Number.isFinite(p[o + SHEAR0]) && Number.isFinite(p[o + MOMENT0]) && Number.isFinite(p[o + SLOPE0]) && Number.isFinite(p[o + DEFLECTION0]) && Number.isFinite(p[o + FLEXIBILITY]);
   }
   for (let i = 0; ok && i < reactions.length; i++) ok = Number.isFinite(reactions[i].force) && Number.isFinite(reactions[i].moment);
   if (!ok) {
@@ -258,7 +266,7 @@ export function solve(member: Member): Solution {
     nodeForce[i] = 0;
     nodeMoment[i] = 0;
   }
-  const pieces: Piece[] = [];
+  let pieceCount = 0;
   const spanCount = member.spans.length;
   const { settlement } = layout;
   for (let e = 0; e < spanCount; e++) {
@@ -273,8 +281,9 @@ export function solve(member: Member): Solution {
     start.moment = ends[at + 1];
     start.slope = slopeDof >= 0 ? d[slopeDof] : 0;
     start.deflection = deflectionDof >= 0 ? d[deflectionDof] : settlement === null ? 0 : prescribedDisplacement(layout, e, 0);
-    integrateSpan(start, loads, e, member.spans[e], nodeX[e], nodeX[e + 1], 1 / layout.stiffness[e], pieces, layout.shearFlexibility[e]);
+    pieceCount = integrateSpan(start, loads, e, member.spans[e], nodeX[e], nodeX[e + 1], 1 / layout.stiffness[e], layout.shearFlexibility[e], pieceCount);
   }
+  const pieces = takePieces(pieceCount);
   const loadScale = loadScaleOf(member, layout.length) + settlementScale(member, layout);
   const reactions = reactionsOf(member, layout, d, loadScale);
   const scales = scalesOf(pieces, solved.forceTerms, solved.momentTerms);

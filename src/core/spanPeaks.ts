@@ -6,6 +6,7 @@
  */
 import { extremes } from "./extremes";
 import type { Extreme, Quantity, Solution } from "./model";
+import { pieceEndX, pieceList, pieceStartX, pieceTableOf, slicePieces } from "./pieceTable";
 import { POSITION_TOLERANCE, RELATIVE_ZERO } from "./tolerance";
 
 /** One span's peaks. Values in the solution's units; x from the member's left end. */
@@ -43,8 +44,9 @@ export function spanSolution(solution: Solution, index: number): Solution {
   const a = solution.nodeX[index];
   const b = solution.nodeX[index + 1];
   const tol = POSITION_TOLERANCE * solution.length;
-  const pieces = solution.pieces.filter((p) => p.x0 >= a - tol && p.x1 <= b + tol);
-  return { ...solution, pieces };
+  const all = solution.pieces;
+  const kept = pieceList(all).filter((p) => p.x0 >= a - tol && p.x1 <= b + tol);
+  return { ...solution, pieces: pieceTableOf(kept) };
 }
 
 /** The peaks of every span, left to right (the pieces are swept once: linear in their number). */
@@ -56,8 +58,8 @@ export function spanPeaks(solution: Solution): SpanPeak[] {
   for (let i = 0; i + 1 < solution.nodeX.length; i++) {
     const b = solution.nodeX[i + 1];
     let end = start;
-    while (end < all.length && (end === start || all[end].x1 <= b + tol) && all[end].x0 < b - tol) end++;
-    const span: Solution = { ...solution, pieces: all.slice(start, end) };
+    while (end < all.count && (end === start || pieceEndX(all, end) <= b + tol) && pieceStartX(all, end) < b - tol) end++;
+    const span: Solution = { ...solution, pieces: slicePieces(all, start, end) };
     start = end;
     const of = (quantity: Quantity) => extremes(span, quantity);
     const moment = of("moment");

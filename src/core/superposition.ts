@@ -7,6 +7,7 @@ import { coefficients, derivative, pieceValue } from "./polynomial";
 import { rootsBetween } from "./roots";
 import { solve } from "./solve";
 import { RELATIVE_ZERO } from "./tolerance";
+import { pieceOf, pieceStartX, scratchPiece } from "./pieceTable";
 
 /**
  * Studies of many load arrangements by superposition: every load case (and, with a
@@ -143,7 +144,7 @@ export function scaleOfSum(study: Study, combination: StudyCombination, quantity
 /** Every piece start of every solution (and the member end), ascending, without repeats. */
 export function mergeBreaks(solutions: Solution[], extra: number[] = []): Float64Array {
   const all: number[] = [...extra];
-  for (const s of solutions) for (const p of s.pieces) all.push(p.x0);
+  for (const s of solutions) for (let i = 0; i < s.pieces.count; i++) all.push(pieceStartX(s.pieces, i));
   all.push(solutions[0].length);
   all.sort((a, b) => a - b);
   const out: number[] = [];
@@ -156,11 +157,12 @@ export function resample(solution: Solution, breaks: Float64Array, flexibility?:
   const m = breaks.length - 1;
   const out = new Float64Array(FIELDS * m);
   const { pieces } = solution;
+  const p = scratchPiece();
   let j = 0;
   for (let k = 0; k < m; k++) {
     const x = breaks[k];
-    while (j + 1 < pieces.length && pieces[j + 1].x0 <= x) j++;
-    const p = pieces[j];
+    while (j + 1 < pieces.count && pieceStartX(pieces, j + 1) <= x) j++;
+    pieceOf(pieces, j, p);
     const s = x - p.x0;
     const o = FIELDS * k;
     out[o] = pieceValue(p, "shear", s);
@@ -195,10 +197,6 @@ export function loadPiece(piece: Piece, fields: Float64Array, k: number, breaks:
   piece.flexibility = flexibility[k];
   piece.shearFlexibility = shearFlexibility ? shearFlexibility[k] : 0;
   return piece;
-}
-
-export function scratchPiece(): Piece {
-  return { x0: 0, x1: 0, shear0: 0, moment0: 0, slope0: 0, deflection0: 0, q0: 0, q1: 0, flexibility: 0, shearFlexibility: 0 };
 }
 
 export interface PeakAt {

@@ -4,7 +4,7 @@
  * they are proven against brute force: every arrangement the pattern stands for
  * (arrangementsOf), each solved on its own as a member with just those live loads.
  */
-import { applyCombination, arrangementsOf, envelope, extremes, governingPeaks, parseCombination, solve, valueAt } from "../../src/core";
+import { applyCombination, pieceList, arrangementsOf, envelope, extremes, governingPeaks, parseCombination, solve, valueAt } from "../../src/core";
 import type { Load, Member, Quantity, Solution } from "../../src/core";
 import type { PatternMode } from "../../src/core/pattern";
 import { pieceValue } from "../../src/core/polynomial";
@@ -105,7 +105,7 @@ function bruteForce(c: Case, mode: PatternMode): Brute[] {
 /** Both sides of x: just left (the piece ending there) and just right. */
 function sidesAt(s: Solution, q: Quantity, x: number): number[] {
   const values = [valueAt(s, q, x)];
-  for (const p of s.pieces) if (Math.abs(p.x1 - x) <= 1e-12 * s.length) values.push(pieceValue(p, q, p.x1 - p.x0));
+  for (const p of pieceList(s.pieces)) if (Math.abs(p.x1 - x) <= 1e-12 * s.length) values.push(pieceValue(p, q, p.x1 - p.x0));
   return values;
 }
 

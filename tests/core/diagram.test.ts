@@ -5,7 +5,7 @@
  */
 import fc from "fast-check";
 import { candidates } from "../../src/core/extremes";
-import { diagram, extremes, solve, tolerance, valueAt, type DiagramRow, type Member, type Quantity } from "../../src/core";
+import { diagram, pieceList, extremes, solve, tolerance, valueAt, type DiagramRow, type Member, type Quantity } from "../../src/core";
 import { HANDBOOK_TOLERANCE } from "../../src/core/tolerance";
 import { thrown } from "./kit/errors";
 import { forceMethodSolve } from "./kit/forceMethod";
@@ -130,10 +130,10 @@ describe("diagram stations: the priority rule where stations fall within roundin
   function referenceStations(m: Member, points: number): number[] {
     const s = solve(m);
     const tol = tolerance.POSITION_TOLERANCE * s.length;
-    const boundaries = new Set(s.pieces.map((p) => p.x0));
+    const boundaries = new Set(pieceList(s.pieces).map((p) => p.x0));
     const marked: [number, number][] = [];
     for (let i = 0; i < points; i++) marked.push([i === points - 1 ? s.length : (s.length * i) / (points - 1), 1]);
-    for (const p of s.pieces) marked.push([p.x0, 2]);
+    for (const p of pieceList(s.pieces)) marked.push([p.x0, 2]);
     for (const q of s.hasStiffness ? QUANTITIES : QUANTITIES.slice(0, 2)) for (const c of candidates(s, q)) marked.push([c.x, boundaries.has(c.x) ? 2 : 0]);
     marked.sort((a, b) => a[0] - b[0]);
     const kept: number[] = [];

@@ -11,7 +11,7 @@
  * slope-deflection method) — from memory, edition not at hand; each is re-derived below from
  * the cantilever tip deflections PL³/3EI and ML²/2EI so the check does not rest on memory.
  */
-import { caseReactions, solve, valueAt, type Load, type Member } from "../../src/core";
+import { caseReactions, pieceList, solve, valueAt, type Load, type Member } from "../../src/core";
 import { applyCombination, parseCombination } from "../../src/core";
 import { pieceValue } from "../../src/core/polynomial";
 import { thrown } from "./kit/errors";
@@ -121,8 +121,8 @@ describe("settlement: closed forms", () => {
     near(valueAt(s, "deflection", 3), -0.004, 0.01, 1e-12);
     near(valueAt(s, "deflection", 9.5), 0.01, 0.01, 1e-12);
     // The pieces on both sides of the node end and start at Δ.
-    const left = s.pieces.find((p) => p.x1 === 3)!;
-    const right = s.pieces.find((p) => p.x0 === 3)!;
+    const left = pieceList(s.pieces).find((p) => p.x1 === 3)!;
+    const right = pieceList(s.pieces).find((p) => p.x0 === 3)!;
     near(right.deflection0, -0.004, 0.01, 1e-12);
     near(pieceValue(left, "deflection", left.x1 - left.x0), -0.004, 0.01, 1e-12);
     let force = 0;

@@ -5,7 +5,7 @@
  * solver whose moments are off by 1e-8 of their scale, or that drops a rotational spring,
  * fails cases.
  */
-import { solve, type Member } from "../../src/core";
+import { pieceList, pieceTableOf, solve, type Member } from "../../src/core";
 import { crosscheckCases, handbookCases, verificationCases } from "../../src/verify/cases";
 import { REFERENCE_SOURCE, SEEDED_COUNT } from "../../src/verify/cases/crosscheck";
 import { runVerification } from "../../src/verify/run";
@@ -38,7 +38,7 @@ describe("independent-reference cases", () => {
   it("fails a solver whose moments are off by 1e-8 of their scale, or that drops rotational springs", () => {
     const nudged = (m: Member) => {
       const s = solve(m);
-      return { ...s, pieces: s.pieces.map((p) => ({ ...p, moment0: p.moment0 + 1e-8 * s.scales.moment })) };
+      return { ...s, pieces: pieceTableOf(pieceList(s.pieces).map((p) => ({ ...p, moment0: p.moment0 + 1e-8 * s.scales.moment }))) };
     };
     expect(runVerification(cases, nudged as typeof solve).pass).toBe(false);
     const stiff = cases.filter((c) => c.member.supports.some((s) => "rotational" in s && s.rotational !== undefined));
