@@ -6,7 +6,7 @@
  */
 import { extremes } from "./extremes";
 import type { Extreme, Quantity, Solution } from "./model";
-import { pieceEndX, pieceList, pieceStartX, pieceTableOf, slicePieces } from "./pieceTable";
+import { pieceEndX, pieceStartX, slicePieces } from "./pieceTable";
 import { POSITION_TOLERANCE, RELATIVE_ZERO } from "./tolerance";
 
 /** One span's peaks. Values in the solution's units; x from the member's left end. */
@@ -44,9 +44,13 @@ export function spanSolution(solution: Solution, index: number): Solution {
   const a = solution.nodeX[index];
   const b = solution.nodeX[index + 1];
   const tol = POSITION_TOLERANCE * solution.length;
+  // Pieces ascend in x0 and in x1, so those from a to b are one run of the table.
   const all = solution.pieces;
-  const kept = pieceList(all).filter((p) => p.x0 >= a - tol && p.x1 <= b + tol);
-  return { ...solution, pieces: pieceTableOf(kept) };
+  let start = 0;
+  while (start < all.count && pieceStartX(all, start) < a - tol) start++;
+  let end = start;
+  while (end < all.count && pieceEndX(all, end) <= b + tol) end++;
+  return { ...solution, pieces: slicePieces(all, start, end) };
 }
 
 /** The peaks of every span, left to right (the pieces are swept once: linear in their number). */
