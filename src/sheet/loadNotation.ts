@@ -204,6 +204,11 @@ function plainRow(text: string, words: number, row: number): LoadRow | null {
   return { kind, magnitude, xStart, xEnd, magnitudeEnd, loadCase, row, fromText: true };
 }
 
+/** Refuses a load past MAX_LOADS (one message for the one-pass reader and the full one). */
+function requireRoom(rows: LoadRow[]): void {
+  if (rows.length === MAX_LOADS) throw invalid(`loads text: at most ${MAX_LOADS} loads on one member, got more (combine loads that act together)`);
+}
+
 /** Character code of ';', the loads' separator. */
 const SEMICOLON = 59;
 
@@ -266,14 +271,14 @@ export function parseLoadNotation(text: string): LoadRow[] {
     // text[from, i) is the piece; i is at its ';' or the end of the text.
     if (ascii) {
       if (words > 0) {
-        if (rows.length === MAX_LOADS) throw invalid(`loads text: at most ${MAX_LOADS} loads on one member, got more (combine loads that act together)`);
+        requireRoom(rows);
         const start = wordStart[0];
         rows.push(plainRow(text, words, rows.length + 1) ?? parseOne(text.slice(start, lastEnd), rows.length + 1));
       }
     } else {
       const trimmed = text.slice(from, i).trim();
       if (trimmed !== "") {
-        if (rows.length === MAX_LOADS) throw invalid(`loads text: at most ${MAX_LOADS} loads on one member, got more (combine loads that act together)`);
+        requireRoom(rows);
         rows.push(parseOne(trimmed, rows.length + 1));
       }
     }
@@ -292,7 +297,7 @@ export function parseLoadNotationFully(text: string): LoadRow[] {
   for (const piece of text.split(";")) {
     const trimmed = piece.trim();
     if (trimmed === "") continue;
-    if (rows.length === MAX_LOADS) throw invalid(`loads text: at most ${MAX_LOADS} loads on one member, got more (combine loads that act together)`);
+    requireRoom(rows);
     rows.push(parseOne(trimmed, rows.length + 1));
   }
   return rows;
