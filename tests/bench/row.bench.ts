@@ -43,7 +43,7 @@ import { readMember } from "../../src/sheet/member";
 import { MAX_SPANS } from "../../src/sheet/lists";
 import { memberArgs } from "../../src/sheet/worksheet";
 import { yardstickMaxMoment, type YardstickBeam } from "./yardstick";
-import { loadBundle, reportTarget } from "./measure";
+import { cpuMs, loadBundle, median, reportTarget } from "./measure";
 
 const ROWS = 20000;
 const PASSES = 3;
@@ -106,19 +106,8 @@ function rows(seed: number, count: number): Row[] {
   return out;
 }
 
-/** CPU time of this process in ms (user + system): on a loaded machine it counts only the time this process ran. */
-function cpuMs(): number {
-  const u = process.cpuUsage();
-  return (u.user + u.system) / 1000;
-}
-
 /** Repeats of the yardstick's rows per pass, so its timed window is not a single scheduler slice. */
 const YARD_REPEATS = 20;
-
-function median(values: number[]): number {
-  const sorted = values.slice().sort((a, b) => a - b);
-  return sorted[Math.floor(sorted.length / 2)];
-}
 
 type RowCall = (row: Row) => number[][];
 
