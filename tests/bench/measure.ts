@@ -48,9 +48,9 @@ export function cpuMs(): number {
   return (u.user + u.system) / 1000;
 }
 
-/** The 1, 5 and 15 minute load averages, as `uptime` prints them. */
-export function loadAverage(): string {
-  return os.loadavg().map((v) => v.toFixed(2)).join(" ");
+/** The 1, 5 and 15 minute load averages, as `uptime` prints them (or with fewer decimals). */
+export function loadAverage(decimals = 2): string {
+  return os.loadavg().map((v) => v.toFixed(decimals)).join(" ");
 }
 
 /** The production functions bundle as users run it (`npx webpack --mode production`). */

@@ -43,7 +43,7 @@ import { readMember } from "../../src/sheet/member";
 import { MAX_SPANS } from "../../src/sheet/lists";
 import { memberArgs } from "../../src/sheet/worksheet";
 import { yardstickMaxMoment, type YardstickBeam } from "./yardstick";
-import { cpuMs, loadBundle, median, reportTarget } from "./measure";
+import { cpuMs, loadAverage, loadBundle, median, reportTarget } from "./measure";
 
 const ROWS = 20000;
 const PASSES = 3;
@@ -294,7 +294,7 @@ async function growth(functions: Record<string, Fn>): Promise<void> {
   const small = middle(smalls);
   const large = middle(larges);
   const roundRatios = larges.map((l, i) => l.ms / smalls[i].ms);
-  const ratio = middle(roundRatios.map((r) => ({ ms: r, wall: 0, gc: 0 }))).ms;
+  const ratio = median(roundRatios);
   const ratios = roundRatios.map((r) => r.toFixed(1)).join(", ");
   // gc entries are pause times (wall clock): their share is taken of the wall time.
   const share = (t: { wall: number; gc: number }) => `gc ${((100 * t.gc) / t.wall).toFixed(0)}% of wall`;
@@ -356,7 +356,7 @@ const PARTS: Record<string, (functions: Record<string, Fn>) => void | Promise<vo
 };
 
 export async function run(): Promise<void> {
-  const load = (): string => os.loadavg().map((v) => v.toFixed(1)).join(" ");
+  const load = (): string => loadAverage(1);
   const part = process.env.ROW_BENCH_PART;
   if (part !== undefined) {
     await PARTS[part](loadBundle());

@@ -3,9 +3,8 @@
  * supports alternate pin / pin with fixed ends. The solve is meant to be O(n) in spans; the
  * ratio 1000-span / 10-span cost should be at most 200 (100x the spans, with some headroom).
  */
-import * as os from "os";
 import { solve, type Load, type Member } from "../../src/core";
-import { measure, printTable } from "./measure";
+import { loadAverage, measure, printTable } from "./measure";
 
 function member(spans: number): Member {
   const lengths = Array.from({ length: spans }, (_, i) => 4 + (i % 3));
@@ -21,7 +20,7 @@ function member(spans: number): Member {
 }
 
 export function run(): void {
-  const load = (): string => os.loadavg().map((v) => v.toFixed(1)).join(" ");
+  const load = (): string => loadAverage(1);
   console.log(`load average ${load()}`);
   const counts = [1, 3, 10, 100, 1000];
   const results = counts.map((n) => {

@@ -14,7 +14,7 @@ import fs from "fs";
 import os from "os";
 import path from "path";
 import ExcelJS from "exceljs";
-import { median, printTable, reportTarget, type TargetResult } from "./measure";
+import { loadAverage, median, printTable, reportTarget, type TargetResult } from "./measure";
 
 const ROOT = path.resolve(__dirname, "..", "..");
 const BIN = path.join(ROOT, "src", "cli", "bin", "spanwise.js");
@@ -74,7 +74,7 @@ export function startupTarget(m: Startup): TargetResult {
 export async function run(): Promise<void> {
   const runs = Number(process.env.STARTUP_RUNS ?? 9);
   const { bare, fast, ratios, slow } = await measureStartup(runs, Math.min(3, runs));
-  const load = os.loadavg().map((v) => v.toFixed(2)).join(" ");
+  const load = loadAverage();
   printTable(
     ["command", "median wall (ms)", "min", "max", "x node -e 0 (median of pairs)"],
     [

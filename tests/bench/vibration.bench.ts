@@ -4,9 +4,8 @@
  * spans with 50 modes, 1,000 spans with 10 modes), whose cost the limit is meant to keep
  * within the 200 ms per call of the limits section.
  */
-import * as os from "os";
 import { modeShape, naturalFrequencies, spanMasses, type Member, type VibrationModel } from "../../src/core";
-import { measure, printTable } from "./measure";
+import { loadAverage, measure, printTable } from "./measure";
 
 function model(spans: number): VibrationModel {
   const lengths = Array.from({ length: spans }, (_, i) => 4 + (i % 3));
@@ -16,7 +15,7 @@ function model(spans: number): VibrationModel {
 }
 
 export function run(): void {
-  console.log(`load average ${os.loadavg().map((v) => v.toFixed(1)).join(" ")}`);
+  console.log(`load average ${loadAverage(1)}`);
   const cases: [number, number, number][] = [
     [1, 1, 300],
     [1, 10, 300],
