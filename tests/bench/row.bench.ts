@@ -22,7 +22,9 @@
  *    member per row, through the sources, counting solves with the member cache's counter.
  *    Target: one solve per member per row (here two members a row).
  *
- * 4. Where a row's time goes (the floor): reading, the core and the rest, from the sources.
+ * 4. Where a row's time goes (the floor): reading, the core and the rest, from the sources;
+ *    and two lower bounds in the same rounds: the least reading of the text (digitScan.ts)
+ *    and the stiffness method with none of the product's guarantees (leanStiffness.ts).
  *
  * Each target also prints one line `target NAME: ...; ratio R (at most L) PASS|MISS`
  * (measure.ts `reportTarget`), which targets.bench.ts collects into its table.
@@ -43,6 +45,8 @@ import { readMember } from "../../src/sheet/member";
 import { MAX_SPANS } from "../../src/sheet/lists";
 import { memberArgs } from "../../src/sheet/worksheet";
 import { yardstickMaxMoment, type YardstickBeam } from "./yardstick";
+import { leanMaxMoment } from "./leanStiffness";
+import { scanDigits } from "./digitScan";
 import { cpuMs, loadAverage, loadBundle, median, reportTarget } from "./measure";
 
 const ROWS = 20000;
@@ -206,7 +210,7 @@ function floor(): void {
   let sink = 0;
   const none = (): null => null;
   // Interleaved, so that each part sees the same machine: the yardstick, the whole function, reading, the core.
-  const parts = { yard: [] as number[], whole: [] as number[], read: [] as number[], core: [] as number[] };
+  const parts = { yard: [] as number[], whole: [] as number[], read: [] as number[], core: [] as number[], scan: [] as number[], lean: [] as number[] };
   for (let round = 0; round < 3; round++) {
     parts.yard.push(time(none, (_, row) => yardstickMaxMoment(row.beam, out), YARD_REPEATS));
     parts.whole.push(time(none, (_, row) => (sink += Number(sheetMaxMoment([[row.spansText]], [[row.loadsText]], null, null, null)[0][0]))));
@@ -218,17 +222,27 @@ function floor(): void {
         (member: Member) => (sink += extremes(solve(member), "moment").max),
       ),
     );
+    // The lower bounds: the least any reader of the text must do, and the stiffness method without the product's guarantees.
+    parts.scan.push(time(none, (_, row) => (sink += scanDigits(row.spansText) + scanDigits(row.loadsText)), YARD_REPEATS));
+    parts.lean.push(time(none, (_, row) => (leanMaxMoment(row.beam, out), (sink += out.max)), YARD_REPEATS));
   }
   if (!Number.isFinite(sink)) console.log("(non-finite sink)");
   const yard = median(parts.yard);
   const whole = median(parts.whole);
   const read = median(parts.read);
   const core = median(parts.core);
+  const scan = median(parts.scan);
+  const lean = median(parts.lean);
   const share = (t: number): string => `${t.toFixed(2)} us, ${(t / yard).toFixed(1)} x the yardstick, ${((100 * t) / whole).toFixed(0)}% of the whole`;
   console.log(`  where it goes (the sources, CPU time, medians of 3 interleaved rounds; yardstick here ${yard.toFixed(3)} us, the whole SPAN.MAXMOMENT ${whole.toFixed(2)} us = ${(whole / yard).toFixed(1)} x):`);
   console.log(`    reading the cells into a member (text, checks, combination): ${share(read)}`);
   console.log(`    core: solve and the moment extremes of a read member: ${share(core)}`);
   console.log(`    the rest (member cache, result rows): ${share(Math.max(0, whole - read - core))}`);
+  const times = (t: number): string => `${t.toFixed(3)} us, ${(t / yard).toFixed(1)} x the yardstick`;
+  console.log(`  lower bounds (same rounds):`);
+  console.log(`    the least reading of the text (digitScan.ts: digit runs to numbers; no words, signs or checks): ${times(scan)}`);
+  console.log(`    the stiffness method alone, lean (leanStiffness.ts: banded solve of the free DOFs, end forces, exact span maxima; no validation, mechanism sweep, refinement, equilibrium check, scales or solution kept): ${times(lean)}`);
+  console.log(`    so a row from text cells by the stiffness method costs at least ${times(scan + lean)} (target: at most 3), and the product's guarantees and general machinery cost the rest`);
 }
 
 /**
