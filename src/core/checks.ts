@@ -10,8 +10,7 @@
 import { invalid } from "./errors";
 import { extremes } from "./extremes";
 import type { Extreme, Solution } from "./model";
-import { pieceEndX, pieceStartX, slicePieces } from "./pieceTable";
-import { positionTolerance } from "./positions";
+import { spanRuns, withPieces } from "./spanRuns";
 
 function positive(value: number, what: string): void {
   if (!(Number.isFinite(value) && value > 0)) throw invalid(`${what} must be a positive number, got ${value}`);
@@ -110,22 +109,11 @@ export function spanDeflections(solution: Solution, limits: number[]): SpanDefle
   if (limits.length !== 1 && limits.length !== spanCount) {
     throw invalid(`limit: give one limit for the member or one per span (${spanCount}), got ${limits.length}`);
   }
-  const tol = positionTolerance(solution.length);
   const out: SpanDeflection[] = [];
-  // Pieces run left to right, so each span's pieces are the next contiguous run (one pass over
-  // the pieces for the whole member, not one per span).
-  let next = 0;
+  const runs = spanRuns(solution);
   for (let i = 0; i < spanCount; i++) {
-    const a = solution.nodeX[i];
-    const b = solution.nodeX[i + 1];
-    const all = solution.pieces;
-    while (next < all.count && pieceStartX(all, next) < a - tol) next++;
-    let end = next;
-    while (end < all.count && pieceEndX(all, end) <= b + tol) end++;
-    const pieces = slicePieces(all, next, end);
-    next = end;
-    const peak = largestMagnitude(extremes({ ...solution, pieces }, "deflection"));
-    const length = b - a;
+    const peak = largestMagnitude(extremes(withPieces(solution, runs[i], runs[i + 1]), "deflection"));
+    const length = solution.nodeX[i + 1] - solution.nodeX[i];
     const limit = limits.length === 1 ? limits[0] : limits[i];
     const ratio = deflectionRatio(length, peak.value);
     out.push({ span: i + 1, length, deflection: peak.value, x: peak.x, ratio, limit, pass: ratio >= limit });

@@ -6,8 +6,8 @@
  */
 import { extremes } from "./extremes";
 import type { Extreme, Quantity, Solution } from "./model";
-import { pieceEndX, pieceStartX, slicePieces } from "./pieceTable";
-import { POSITION_TOLERANCE, RELATIVE_ZERO } from "./tolerance";
+import { spanRuns, withPieces } from "./spanRuns";
+import { RELATIVE_ZERO } from "./tolerance";
 
 /** One span's peaks. Values in the solution's units; x from the member's left end. */
 export interface SpanPeak {
@@ -39,32 +39,18 @@ export function signedPeak(e: Extreme): { value: number; x: number } {
   return { value: e.min, x: e.xMin };
 }
 
-/** The solution restricted to span `index` (0-based): its own pieces only. */
+/** The solution restricted to span `index` (0-based): its own pieces only (spanRuns' rule). */
 export function spanSolution(solution: Solution, index: number): Solution {
-  const a = solution.nodeX[index];
-  const b = solution.nodeX[index + 1];
-  const tol = POSITION_TOLERANCE * solution.length;
-  // Pieces ascend in x0 and in x1, so those from a to b are one run of the table.
-  const all = solution.pieces;
-  let start = 0;
-  while (start < all.count && pieceStartX(all, start) < a - tol) start++;
-  let end = start;
-  while (end < all.count && pieceEndX(all, end) <= b + tol) end++;
-  return { ...solution, pieces: slicePieces(all, start, end) };
+  const runs = spanRuns(solution);
+  return withPieces(solution, runs[index], runs[index + 1]);
 }
 
 /** The peaks of every span, left to right (the pieces are swept once: linear in their number). */
 export function spanPeaks(solution: Solution): SpanPeak[] {
   const out: SpanPeak[] = [];
-  const tol = POSITION_TOLERANCE * solution.length;
-  const all = solution.pieces;
-  let start = 0;
+  const runs = spanRuns(solution);
   for (let i = 0; i + 1 < solution.nodeX.length; i++) {
-    const b = solution.nodeX[i + 1];
-    let end = start;
-    while (end < all.count && (end === start || pieceEndX(all, end) <= b + tol) && pieceStartX(all, end) < b - tol) end++;
-    const span: Solution = { ...solution, pieces: slicePieces(all, start, end) };
-    start = end;
+    const span = withPieces(solution, runs[i], runs[i + 1]);
     const of = (quantity: Quantity) => extremes(span, quantity);
     const moment = of("moment");
     const shear = signedPeak(of("shear"));
