@@ -16,6 +16,7 @@ import { performance } from "perf_hooks";
 import * as fx from "../../functions/functions";
 import { extremes, solve } from "../../src/core";
 import { memberHash, readMember, solvedMembers } from "../../src/sheet";
+import { median } from "./measure";
 
 const ROWS = 20000;
 const PASSES = 5;
@@ -66,11 +67,6 @@ function asRanges(row: Row): Args {
     null,
     null,
   ];
-}
-
-function median(values: number[]): number {
-  const sorted = values.slice().sort((a, b) => a - b);
-  return sorted[Math.floor(sorted.length / 2)];
 }
 
 /** Wall-clock and process CPU time of `body`, in milliseconds. */
