@@ -77,14 +77,17 @@ function scalesOf(pieces: PieceTable, forceTerms: number, momentTerms: number): 
     const f = d[o + FLEXIBILITY];
     const g = d[o + SHEAR_FLEXIBILITY];
     // pieceValue's arithmetic without its quantity name (polynomial.ts): the same operations, so the same bits.
-    // Shear is linear in a piece without a varying load, so its ends hold its largest value.
-    shear = Math.max(shear, Math.abs(shearAt(v, q0, q1, 0)), Math.abs(shearAt(v, q0, q1, span)));
+    // At the piece's start that arithmetic adds only signed zeros to the stored value (or NaN
+    // from a non-finite field, which the end's value then carries too), so the start's
+    // magnitude is the stored value's. Shear is linear in a piece without a varying load, so
+    // its ends hold its largest value.
+    shear = Math.max(shear, Math.abs(v), Math.abs(shearAt(v, q0, q1, span)));
     if (q1 !== 0) shear = Math.max(shear, Math.abs(shearAt(v, q0, q1, half)));
-    moment = Math.max(moment, Math.abs(momentAt(m, v, q0, q1, 0)), Math.abs(momentAt(m, v, q0, q1, span)));
+    moment = Math.max(moment, Math.abs(m), Math.abs(momentAt(m, v, q0, q1, span)));
     moment = Math.max(moment, Math.abs(momentAt(m, v, q0, q1, half)));
-    slope = Math.max(slope, Math.abs(slopeAt(th, m, v, q0, q1, f, 0)), Math.abs(slopeAt(th, m, v, q0, q1, f, span)));
+    slope = Math.max(slope, Math.abs(th), Math.abs(slopeAt(th, m, v, q0, q1, f, span)));
     slope = Math.max(slope, Math.abs(slopeAt(th, m, v, q0, q1, f, half)));
-    deflection = Math.max(deflection, Math.abs(deflectionAt(w, th, m, v, q0, q1, f, g, 0)), Math.abs(deflectionAt(w, th, m, v, q0, q1, f, g, span)));
+    deflection = Math.max(deflection, Math.abs(w), Math.abs(deflectionAt(w, th, m, v, q0, q1, f, g, span)));
     deflection = Math.max(deflection, Math.abs(deflectionAt(w, th, m, v, q0, q1, f, g, half)));
     // The sum of the magnitudes of each quantity's terms at the end of the piece: the size its rounding is relative to.
     const bendingMoment = Math.abs(m);
