@@ -5,6 +5,7 @@
  */
 import { tolerance, type Member } from "../../src/core";
 import { memberInOwnUnits, memberInSI, readMemberUnits, readUnit, solvedMember } from "../../src/sheet";
+import { UNITS_MEMO } from "../../src/sheet/units";
 import { thrown } from "../core/kit/errors";
 
 const FT = 0.3048;
@@ -70,6 +71,45 @@ describe("readMemberUnits", () => {
     const e = thrown(() => readMemberUnits(text));
     expect(e.code).toBe("#VALUE!");
     expect(e.message).toMatch(message);
+  });
+
+  describe("texts read before are kept (every formula's call reads its units, cached members included)", () => {
+    const text = "length=ft, force=kip, EI=kip*in^2, deflection=in";
+
+    test("the same text, alone or as a 1 x 1 range, gives the one frozen result; other forms are read each time, to the same factors", () => {
+      const first = readMemberUnits(text)!;
+      expect(readMemberUnits([[text]])).toBe(first);
+      expect(readMemberUnits([text])).toBe(first);
+      expect(Object.isFrozen(first)).toBe(true);
+      for (const unit of Object.values(first)) expect(Object.isFrozen(unit)).toBe(true);
+      const table = readMemberUnits([["length", "ft"], ["force", "kip"], ["EI", "kip*in^2"], ["deflection", "in"]])!;
+      expect(table).not.toBe(first);
+      expect(table).toEqual(first);
+    });
+
+    test("a result kept is the result read afresh, for more texts than the memo keeps (the oldest give way), read twice over", () => {
+      const units = ["in", "mm", "ft", "m"];
+      const texts = Array.from({ length: UNITS_MEMO + 5 }, (_, i) => `${" ".repeat(i)}length=ft, force=kip, deflection=${units[i % 4]}`);
+      for (let round = 0; round < 2; round++) {
+        for (const t of texts) {
+          const kept = readMemberUnits(t)!;
+          // A 1 x 2 range is never kept: always read.
+          const fresh = readMemberUnits([[t, ""]])!;
+          expect(kept).toEqual(fresh);
+        }
+      }
+    });
+
+    test("a text that does not read is refused every time (errors are never kept)", () => {
+      for (let k = 0; k < 3; k++) expect(thrown(() => readMemberUnits("length=ft, force=furlong")).message).toMatch(/^units force: unknown unit "furlong"/);
+    });
+
+    test("a solved member's results with the kept units equal those read afresh", () => {
+      const args = { spans: [[20]], loads: [["udl 1.5 D"]], supports: null, EI: [[14790000]], combo: null, units: [[text]] };
+      const kept = solvedMember(args, readMemberUnits(text));
+      const fresh = solvedMember({ ...args, loads: [["udl 1.5 D "]] }, readMemberUnits([[text, ""]]));
+      expect(kept.reactions).toEqual(fresh.reactions);
+    });
   });
 
   test("numbers and error values in the units cells are errors", () => {
