@@ -1,8 +1,9 @@
 /**
  * A lean stiffness-method solver for the per-row benchmark's floor: the general method the
- * product uses (two DOFs a node, deflection and rotation; any node may be restrained in
- * either, here `fixedAt` turns rotation restraint on; a banded system of the free DOFs solved by
- * Gaussian elimination without pivoting; element end forces K d - f), with none of the
+ * product uses (two DOFs a node, deflection and rotation, either restrained or free at any
+ * node: `fixedAt` restrains a rotation, `freeAt` frees a deflection; a banded system of the
+ * free DOFs solved by Gaussian elimination without pivoting; element end forces K d plus the
+ * fixed-end reactions, from all four DOFs), with none of the
  * product's guarantees: no validation, no mechanism sweep, no refinement residual, no
  * equilibrium check, no scales, no solution object, no pieces kept. It answers the yardstick's
  * question (the largest sagging moment of the yardstick's beams and where it is) so that the
@@ -35,23 +36,30 @@ function grow(nodes: number): void {
   ends = new Float64Array(4 * nodes);
 }
 
+/** The solved displacement of global DOF slot j (2 node + 0 deflection, + 1 rotation); 0 where restrained. */
+function displacement(j: number): number {
+  const dof = dofOf[j];
+  return dof < 0 ? 0 : rhs[dof];
+}
+
 /** Sagging moment at t in a span from its left end moment m (sagging +), left shear v, UDL w and point load p at a. */
 function momentAt(m: number, v: number, w: number, p: number, a: number, t: number): number {
   return m + v * t - (w * t * t) / 2 - (t > a ? p * (t - a) : 0);
 }
 
 /**
- * Largest sagging moment over the member and where it is; every node restrained in deflection,
- * rotation restrained where `fixedAt[node]` (none when omitted: the yardstick's pins).
+ * Largest sagging moment over the member and where it is. A node's deflection is restrained
+ * unless `freeAt[node]`, its rotation free unless `fixedAt[node]` (both omitted: every node a
+ * pin, the yardstick's beams). The caller keeps the member stable (no mechanism check).
  */
-export function leanMaxMoment(beam: YardstickBeam, out: { max: number; x: number }, fixedAt?: readonly boolean[]): void {
+export function leanMaxMoment(beam: YardstickBeam, out: { max: number; x: number }, fixedAt?: readonly boolean[], freeAt?: readonly boolean[]): void {
   const { spans, udl, point, at } = beam;
   const n = spans.length;
   grow(n + 1);
   // Number the free DOFs in node order (deflection 2i, rotation 2i + 1); restrained get -1.
   let size = 0;
   for (let i = 0; i <= n; i++) {
-    dofOf[2 * i] = -1;
+    dofOf[2 * i] = freeAt !== undefined && freeAt[i] ? size++ : -1;
     dofOf[2 * i + 1] = fixedAt !== undefined && fixedAt[i] ? -1 : size++;
   }
   const width = BAND + 1;
@@ -112,20 +120,20 @@ export function leanMaxMoment(beam: YardstickBeam, out: { max: number; x: number
     for (let j = 1; j < width && r + j < size; j++) s -= band[r * width + j] * rhs[r + j];
     rhs[r] = s / band[r * width];
   }
-  // End forces K d - f per span, then the span's largest sagging moment from its left end.
+  // End forces per span, then the span's largest sagging moment from its left end.
   let max = -Infinity;
   let xMax = 0;
   let x0 = 0;
   for (let e = 0; e < n; e++) {
     const l = spans[e];
     const k = 2 / (l * l * l);
-    const r1 = dofOf[2 * e + 1];
-    const r2 = dofOf[2 * e + 3];
-    const th1 = r1 < 0 ? 0 : rhs[r1];
-    const th2 = r2 < 0 ? 0 : rhs[r2];
-    // Deflections are restrained: the end shear and moment come from the rotations alone.
-    const shearLeft = 3 * l * k * (th1 + th2) + ends[4 * e];
-    const momentLeft = l * l * k * (2 * th1 + th2) + ends[4 * e + 1];
+    const d0 = displacement(2 * e);
+    const d1 = displacement(2 * e + 1);
+    const d2 = displacement(2 * e + 2);
+    const d3 = displacement(2 * e + 3);
+    // The first two rows of K d (the element matrix above) plus the fixed-end reactions.
+    const shearLeft = k * (6 * d0 + 3 * l * d1 - 6 * d2 + 3 * l * d3) + ends[4 * e];
+    const momentLeft = k * (3 * l * d0 + 2 * l * l * d1 - 3 * l * d2 + l * l * d3) + ends[4 * e + 1];
     const w = udl[e];
     const p = point[e];
     const a = at[e];

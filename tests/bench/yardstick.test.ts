@@ -72,6 +72,13 @@ describe("lean stiffness solver: the same answers by the stiffness method", () =
     expect(lean.x).toBeCloseTo(3, 12);
   });
 
+  test("two spans fixed at the outer ends, the middle node unsupported (its deflection free), UDL: one fixed-fixed span of 2L, largest sagging w (2L)^2 / 24 at the middle node (from memory)", () => {
+    const lean = { max: 0, x: 0 };
+    leanMaxMoment({ spans: [3, 3], udl: [2, 2], point: [0, 0], at: [1, 1] }, lean, [true, false, true], [false, true, false]);
+    expect(lean.max).toBeCloseTo((2 * 36) / 24, 12);
+    expect(lean.x).toBeCloseTo(3, 12);
+  });
+
   test("propped cantilever (fixed left, pin right), UDL: largest sagging 9 w L^2 / 128 at 5L/8 from the fixed end (from memory)", () => {
     const lean = { max: 0, x: 0 };
     leanMaxMoment({ spans: [4], udl: [3], point: [0], at: [1] }, lean, [true, false]);
