@@ -10,11 +10,16 @@ import { DIST_FUNCTIONS, reportTarget, type TargetResult } from "./measure";
 /** Issue 15's bundle target, KB. */
 const BUNDLE_KB = 70;
 
+/** The bytes of a built functions.js as it ships: without its source-map comment (the README's figure counts the same). */
+export function shippedBytes(code: string): number {
+  return Buffer.byteLength(code.replace(/\n\/\/# sourceMappingURL=.*\s*$/, ""), "utf8");
+}
+
 export function bundleTarget(file = DIST_FUNCTIONS): TargetResult {
   if (!fs.existsSync(file)) throw new Error(`${file} is missing: run npx webpack --mode production first`);
-  const code = fs.readFileSync(file, "utf8").replace(/\n\/\/# sourceMappingURL=.*\s*$/, "");
-  const kb = Buffer.byteLength(code, "utf8") / 1024;
-  return { target: "bundle", measured: `dist/functions.js ${kb.toFixed(1)} KB minified (${Buffer.byteLength(code, "utf8")} bytes)`, ratio: kb / BUNDLE_KB, ratioOf: `of ${BUNDLE_KB} KB`, limit: 1 };
+  const bytes = shippedBytes(fs.readFileSync(file, "utf8"));
+  const kb = bytes / 1024;
+  return { target: "bundle", measured: `dist/functions.js ${kb.toFixed(1)} KB minified (${bytes} bytes)`, ratio: kb / BUNDLE_KB, ratioOf: `of ${BUNDLE_KB} KB`, limit: 1 };
 }
 
 export function run(): void {
