@@ -5,7 +5,7 @@
  * tests/project/bundleSize.test.ts counts it for the README's figure.
  */
 import * as fs from "fs";
-import { DIST_FUNCTIONS, reportTarget, type TargetResult } from "./measure";
+import { DIST_FUNCTIONS, reportTarget, requireBuilt, type TargetResult } from "./measure";
 
 /** Issue 15's bundle target, KB. */
 const BUNDLE_KB = 70;
@@ -16,7 +16,7 @@ export function shippedBytes(code: string): number {
 }
 
 export function bundleTarget(file = DIST_FUNCTIONS): TargetResult {
-  if (!fs.existsSync(file)) throw new Error(`${file} is missing: run npx webpack --mode production first`);
+  requireBuilt(file);
   const bytes = shippedBytes(fs.readFileSync(file, "utf8"));
   const kb = bytes / 1024;
   return { target: "bundle", measured: `dist/functions.js ${kb.toFixed(1)} KB minified (${bytes} bytes)`, ratio: kb / BUNDLE_KB, ratioOf: `of ${BUNDLE_KB} KB`, limit: 1 };

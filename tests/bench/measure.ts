@@ -58,13 +58,18 @@ export const DIST_FUNCTIONS = path.join(__dirname, "..", "..", "dist", "function
 
 type Fn = (...args: any[]) => any;
 
+/** Refuses to measure a build that is not there, naming the command that makes it. */
+export function requireBuilt(file = DIST_FUNCTIONS): void {
+  if (!fs.existsSync(file)) throw new Error(`${file} is missing: run npx webpack --mode production first`);
+}
+
 /**
  * The worksheet functions of a production functions bundle, loaded with a stand-in
  * CustomFunctions that records what the bundle associates (the bundle is a plain script with
  * no module exports), so the code measured is the code users run.
  */
 export function loadBundle(file = DIST_FUNCTIONS): Record<string, Fn> {
-  if (!fs.existsSync(file)) throw new Error(`${file} is missing: run npx webpack --mode production first`);
+  requireBuilt(file);
   const functions: Record<string, Fn> = {};
   const host = globalThis as { CustomFunctions?: unknown };
   const previous = host.CustomFunctions;

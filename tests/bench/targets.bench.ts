@@ -23,7 +23,7 @@ import { spawnSync } from "child_process";
 import * as fs from "fs";
 import * as os from "os";
 import * as path from "path";
-import { DIST_FUNCTIONS, TARGETS_FILE_ENV, limitText, loadAverage, loadBundle, passes, ratioText, reportTarget, type TargetResult } from "./measure";
+import { DIST_FUNCTIONS, TARGETS_FILE_ENV, limitText, loadAverage, loadBundle, passes, ratioText, reportTarget, requireBuilt, type TargetResult } from "./measure";
 
 const ROOT = path.resolve(__dirname, "..", "..");
 const README = path.join(ROOT, "README.md");
@@ -56,7 +56,7 @@ const PARTS: Record<string, () => void | Promise<void>> = {
 
 /** Refuses a bundle older than a source it is built from (it would measure code that is gone). */
 function checkBundle(): void {
-  if (!fs.existsSync(DIST_FUNCTIONS)) throw new Error(`${DIST_FUNCTIONS} is missing: run npx webpack --mode production first`);
+  requireBuilt();
   const built = fs.statSync(DIST_FUNCTIONS).mtimeMs;
   const newer: string[] = [];
   const walk = (dir: string): void => {
