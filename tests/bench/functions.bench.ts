@@ -20,7 +20,7 @@
  * study never hits the member cache.
  */
 import { performance } from "perf_hooks";
-import { cpuMs, loadAverage, loadBundle, median } from "./measure";
+import { cpuMs, loadAverage, loadBundle, median, rangeText } from "./measure";
 
 type Fn = (...args: unknown[]) => unknown[][];
 
@@ -164,7 +164,7 @@ function sweep(fx: Record<string, Fn>): void {
   const ratio = median(ratios);
   console.log(
     `  sweep: ${SWEEP} separate MOMENT calls ${median(sweeps).toFixed(3)} ms wall, one ${SWEEP}-point DIAGRAM ${median(diagrams).toFixed(3)} ms wall ` +
-      `(medians of ${WINDOWS} interleaved windows of ${WINDOW}; windows' ratios ${Math.min(...ratios).toFixed(2)}-${Math.max(...ratios).toFixed(2)}); ` +
+      `(medians of ${WINDOWS} interleaved windows of ${WINDOW}; windows' ratios ${rangeText(ratios, 2)}); ` +
       `ratio ${ratio.toFixed(2)} (median of the windows') - ${ratio <= 3 ? "within" : "OVER"} the 3x target`,
   );
   console.log(`  the same sweep with EI and a units label ("${UNITS}"): ${median(labelled).toFixed(3)} ms wall, ${(median(labelled) / median(sweeps)).toFixed(2)} x the sweep without (same windows)`);

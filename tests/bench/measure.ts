@@ -42,6 +42,12 @@ export function median(values: number[]): number {
   return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
 }
 
+/** The lowest and highest of a list, "13.3-22.1" (`digits` after the point). */
+export function rangeText(values: number[], digits = 1): string {
+  const sorted = values.slice().sort((a, b) => a - b);
+  return `${sorted[0].toFixed(digits)}-${sorted[sorted.length - 1].toFixed(digits)}`;
+}
+
 /** CPU time of this process in ms (user + system): on a loaded machine it counts only the time this process ran. */
 export function cpuMs(): number {
   const u = process.cpuUsage();

@@ -47,7 +47,7 @@ import { memberArgs } from "../../src/sheet/worksheet";
 import { yardstickMaxMoment, type YardstickBeam } from "./yardstick";
 import { leanMaxMoment } from "./leanStiffness";
 import { scanDigits } from "./digitScan";
-import { cpuMs, loadAverage, loadBundle, median, reportTarget } from "./measure";
+import { cpuMs, loadAverage, loadBundle, median, rangeText, reportTarget } from "./measure";
 
 const ROWS = 20000;
 const PASSES = 3;
@@ -314,13 +314,7 @@ async function growth(functions: Record<string, Fn>): Promise<void> {
   const share = (t: { wall: number; gc: number }) => `gc ${((100 * t.gc) / t.wall).toFixed(0)}% of wall`;
   console.log(`growth (medians of ${GROWTH_ROUNDS} interleaved rounds): ${MAX_SPANS / GROWTH_FACTOR} spans ${small.ms.toFixed(1)} ms CPU (${small.wall.toFixed(1)} wall, ${share(small)}), ${MAX_SPANS} spans (the spans limit) ${large.ms.toFixed(1)} ms CPU (${large.wall.toFixed(1)} wall, ${share(large)})`);
   console.log(`  ratio ${ratio.toFixed(1)}, median of the rounds' (rounds: ${ratios}; ratio of the medians ${(large.ms / small.ms).toFixed(1)}) (target: at most ${GROWTH_LIMIT}) ${ratio <= GROWTH_LIMIT ? "OK" : "OVER TARGET"}`);
-  reportTarget({ target: "growth", measured: `${MAX_SPANS} spans ${large.ms.toFixed(2)} ms vs ${MAX_SPANS / GROWTH_FACTOR} spans ${small.ms.toFixed(3)} ms CPU, medians of ${GROWTH_ROUNDS} rounds (rounds' ratios ${roundRange(roundRatios)})`, ratio, ratioOf: `for ${GROWTH_FACTOR}x the spans (median of rounds)`, limit: GROWTH_LIMIT });
-}
-
-/** The lowest and highest of the rounds' ratios, "13.3-22.1". */
-function roundRange(ratios: number[]): string {
-  const sorted = ratios.slice().sort((a, b) => a - b);
-  return `${sorted[0].toFixed(1)}-${sorted[sorted.length - 1].toFixed(1)}`;
+  reportTarget({ target: "growth", measured: `${MAX_SPANS} spans ${large.ms.toFixed(2)} ms vs ${MAX_SPANS / GROWTH_FACTOR} spans ${small.ms.toFixed(3)} ms CPU, medians of ${GROWTH_ROUNDS} rounds (rounds' ratios ${rangeText(roundRatios)})`, ratio, ratioOf: `for ${GROWTH_FACTOR}x the spans (median of rounds)`, limit: GROWTH_LIMIT });
 }
 
 /** Rounds of the growth measurement. */
