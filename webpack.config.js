@@ -121,7 +121,9 @@ function addinConfig(env, argv) {
     name: "addin",
     // es2016.ts first: the few newer built-ins the shared code calls, where the runtime lacks them.
     entry: { functions: ["./functions/es2016.ts", "./functions/functions.ts"] },
-    output: { ...base.output, filename: "[name].js" },
+    // Written on every build even when unchanged (webpack skips identical files by default), so
+    // a build is newer than every source it read: the targets bench refuses an older bundle.
+    output: { ...base.output, filename: "[name].js", compareBeforeEmit: false },
     plugins: [
       new CustomFunctionsMetadataPlugin({ input: "./functions/functions.ts", output: "functions.json" }),
       new HtmlWebpackPlugin({
